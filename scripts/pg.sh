@@ -1,0 +1,32 @@
+#!/usr/bin/env bash
+# scripts/pg.sh up DATADIR PORT   -> PostgreSQL on 127.0.0.1:PORT (initialised on first use); prints its bin dir
+# scripts/pg.sh down DATADIR      -> fast, clean shutdown
+# Installs Debian's postgresql when its server binaries are missing. initdb/pg_ctl refuse to run
+# as root, so as root they run as the postgres user that the Debian package creates.
+set -euo pipefail
+pgbin() { ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -n 1; }
+BIN=$(pgbin)
+if [ -z "$BIN" ] || [ ! -x "$BIN/pg_ctl" ]; then
+  echo "[paneray] installing Debian's postgresql…" >&2
+  export DEBIAN_FRONTEND=noninteractive
+  apt-get update -qq >&2 && apt-get install -y -qq postgresql >&2
+  BIN=$(pgbin)
+fi
+AS=(); if [ "$(id -u)" = 0 ]; then AS=(runuser -u postgres --); fi
+DATA=${2:?data dir}
+case "$1" in
+  up)
+    PORT=${3:?port}
+    mkdir -p "$DATA"
+    if [ "$(id -u)" = 0 ]; then chown postgres: "$DATA"; chmod 700 "$DATA"; fi
+    "${AS[@]}" test -w "$DATA" || { echo "pg.sh: the postgres user cannot write $DATA (parent folders must be traversable)" >&2; exit 1; }
+    [ -f "$DATA/PG_VERSION" ] || "${AS[@]}" "$BIN/initdb" -D "$DATA" -U postgres -A trust -E UTF8 --locale=C.UTF-8 >/dev/null
+    "${AS[@]}" mkdir -p "$DATA/sock"
+    # A previous run killed hard leaves a stale pid file; pg_ctl handles that itself.
+    "${AS[@]}" "$BIN/pg_ctl" -D "$DATA" -l "$DATA/server.log" -w -t 60 \
+      -o "-h 127.0.0.1 -p $PORT -k $DATA/sock -c fsync=${PG_FSYNC:-on}" start >/dev/null
+    echo "$BIN" ;;
+  down)
+    if [ -f "$DATA/postmaster.pid" ]; then "${AS[@]}" "$BIN/pg_ctl" -D "$DATA" -m fast -w stop >/dev/null || true; fi ;;
+  *) echo "usage: pg.sh up DATADIR PORT | pg.sh down DATADIR" >&2; exit 2 ;;
+esac

@@ -1,0 +1,10 @@
+// Seeds the demo scenario (src/lib/demo-scenario.ts). Idempotent: rows that exist are left alone.
+import { seedDemo } from "../src/lib/server/services/seed";
+import { pool } from "../src/lib/server/db/client";
+
+try {
+  const created = await seedDemo();
+  console.error(created.length ? `[paneray] demo seeded: ${created.join(", ")}` : "[paneray] demo data already present");
+} finally {
+  await pool.end();
+}

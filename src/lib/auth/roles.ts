@@ -1,0 +1,94 @@
+/**
+ * Paneray's organisation roles and what each may do.
+ *
+ * This module is pure (no I/O) so the same rules run on the server, where they are
+ * enforced, and in the browser, where they only decide what to show.
+ *
+ * - owner       manages the organisation and its members; full project rights.
+ * - consultant  creates and edits projects, glazing and façade options; shares and exports.
+ * - architect   reads every project of the organisation, comments, approves or rejects options.
+ * - client      reads the projects shared with them and receives exports.
+ */
+import { createAccessControl } from "better-auth/plugins/access";
+import { defaultStatements, ownerAc } from "better-auth/plugins/organization/access";
+
+export const statements = {
+  ...defaultStatements,
+  /** readAll: every project of the organisation; readShared: only projects shared with the member. */
+  project: ["create", "readAll", "readShared", "update", "delete", "share"],
+  glazing: ["create", "update", "delete"],
+  option: ["assign", "review"],
+  comment: ["create"],
+  export: ["create", "receive"],
+} as const;
+
+export const ac = createAccessControl(statements);
+
+const projectWork = {
+  project: ["create", "readAll", "readShared", "update", "delete", "share"],
+  glazing: ["create", "update", "delete"],
+  option: ["assign"],
+  comment: ["create"],
+  export: ["create", "receive"],
+} as const;
+
+export const owner = ac.newRole({
+  ...ownerAc.statements,
+  ...projectWork,
+  option: ["assign", "review"],
+});
+
+export const consultant = ac.newRole({ ...projectWork });
+
+export const architect = ac.newRole({
+  project: ["readAll", "readShared"],
+  option: ["review"],
+  comment: ["create"],
+  export: ["receive"],
+});
+
+export const client = ac.newRole({
+  project: ["readShared"],
+  export: ["receive"],
+});
+
+export const roles = { owner, consultant, architect, client } as const;
+
+export type RoleName = keyof typeof roles;
+export const ROLE_NAMES = Object.keys(roles) as RoleName[];
+
+/** Roles an owner may give in an invitation or a role change ("owner" included: an organisation may have several). */
+export const ASSIGNABLE_ROLES: readonly RoleName[] = ["owner", "consultant", "architect", "client"];
+
+export const ROLE_LABELS: Record<RoleName, string> = {
+  owner: "Owner",
+  consultant: "Consultant",
+  architect: "Architect",
+  client: "Client",
+};
+
+export const ROLE_SUMMARIES: Record<RoleName, string> = {
+  owner: "Manages the organisation and its members; full project rights.",
+  consultant: "Creates and edits projects, glazing and façade options.",
+  architect: "Reads all projects, comments, approves or rejects options.",
+  client: "Reads the projects shared with them and receives exports.",
+};
+
+export type Permission = { [K in keyof typeof statements]?: readonly (typeof statements)[K][number][] };
+
+export function isRoleName(value: unknown): value is RoleName {
+  return typeof value === "string" && (ROLE_NAMES as string[]).includes(value);
+}
+
+/**
+ * Whether a member whose role string is `role` holds every action in `permission`.
+ * better-auth stores several roles comma-separated; any of them granting is enough.
+ */
+export function roleCan(role: string | null | undefined, permission: Permission): boolean {
+  if (!role) return false;
+  return role
+    .split(",")
+    .map((r) => r.trim())
+    .filter(isRoleName)
+    .some((r) => roles[r].authorize(permission as never).success);
+}

@@ -1,0 +1,27 @@
+import { z } from "zod";
+import { email, password, rowId, text } from "./common";
+import { ASSIGNABLE_ROLES } from "../auth/roles";
+
+export const SignUpRequest = z
+  .object({
+    name: text("name", 120),
+    email,
+    password,
+    /** Required unless the sign-up accepts an invitation. */
+    organizationName: text("organizationName", 120).optional(),
+    invitationId: rowId.optional(),
+  })
+  .refine((v) => v.organizationName || v.invitationId, {
+    path: ["organizationName"],
+    message: "organizationName is required (the firm you work for)",
+  });
+export type SignUpRequest = z.infer<typeof SignUpRequest>;
+
+export const SignInRequest = z.object({ email, password: z.string().min(1, "password is required").max(128) });
+
+export const role = z.enum(ASSIGNABLE_ROLES as [string, ...string[]], {
+  error: `role must be one of ${ASSIGNABLE_ROLES.join(", ")}`,
+});
+
+export const InvitationRequest = z.object({ email, role });
+export const MemberRoleRequest = z.object({ role });

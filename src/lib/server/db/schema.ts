@@ -1,0 +1,2 @@
+export * from "./auth-schema";
+export * from "./app-schema";

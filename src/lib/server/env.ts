@@ -1,0 +1,33 @@
+/**
+ * Server configuration, read from the process environment at run time and checked once.
+ * (Read here rather than through astro:env so that scripts run outside Astro, such as the
+ * demo seed, share exactly the same configuration.)
+ */
+import { z } from "zod";
+
+const Env = z.object({
+  DATABASE_URL: z.string().min(1, "DATABASE_URL is required (postgres://…)"),
+  BETTER_AUTH_URL: z.url().default("http://127.0.0.1:4321"),
+  BETTER_AUTH_SECRET: z.string().min(32).optional(),
+  /** Extra browser origins allowed to call the auth endpoints (comma-separated). */
+  TRUSTED_ORIGINS: z.string().default(""),
+  /** smtp://host:port — where outgoing mail goes. Unset: mail is logged, not sent. */
+  SMTP_URL: z.string().optional(),
+  MAIL_FROM: z.string().default("Paneray <no-reply@paneray.invalid>"),
+});
+
+export type ServerEnv = z.infer<typeof Env>;
+
+let cached: ServerEnv | undefined;
+
+export function serverEnv(): ServerEnv {
+  if (!cached) {
+    const parsed = Env.safeParse(process.env);
+    if (!parsed.success) {
+      const msg = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+      throw new Error(`Paneray configuration error: ${msg}`);
+    }
+    cached = parsed.data;
+  }
+  return cached;
+}

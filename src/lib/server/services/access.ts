@@ -1,0 +1,83 @@
+/**
+ * Who may do what, decided on the server from the member's role in the organisation that
+ * owns the resource. Pages and endpoints call these; the UI only mirrors them.
+ */
+import { and, asc, eq } from "drizzle-orm";
+import { db } from "../db/client";
+import { member, organization, project, projectShare } from "../db/schema";
+import { HttpError } from "../http";
+import { roleCan, type Permission, isRoleName, type RoleName } from "../../auth/roles";
+
+export interface Membership {
+  memberId: string;
+  organizationId: string;
+  organizationName: string;
+  organizationSlug: string;
+  role: RoleName;
+}
+
+/** The user's organisations with their role, oldest membership first. */
+export async function membershipsOf(userId: string): Promise<Membership[]> {
+  const rows = await db
+    .select({
+      memberId: member.id,
+      organizationId: member.organizationId,
+      organizationName: organization.name,
+      organizationSlug: organization.slug,
+      role: member.role,
+    })
+    .from(member)
+    .innerJoin(organization, eq(organization.id, member.organizationId))
+    .where(eq(member.userId, userId))
+    .orderBy(asc(member.createdAt));
+  return rows.filter((r): r is Membership => isRoleName(r.role));
+}
+
+export async function membershipIn(userId: string, organizationId: string): Promise<Membership | null> {
+  const all = await membershipsOf(userId);
+  return all.find((m) => m.organizationId === organizationId) ?? null;
+}
+
+/**
+ * The caller's membership of an organisation, provided the role grants `permission`.
+ * Not a member: 404 (the organisation's existence is not revealed). Member without the right: 403.
+ */
+export async function requireOrgPermission(userId: string, organizationId: string, permission: Permission, action: string): Promise<Membership> {
+  const m = await membershipIn(userId, organizationId);
+  if (!m) throw new HttpError(404, "No such organisation, or you are not a member of it");
+  if (!roleCan(m.role, permission)) throw new HttpError(403, `Your role (${m.role}) does not allow you to ${action}`);
+  return m;
+}
+
+export type ProjectRow = typeof project.$inferSelect;
+
+/** Whether the member sees the project at all (all of the organisation's, or those shared with them). */
+export async function canSeeProject(m: Membership, p: ProjectRow): Promise<boolean> {
+  if (m.organizationId !== p.organizationId) return false;
+  if (roleCan(m.role, { project: ["readAll"] })) return true;
+  if (!roleCan(m.role, { project: ["readShared"] })) return false;
+  const share = await db
+    .select({ p: projectShare.projectId })
+    .from(projectShare)
+    .where(and(eq(projectShare.projectId, p.id), eq(projectShare.memberId, m.memberId)));
+  return share.length > 0;
+}
+
+/**
+ * Loads a project for the user: 404 when it does not exist or is not visible to them,
+ * 403 when visible but the role lacks `permission`.
+ */
+export async function requireProject(
+  userId: string,
+  projectId: string,
+  permission?: Permission,
+  action = "change this project",
+): Promise<{ project: ProjectRow; membership: Membership }> {
+  const p = (await db.select().from(project).where(eq(project.id, projectId)))[0];
+  const notFound = new HttpError(404, "No such project, or it is not shared with you");
+  if (!p) throw notFound;
+  const m = await membershipIn(userId, p.organizationId);
+  if (!m || !(await canSeeProject(m, p))) throw notFound;
+  if (permission && !roleCan(m.role, permission)) throw new HttpError(403, `Your role (${m.role}) does not allow you to ${action}`);
+  return { project: p, membership: m };
+}

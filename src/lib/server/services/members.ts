@@ -1,0 +1,163 @@
+import { and, asc, eq, gt, ne } from "drizzle-orm";
+import { auth } from "../auth";
+import { db } from "../db/client";
+import { invitation, member, organization, user } from "../db/schema";
+import { HttpError } from "../http";
+import { isRoleName, type RoleName } from "../../auth/roles";
+
+export interface MemberView {
+  memberId: string;
+  userId: string;
+  name: string;
+  email: string;
+  role: string;
+  joinedAt: Date;
+}
+
+export interface InvitationView {
+  id: string;
+  email: string;
+  role: string | null;
+  status: string;
+  expiresAt: Date;
+  inviterName: string | null;
+}
+
+export async function membersOf(organizationId: string): Promise<MemberView[]> {
+  return db
+    .select({ memberId: member.id, userId: user.id, name: user.name, email: user.email, role: member.role, joinedAt: member.createdAt })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(eq(member.organizationId, organizationId))
+    .orderBy(asc(member.createdAt));
+}
+
+export async function pendingInvitationsOf(organizationId: string): Promise<InvitationView[]> {
+  return db
+    .select({
+      id: invitation.id,
+      email: invitation.email,
+      role: invitation.role,
+      status: invitation.status,
+      expiresAt: invitation.expiresAt,
+      inviterName: user.name,
+    })
+    .from(invitation)
+    .leftJoin(user, eq(user.id, invitation.inviterId))
+    .where(and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())))
+    .orderBy(asc(invitation.createdAt));
+}
+
+/** Sends an invitation e-mail (through better-auth, which records it and calls our mailer). */
+export async function inviteMember(headers: Headers, organizationId: string, email: string, role: RoleName) {
+  const already = await db
+    .select({ id: member.id })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(and(eq(member.organizationId, organizationId), eq(user.email, email)));
+  if (already.length) throw new HttpError(409, `${email} is already a member of this organisation`, { errors: [{ field: "email", message: "already a member" }] });
+  return auth.api.createInvitation({ headers, body: { email, role, organizationId, resend: true } });
+}
+
+export async function cancelInvitation(organizationId: string, invitationId: string): Promise<void> {
+  const res = await db
+    .update(invitation)
+    .set({ status: "canceled" })
+    .where(and(eq(invitation.id, invitationId), eq(invitation.organizationId, organizationId), eq(invitation.status, "pending")))
+    .returning({ id: invitation.id });
+  if (!res.length) throw new HttpError(404, "No such pending invitation");
+}
+
+async function ownerCount(organizationId: string, exceptMemberId?: string): Promise<number> {
+  const rows = await db
+    .select({ id: member.id })
+    .from(member)
+    .where(
+      and(
+        eq(member.organizationId, organizationId),
+        eq(member.role, "owner"),
+        exceptMemberId ? ne(member.id, exceptMemberId) : undefined,
+      ),
+    );
+  return rows.length;
+}
+
+async function memberOf(organizationId: string, memberId: string) {
+  const m = (await db.select().from(member).where(and(eq(member.id, memberId), eq(member.organizationId, organizationId))))[0];
+  if (!m) throw new HttpError(404, "No such member in this organisation");
+  return m;
+}
+
+/** Changes a member's role; an organisation always keeps at least one owner. */
+export async function changeRole(organizationId: string, memberId: string, role: RoleName): Promise<void> {
+  const m = await memberOf(organizationId, memberId);
+  if (m.role === "owner" && role !== "owner" && (await ownerCount(organizationId, memberId)) === 0) {
+    throw new HttpError(409, "An organisation needs at least one owner: make someone else owner first", { errors: [{ field: "role", message: "last owner" }] });
+  }
+  await db.update(member).set({ role }).where(eq(member.id, memberId));
+}
+
+export async function removeMember(organizationId: string, memberId: string): Promise<void> {
+  const m = await memberOf(organizationId, memberId);
+  if (m.role === "owner" && (await ownerCount(organizationId, memberId)) === 0) {
+    throw new HttpError(409, "The last owner cannot be removed");
+  }
+  await db.delete(member).where(eq(member.id, memberId));
+}
+
+export interface InvitationSummary {
+  id: string;
+  email: string;
+  role: RoleName;
+  organizationId: string;
+  organizationName: string;
+  inviterName: string | null;
+  status: "pending" | "accepted" | "expired" | "canceled" | "rejected";
+  expiresAt: Date;
+}
+
+/** What an invitation link shows before sign-in (the id is an unguessable token). */
+export async function invitationSummary(invitationId: string): Promise<InvitationSummary | null> {
+  const row = (
+    await db
+      .select({
+        id: invitation.id,
+        email: invitation.email,
+        role: invitation.role,
+        status: invitation.status,
+        expiresAt: invitation.expiresAt,
+        organizationId: organization.id,
+        organizationName: organization.name,
+        inviterName: user.name,
+      })
+      .from(invitation)
+      .innerJoin(organization, eq(organization.id, invitation.organizationId))
+      .leftJoin(user, eq(user.id, invitation.inviterId))
+      .where(eq(invitation.id, invitationId))
+  )[0];
+  if (!row) return null;
+  const role = isRoleName(row.role) ? row.role : "client";
+  const status =
+    row.status === "pending" && row.expiresAt < new Date() ? "expired" : (row.status as InvitationSummary["status"]);
+  return { ...row, role, status };
+}
+
+/**
+ * Makes the user a member with the invited role. The invitation must be pending, unexpired
+ * and addressed to the user's e-mail.
+ */
+export async function acceptInvitation(userId: string, userEmail: string, invitationId: string): Promise<InvitationSummary> {
+  const inv = await invitationSummary(invitationId);
+  if (!inv) throw new HttpError(404, "No such invitation");
+  if (inv.status !== "pending") throw new HttpError(409, `This invitation is ${inv.status}; ask the organisation's owner for a new one`);
+  if (inv.email.toLowerCase() !== userEmail.toLowerCase()) {
+    throw new HttpError(403, `This invitation is addressed to ${inv.email}; sign in with that address to accept it`);
+  }
+  await db.transaction(async (tx) => {
+    const existing = await tx.select({ id: member.id }).from(member).where(and(eq(member.userId, userId), eq(member.organizationId, inv.organizationId)));
+    if (existing.length) await tx.update(member).set({ role: inv.role }).where(eq(member.id, existing[0]!.id));
+    else await tx.insert(member).values({ id: crypto.randomUUID(), userId, organizationId: inv.organizationId, role: inv.role, createdAt: new Date() });
+    await tx.update(invitation).set({ status: "accepted" }).where(eq(invitation.id, invitationId));
+  });
+  return { ...inv, status: "accepted" };
+}

@@ -1,0 +1,40 @@
+import { expect, type Page } from "@playwright/test";
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { simpleParser, type ParsedMail } from "mailparser";
+
+export { DEMO_PASSWORD, demoUser, DEMO_PROJECTS, DEMO_ORGANIZATION } from "../../src/lib/demo-scenario";
+
+export async function signIn(page: Page, email: string, password: string) {
+  await page.goto("/signin");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page).toHaveURL(/\/dashboard$/);
+}
+
+let n = 0;
+export const uniqueEmail = (tag: string) => `${tag}-${Date.now().toString(36)}-${++n}@e2e.example`;
+
+/**
+ * Waits for a message to `to` in the SMTP fake's folder (MAIL_DIR) and returns it parsed,
+ * with the first link of its text part.
+ */
+export async function waitForMail(to: string, timeoutMs = 10_000): Promise<{ mail: ParsedMail; link: string }> {
+  const dir = process.env.MAIL_DIR;
+  if (!dir) throw new Error("MAIL_DIR is not set: run the tests through npm test");
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    for (const f of readdirSync(dir).filter((x) => x.endsWith(".eml")).sort().reverse()) {
+      const mail = await simpleParser(readFileSync(join(dir, f)));
+      const rcpt = [mail.to].flat().flatMap((a) => a?.value ?? []).map((v) => v.address?.toLowerCase());
+      if (rcpt.includes(to.toLowerCase())) {
+        const link = /https?:\/\/\S+/.exec(mail.text ?? "")?.[0];
+        if (!link) throw new Error(`mail to ${to} has no link`);
+        return { mail, link };
+      }
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
+}
