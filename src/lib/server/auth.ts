@@ -16,6 +16,9 @@ const env = serverEnv();
 
 export const INVITATION_TTL_SECONDS = 7 * 24 * 3600;
 
+/** Header through which the auth route hands the socket's client address to better-auth. */
+export const CLIENT_IP_HEADER = "x-paneray-client-ip";
+
 export const auth = betterAuth({
   appName: "Paneray",
   baseURL: env.BETTER_AUTH_URL,
@@ -24,6 +27,7 @@ export const auth = betterAuth({
   database: drizzleAdapter(db, { provider: "pg", schema }),
   telemetry: { enabled: false },
   rateLimit: { enabled: process.env.AUTH_RATE_LIMIT !== "off" },
+  advanced: { ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] } },
   emailAndPassword: {
     enabled: true,
     minPasswordLength: 8,

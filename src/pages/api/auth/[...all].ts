@@ -1,5 +1,22 @@
 import type { APIRoute } from "astro";
-import { auth } from "../../../lib/server/auth";
+import { auth, CLIENT_IP_HEADER } from "../../../lib/server/auth";
 
 export const prerender = false;
-export const ALL: APIRoute = ({ request }) => auth.handler(request);
+
+/**
+ * better-auth's own routes. The socket's address is passed on in a header of our own (any value the
+ * client sent under that name is replaced), so that rate limits apply per client, not to everyone at once.
+ */
+export const ALL: APIRoute = ({ request, clientAddress }) => {
+  const headers = new Headers(request.headers);
+  let ip = "";
+  try {
+    ip = clientAddress;
+  } catch {
+    /* no socket address (e.g. prerendering) */
+  }
+  if (ip) headers.set(CLIENT_IP_HEADER, ip);
+  else headers.delete(CLIENT_IP_HEADER);
+  const forwarded = new Request(request, { headers });
+  return auth.handler(forwarded);
+};
