@@ -1,0 +1,179 @@
+/**
+ * Request and response of POST /api/v1/calc/glazing. The same schema validates the make-up form.
+ * Layers are listed from outdoors inwards and alternate pane, gap, pane, …; 1 to 6 panes.
+ */
+import { z } from "zod";
+
+export const MAX_PANES = 6;
+
+const num = (label: string, min: number, max: number, opts: { minExclusive?: boolean } = {}) =>
+  z
+    .number({ error: `${label} must be a number` })
+    .refine(Number.isFinite, `${label} must be a finite number`)
+    .refine(
+      (v) => (opts.minExclusive ? v > min : v >= min) && v <= max,
+      `${label} must be ${opts.minExclusive ? "greater than" : "at least"} ${min} and at most ${max}`,
+    );
+
+const fraction = (label: string) => num(label, 0, 1);
+
+/** Corrected (hemispherical) emissivity of a glass surface; uncoated soda-lime glass is 0.837 (EN 673). */
+const emissivity = (label: string) => num(label, 0.01, 1).optional();
+
+export const DEFAULT_EMISSIVITY = 0.837;
+
+export const MeasuredValues = z
+  .object({
+    solarTransmittance: fraction("solarTransmittance"),
+    solarReflectanceFront: fraction("solarReflectanceFront"),
+    solarReflectanceBack: fraction("solarReflectanceBack"),
+    visibleTransmittance: fraction("visibleTransmittance").optional(),
+    visibleReflectanceFront: fraction("visibleReflectanceFront").optional(),
+    visibleReflectanceBack: fraction("visibleReflectanceBack").optional(),
+  })
+  .superRefine((m, ctx) => {
+    const sum = (t: number, r: number) => t + r > 1 + 1e-9;
+    if (sum(m.solarTransmittance, m.solarReflectanceFront))
+      ctx.addIssue({ code: "custom", path: ["solarReflectanceFront"], message: "solarTransmittance + solarReflectanceFront must not exceed 1" });
+    if (sum(m.solarTransmittance, m.solarReflectanceBack))
+      ctx.addIssue({ code: "custom", path: ["solarReflectanceBack"], message: "solarTransmittance + solarReflectanceBack must not exceed 1" });
+    if (m.solarTransmittance <= 0) ctx.addIssue({ code: "custom", path: ["solarTransmittance"], message: "solarTransmittance must be greater than 0" });
+    const vis = [m.visibleTransmittance, m.visibleReflectanceFront, m.visibleReflectanceBack];
+    const given = vis.filter((v) => v !== undefined).length;
+    if (given !== 0 && given !== 3)
+      ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "give all three visible values (transmittance, front and back reflectance) or none" });
+    if (given === 3) {
+      if (m.visibleTransmittance! <= 0) ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "visibleTransmittance must be greater than 0" });
+      if (sum(m.visibleTransmittance!, m.visibleReflectanceFront!))
+        ctx.addIssue({ code: "custom", path: ["visibleReflectanceFront"], message: "visibleTransmittance + visibleReflectanceFront must not exceed 1" });
+      if (sum(m.visibleTransmittance!, m.visibleReflectanceBack!))
+        ctx.addIssue({ code: "custom", path: ["visibleReflectanceBack"], message: "visibleTransmittance + visibleReflectanceBack must not exceed 1" });
+    }
+  });
+export type MeasuredValues = z.infer<typeof MeasuredValues>;
+
+const paneCommon = {
+  kind: z.literal("pane"),
+  thicknessMm: num("thicknessMm", 0.5, 60),
+  emissivityFront: emissivity("emissivityFront"),
+  emissivityBack: emissivity("emissivityBack"),
+};
+
+export const PhysicalPane = z.object({
+  ...paneCommon,
+  refractiveIndex: num("refractiveIndex", 1, 4, { minExclusive: true }),
+  absorptionPerMm: num("absorptionPerMm", 0, 20),
+});
+
+export const MeasuredPane = z.object({ ...paneCommon, measured: MeasuredValues });
+
+/**
+ * A pane is physical (refractiveIndex + absorptionPerMm) or measured (`measured` values); the
+ * presence of `measured` decides which, so that errors name the missing field. Unknown extra keys
+ * (e.g. a name) are ignored.
+ */
+export const Pane = z.unknown().transform((raw, ctx): z.infer<typeof PhysicalPane> | z.infer<typeof MeasuredPane> => {
+  const isMeasured = typeof raw === "object" && raw !== null && "measured" in raw;
+  if (isMeasured && ("refractiveIndex" in raw || "absorptionPerMm" in raw)) {
+    ctx.addIssue({ code: "custom", path: ["measured"], message: "give either measured values or refractiveIndex and absorptionPerMm, not both" });
+    return z.NEVER;
+  }
+  const parsed = (isMeasured ? MeasuredPane : PhysicalPane).safeParse(raw);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) ctx.addIssue(issue as never);
+    return z.NEVER;
+  }
+  return parsed.data;
+});
+export type Pane = z.output<typeof Pane>;
+
+export const GAS_NAMES = ["air", "argon", "krypton"] as const;
+export type GasName = (typeof GAS_NAMES)[number];
+
+export const GasMix = z
+  .object({ air: fraction("air").optional(), argon: fraction("argon").optional(), krypton: fraction("krypton").optional() })
+  .strict()
+  .refine((g) => Math.abs((g.air ?? 0) + (g.argon ?? 0) + (g.krypton ?? 0) - 1) <= 1e-3, "the gas fractions must add up to 1");
+
+export const Gas = z.union([z.enum(GAS_NAMES), GasMix], { error: `gas must be "air", "argon", "krypton" or fractions such as { "argon": 0.9, "air": 0.1 }` });
+export type Gas = z.infer<typeof Gas>;
+
+export const Gap = z.object({
+  kind: z.literal("gap"),
+  widthMm: num("widthMm", 1, 100),
+  gas: Gas,
+});
+export type Gap = z.infer<typeof Gap>;
+
+const DEFAULT_ANGLES = Array.from({ length: 10 }, (_, i) => i * 10);
+
+export const GlazingRequest = z
+  .object({
+    layers: z.array(z.unknown()).min(1, "layers must contain at least one pane").max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
+    anglesDeg: z
+      .array(num("anglesDeg", 0, 90))
+      .min(1, "anglesDeg must not be empty")
+      .max(181, "at most 181 angles")
+      .optional()
+      .transform((a) => a ?? DEFAULT_ANGLES),
+    /** "per-polarization" (default): the stack is solved for s and p separately, then averaged. */
+    polarization: z.enum(["per-polarization", "averaged"]).optional().default("per-polarization"),
+  })
+  .transform((req, ctx) => {
+    const layers: (Pane | Gap)[] = [];
+    req.layers.forEach((raw, i) => {
+      const expect = i % 2 === 0 ? "pane" : "gap";
+      const kind = typeof raw === "object" && raw && "kind" in raw ? (raw as { kind: unknown }).kind : undefined;
+      if (kind !== expect) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["layers", i, "kind"],
+          message:
+            i === 0
+              ? "the first layer (outdoors) must be a pane"
+              : `layer ${i} must be a ${expect}: layers alternate pane, gap, pane, … and start and end with a pane`,
+        });
+        return;
+      }
+      const parsed = (expect === "pane" ? Pane : Gap).safeParse(raw);
+      if (!parsed.success) {
+        for (const issue of parsed.error.issues) ctx.addIssue({ ...issue, path: ["layers", i, ...issue.path] } as never);
+        return;
+      }
+      layers.push(parsed.data);
+    });
+    if (req.layers.length % 2 === 0) {
+      ctx.addIssue({ code: "custom", path: ["layers", req.layers.length - 1], message: "the last layer (indoors) must be a pane" });
+    }
+    return { ...req, layers };
+  });
+export type GlazingRequest = z.output<typeof GlazingRequest>;
+export type GlazingRequestInput = z.input<typeof GlazingRequest>;
+
+export interface GlazingAngleRow {
+  angleDeg: number;
+  solarTransmittance: number;
+  solarReflectanceFront: number;
+  solarReflectanceBack: number;
+  /** One per pane, outdoor first, of solar radiation incident from outdoors. */
+  layerAbsorptance: number[];
+  gValue: number;
+  visibleTransmittance: number | null;
+  visibleReflectanceFront: number | null;
+}
+
+export interface GlazingResponse {
+  angles: GlazingAngleRow[];
+  hemispherical: {
+    solarTransmittance: number;
+    solarReflectanceFront: number;
+    solarReflectanceBack: number;
+    layerAbsorptance: number[];
+    gValue: number;
+    visibleTransmittance: number | null;
+  };
+  /** Centre-of-glass U-value, W/(m²K), unrounded. */
+  uValue: number;
+  warnings: string[];
+  [extra: string]: unknown;
+}
