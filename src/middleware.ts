@@ -3,7 +3,7 @@ import { auth } from "./lib/server/auth";
 import { problem } from "./lib/server/http";
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
-const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
+const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
 
 /** API routes open to anonymous callers. */
 const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, /^\/api\/v1\/invitations\/[^/]+$/];

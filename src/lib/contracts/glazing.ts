@@ -118,6 +118,8 @@ export const GlazingRequest = z
       .transform((a) => a ?? DEFAULT_ANGLES),
     /** "per-polarization" (default): the stack is solved for s and p separately, then averaged. */
     polarization: z.enum(["per-polarization", "averaged"]).optional().default("per-polarization"),
+    /** Tilt of the glazing from horizontal for the gap convection of EN 673 (90 = vertical, the declared condition). */
+    tiltDeg: num("tiltDeg", 0, 90).optional().default(90),
   })
   .transform((req, ctx) => {
     const layers: (Pane | Gap)[] = [];

@@ -450,7 +450,6 @@ export function uValueEn673(unit: GlazingThermalInput, options: UValueOptions = 
     options.internalCoefficientWPerM2K === undefined &&
     dt === d.temperatureDifferenceK &&
     tm === d.meanTemperatureK &&
-    convection.tabulatedTiltDeg === 90 &&
     tilt === d.tiltDeg &&
     allGlassDeclared;
 

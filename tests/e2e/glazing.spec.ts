@@ -1,0 +1,102 @@
+// POST /api/v1/calc/glazing through the real server, and the make-up page in the browser.
+// Check values: [calc F4/F7/F8] of the glazing-physics handbook (EN 410 adding method and g, EN 673 U).
+import { expect, test, type APIRequestContext } from "@playwright/test";
+import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+
+const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
+const air16 = { kind: "gap", widthMm: 16, gas: "air" };
+
+async function signInApi(request: APIRequestContext) {
+  const res = await request.post("/api/auth/sign-in/email", { data: { email: demoUser("consultant").email, password: DEMO_PASSWORD } });
+  expect(res.status()).toBe(200);
+}
+
+test("anonymous callers get 401", async ({ request }) => {
+  const res = await request.post("/api/v1/calc/glazing", { data: { layers: [pane6] } });
+  expect(res.status()).toBe(401);
+});
+
+test("a double glazing answers the contract with the handbook's values", async ({ request }) => {
+  await signInApi(request);
+  const res = await request.post("/api/v1/calc/glazing", { data: { layers: [pane6, air16, pane6] } });
+  expect(res.status()).toBe(200);
+  const body = await res.json();
+  expect(body.angles.map((a: { angleDeg: number }) => a.angleDeg)).toEqual([0, 10, 20, 30, 40, 50, 60, 70, 80, 90]);
+  const n = body.angles[0];
+  expect(Object.keys(n)).toEqual(expect.arrayContaining(["angleDeg", "solarTransmittance", "solarReflectanceFront", "solarReflectanceBack", "layerAbsorptance", "gValue"]));
+  expect(n.solarTransmittance).toBeCloseTo(0.666439, 6); // [calc F4]
+  expect(n.gValue).toBeCloseTo(0.741378, 6); // [calc F7]
+  expect(n.layerAbsorptance).toHaveLength(2);
+  expect(body.angles[9].solarTransmittance).toBe(0); // grazing incidence: nothing enters
+  expect(body.hemispherical.solarTransmittance).toBeCloseTo(0.577379, 6); // [calc F5]
+  expect(Object.keys(body.hemispherical)).toEqual(expect.arrayContaining(["solarTransmittance", "solarReflectanceFront", "layerAbsorptance", "gValue"]));
+  expect(body.uValue).toBeGreaterThan(2.6); // 6|16 air|6 ≈ 2.71 by EN 673 (4|16|4: 2.74205 [calc F8])
+  expect(body.uValue).toBeLessThan(2.8);
+  expect(Array.isArray(body.warnings)).toBe(true);
+});
+
+test("bad input is answered 400 naming the field (413 when huge), never 500", async ({ request }) => {
+  await signInApi(request);
+  const cases: [unknown, string][] = [
+    [{ layers: [air16] }, "layers[0].kind"],
+    [{ layers: [] }, "layers"],
+    [{ layers: [pane6, air16] }, "layers[1]"],
+    [{ layers: [{ ...pane6, thicknessMm: -4 }] }, "layers[0].thicknessMm"],
+    [{ layers: [{ ...pane6, thicknessMm: "4" }] }, "layers[0].thicknessMm"],
+    [{ layers: [{ ...pane6, refractiveIndex: 1e9 }] }, "layers[0].refractiveIndex"],
+    [{ layers: [{ ...pane6, absorptionPerMm: null }] }, "layers[0].absorptionPerMm"],
+    [{ layers: [{ ...pane6, emissivityFront: 0 }] }, "layers[0].emissivityFront"],
+    [{ layers: [pane6, { ...air16, gas: "helium" }, pane6] }, "layers[1].gas"],
+    [{ layers: [pane6, { ...air16, gas: { argon: 0.5, air: 0.2 } }, pane6] }, "layers[1].gas"],
+    [{ layers: [pane6, { ...air16, widthMm: 1e6 }, pane6] }, "layers[1].widthMm"],
+    [{ layers: [{ kind: "pane", thicknessMm: 4, measured: { solarTransmittance: 0.9, solarReflectanceFront: 0.2, solarReflectanceBack: 0.1 } }] }, "layers[0].measured.solarReflectanceFront"],
+    [{ layers: Array.from({ length: 13 }, (_, i) => (i % 2 ? air16 : pane6)) }, "layers"],
+    [{ layers: [pane6], anglesDeg: [0, 91] }, "anglesDeg[1]"],
+    [{ layers: [pane6], anglesDeg: "all" }, "anglesDeg"],
+    [[pane6], "(body)"],
+  ];
+  for (const [body, field] of cases) {
+    const res = await request.post("/api/v1/calc/glazing", { data: body as object });
+    expect(res.status(), JSON.stringify(body).slice(0, 120)).toBe(400);
+    const problem = await res.json();
+    expect(problem.errors.map((e: { field: string }) => e.field), JSON.stringify(body).slice(0, 120)).toContain(field);
+  }
+  const huge = await request.post("/api/v1/calc/glazing", { data: { layers: [pane6], anglesDeg: Array.from({ length: 20_000 }, () => 45.123456789) } });
+  expect(huge.status()).toBe(413);
+  const broken = await request.post("/api/v1/calc/glazing", { headers: { "content-type": "application/json" }, data: '{"layers": [' });
+  expect(broken.status()).toBe(400);
+});
+
+test("the make-up page recalculates as the consultant edits", async ({ page }) => {
+  await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
+  await page.getByRole("link", { name: "Glazing" }).click();
+  await expect(page.getByRole("heading", { name: "Glazing make-up" })).toBeVisible();
+  await page.getByLabel("Start from").selectOption("double-air");
+  const g = page.getByTestId("g-normal");
+  const u = page.getByTestId("u-value");
+  await expect(u).toHaveText("2.7"); // 4|16 air|4: 2.74205 [calc F8] → 2.7 as EN 673 rounds
+  const gBefore = await g.textContent();
+  await expect(page.locator('[data-series="T"]')).toHaveCount(1);
+  await expect(page.locator('[data-series="A2"]')).toHaveCount(1);
+
+  // Argon fill lowers U.
+  await page.locator("#layers\\.1-gas").selectOption("argon");
+  await page.locator("#layers\\.1-fill").fill("100");
+  await expect(u).toHaveText("2.6"); // 4|16 argon|4: 2.61595 [calc F8]
+
+  // An invalid value is flagged at the field and the last good result stays.
+  await page.locator("#layers\\.0\\.thicknessMm").fill("-3");
+  await expect(page.locator('[data-field="layers.0.thicknessMm"]')).toContainText("thicknessMm");
+  await expect(u).toHaveText("2.6");
+
+  // A thicker outer pane absorbs more and transmits less: g falls.
+  await page.locator("#layers\\.0\\.thicknessMm").fill("12");
+  await expect(g).not.toHaveText(gBefore!);
+  await expect(page.getByTestId("summary-table")).toContainText("Absorptance, pane 2");
+
+  // Add a third pane.
+  await page.getByRole("button", { name: /Add a gap and a pane/ }).click();
+  await expect(page.getByTestId("pane-row")).toHaveCount(3);
+  await expect(page.locator('[data-series="A3"]')).toHaveCount(1);
+  await expect(page.getByText("not certified or declared values")).toBeVisible();
+});

@@ -1,0 +1,130 @@
+// Reference tests for hemispherical (diffuse) averages (src/lib/physics/hemispherical.ts and
+// optics.ts).
+//
+// X_hem = ∫_0^{π/2} X(θ) sin 2θ dθ (ISO 15099:2003 and Duffie & Beckman ch. 5, from memory).
+// [calc F5]: glazing-physics reference §5, independent float64 (python3 + numpy) values with a
+// 400-node Gauss–Legendre rule, per polarisation where stacks are involved. Printed to ~6
+// significant digits: each comparison allows half a unit in the last printed digit.
+import { describe, expect, it } from "vitest";
+import { absorbingPaneOptics } from "../../src/lib/physics/absorbing-pane";
+import {
+  DEFAULT_HEMISPHERICAL_NODES,
+  gaussLegendre,
+  hemisphericalAverage,
+  hemisphericalQuadrature,
+} from "../../src/lib/physics/hemispherical";
+import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
+
+function printed(actual: number, value: string): void {
+  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
+  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
+  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
+}
+
+const pane6mm = { thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
+const lowIron4mm = { thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 2 };
+
+describe("Gauss–Legendre rule", () => {
+  it("2 and 3 nodes: closed forms ±1/√3 (w = 1); 0, ±√(3/5) (w = 8/9, 5/9)", () => {
+    // Abramowitz & Stegun, Handbook of Mathematical Functions, Table 25.4 (from memory); closed forms
+    const r2 = gaussLegendre(2);
+    expect(Math.abs(Math.abs(r2.x[0]!) - 1 / Math.sqrt(3))).toBeLessThan(1e-15);
+    expect(Math.abs(r2.w[0]! - 1)).toBeLessThan(1e-15);
+    const r3 = gaussLegendre(3);
+    const sorted = [...r3.x].sort((a, b) => a - b);
+    expect(Math.abs(sorted[0]! + Math.sqrt(0.6))).toBeLessThan(1e-15);
+    expect(Math.abs(sorted[1]!)).toBeLessThan(1e-15);
+    expect(Math.abs(sorted[2]! - Math.sqrt(0.6))).toBeLessThan(1e-15);
+    const wMid = r3.w[r3.x.findIndex((x) => Math.abs(x) < 1e-12)]!;
+    expect(Math.abs(wMid - 8 / 9)).toBeLessThan(1e-15);
+  });
+
+  it("integrates x^k exactly for k ≤ 2n − 1: ∫_{-1}^{1} x^k dx = 2/(k+1) (even k), 0 (odd k)", () => {
+    for (const n of [5, 20, 32]) {
+      const { x, w } = gaussLegendre(n);
+      for (let k = 0; k <= 2 * n - 1; k++) {
+        let acc = 0;
+        for (let i = 0; i < n; i++) acc += w[i]! * x[i]! ** k;
+        expect(Math.abs(acc - (k % 2 === 0 ? 2 / (k + 1) : 0))).toBeLessThan(1e-13);
+      }
+    }
+  });
+});
+
+describe("hemispherical weights", () => {
+  it(`default ${DEFAULT_HEMISPHERICAL_NODES} nodes (≥ 20); weights sum to 1`, () => {
+    // ∫_0^{π/2} sin 2θ dθ = 1 (closed form)
+    const q = hemisphericalQuadrature();
+    expect(DEFAULT_HEMISPHERICAL_NODES).toBeGreaterThanOrEqual(20);
+    expect(q.thetaRad).toHaveLength(DEFAULT_HEMISPHERICAL_NODES);
+    expect(Math.abs(q.weight.reduce((a, b) => a + b, 0) - 1)).toBeLessThan(1e-15);
+    expect(hemisphericalAverage(() => 1)).toBeCloseTo(1, 15);
+  });
+
+  it("closed forms: ∫ cos θ sin 2θ dθ = 2/3, ∫ cos² θ sin 2θ dθ = 1/2, ∫ θ sin 2θ dθ = π/4", () => {
+    expect(Math.abs(hemisphericalAverage((t) => Math.cos(t)) - 2 / 3)).toBeLessThan(1e-14);
+    expect(Math.abs(hemisphericalAverage((t) => Math.cos(t) ** 2) - 0.5)).toBeLessThan(1e-14);
+    expect(Math.abs(hemisphericalAverage((t) => t) - Math.PI / 4)).toBeLessThan(1e-14);
+  });
+
+  it("quadrature accuracy on the 6 mm pane: 10 nodes 0.736434, 20 nodes 0.7364312", () => {
+    // [calc] §5 "Quadrature accuracy, 6 mm T_hem": Gauss–Legendre 10 nodes 0.736434, 20 nodes 0.7364312
+    const T = (t: number) => absorbingPaneOptics(pane6mm, t as never).T;
+    printed(hemisphericalAverage(T, 10), "0.736434");
+    printed(hemisphericalAverage(T, 20), "0.7364312");
+  });
+
+  it("refuses bad node counts and non-finite integrands", () => {
+    expect(() => hemisphericalQuadrature(0)).toThrow(/nodes/);
+    expect(() => hemisphericalQuadrature(2.5)).toThrow(/nodes/);
+    expect(() => gaussLegendre(5000)).toThrow(/nodes/);
+    expect(() => hemisphericalAverage(() => Number.NaN)).toThrow(/not finite/);
+  });
+});
+
+describe("hemispherical glazing values", () => {
+  it("6 mm pane: T_hem, R_hem, A_hem", () => {
+    // [calc F5] §5: 0.736431, 0.138241, 0.125328
+    const h = prepareGlazing([{ kind: "physical", ...pane6mm }]).hemispherical().solar;
+    printed(h.T, "0.736431");
+    printed(h.Rf, "0.138241");
+    printed(h.A[0]!, "0.125328");
+  });
+
+  it("4 mm low-iron pane: T_hem, R_hem, A_hem", () => {
+    // [calc F5] §5: 0.838550, 0.152380, 0.00906953
+    const h = prepareGlazing([{ kind: "physical", ...lowIron4mm }]).hemispherical().solar;
+    printed(h.T, "0.838550");
+    printed(h.Rf, "0.152380");
+    printed(h.A[0]!, "0.00906953");
+  });
+
+  it("double 6 mm + 6 mm, per polarisation: T_hem, R_hem, A1, A2", () => {
+    // [calc F5] §5: 0.577379, 0.191431, A1 0.136229, A2 0.0949614
+    const spec: PaneSpec = { kind: "physical", ...pane6mm };
+    const g = prepareGlazing([spec, spec]);
+    const h = g.hemispherical().solar;
+    printed(h.T, "0.577379");
+    printed(h.Rf, "0.191431");
+    printed(h.A[0]!, "0.136229");
+    printed(h.A[1]!, "0.0949614");
+    // energy balance survives the averaging (weights sum to 1)
+    expect(Math.abs(h.T + h.Rf + h.A[0]! + h.A[1]! - 1)).toBeLessThan(1e-14);
+    // computed once, then served from the cache
+    expect(g.hemispherical()).toBe(g.hemispherical());
+    // the diffuse value lies near the value at 58–60° (§5 rule of thumb; [calc F2] T(58°) = 0.739292,
+    // T(60°) = 0.726272 for one 6 mm pane) — checked for the single pane only
+    const single = prepareGlazing([spec]);
+    const t58 = single.at((58 * Math.PI) / 180 as never).solar.T;
+    expect(Math.abs(single.hemispherical().solar.T - t58)).toBeLessThan(0.003);
+  });
+
+  it("a different node count (40) changes the 6 mm value by < 1e-7", () => {
+    // [calc] §5: 20 nodes already agree with 400 nodes to < 1e-7
+    const spec: PaneSpec = { kind: "physical", ...pane6mm };
+    const a = prepareGlazing([spec], { hemisphericalNodes: 40 }).hemispherical().solar.T;
+    const b = prepareGlazing([spec]).hemispherical().solar.T;
+    expect(Math.abs(a - b)).toBeLessThan(1e-7);
+    expect(() => prepareGlazing([spec], { hemisphericalNodes: 10 })).toThrow(/hemisphericalNodes/);
+  });
+});
