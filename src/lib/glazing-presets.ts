@@ -13,6 +13,19 @@ export interface Preset {
 
 const clear = (thicknessMm: number) => ({ kind: "pane" as const, thicknessMm, refractiveIndex: 1.52, absorptionPerMm: 0.02 });
 const gap = (widthMm: number, gas: "air" | "argon" | "krypton" | { argon: number; air: number }) => ({ kind: "gap" as const, widthMm, gas });
+/** Clear 4 mm float described by measured values: round illustrative numbers (common practice, no source). */
+const clearMeasured = {
+  kind: "pane" as const,
+  thicknessMm: 4,
+  measured: {
+    solarTransmittance: 0.83,
+    solarReflectanceFront: 0.075,
+    solarReflectanceBack: 0.075,
+    visibleTransmittance: 0.9,
+    visibleReflectanceFront: 0.08,
+    visibleReflectanceBack: 0.08,
+  },
+};
 /** A soft-coated pane, coating towards the gap (face 3 of a double unit): invented illustrative values. */
 const coatedInner = {
   kind: "pane" as const,
@@ -34,7 +47,7 @@ export const PRESETS: Preset[] = [
   {
     id: "double-lowe",
     label: "Double 4 | 16 argon 90 % | 4 coated (face 3)",
-    request: { layers: [clear(4), gap(16, { argon: 0.9, air: 0.1 }), coatedInner] },
+    request: { layers: [clearMeasured, gap(16, { argon: 0.9, air: 0.1 }), coatedInner] },
   },
   {
     id: "triple",

@@ -268,7 +268,7 @@ export default function GlazingComposer() {
                 <p className="text-xs text-slate">{normal?.visibleTransmittance == null ? "needs measured light values for every pane" : "normal incidence"}</p>
               </div>
             </div>
-            <div className="card grid gap-6 xl:grid-cols-2">
+            <div className="card grid gap-6 2xl:grid-cols-2">
               <AngularChart title="Transmittance, reflectance and g" series={chart1} />
               <AngularChart title="Absorptance per pane (sun from outdoors)" series={chart2} />
             </div>
