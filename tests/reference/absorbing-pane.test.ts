@@ -12,20 +12,11 @@ import {
   slabFromFaceReflectance,
 } from "../../src/lib/physics/absorbing-pane";
 import { fresnelReflectancesReal } from "../../src/lib/physics/fresnel";
-import { asDegrees, asRadians, toDegrees, toRadians, type Radians } from "../../src/lib/physics/units";
+import { asRadians, toDegrees } from "../../src/lib/physics/units";
+import { printed, deg, pane6mm, lowIron4mm } from "./fixtures";
 
-const deg = (d: number): Radians => toRadians(asDegrees(d));
 
-function printed(actual: number, value: string): void {
-  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
-  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
-  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
-}
 
-// The reference test pane: 6 mm, n = 1.52, α = 0.02 /mm (a broadband test fixture, not a real glass).
-const pane6mm = { thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
-// Low-iron pane: 4 mm, n = 1.52, α = 0.002 /mm.
-const lowIron4mm = { thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 2 };
 
 describe("6 mm pane, n = 1.52, α = 0.02 /mm", () => {
   // [calc F2] glazing-physics reference §2, "Check values: 6 mm, n = 1.52, α = 0.02 /mm":

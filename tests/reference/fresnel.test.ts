@@ -18,16 +18,11 @@ import {
   normalWaveVectorComponents,
   snellRefractionAngle,
 } from "../../src/lib/physics/fresnel";
-import { asDegrees, asRadians, toDegrees, toRadians, type Radians } from "../../src/lib/physics/units";
+import { asRadians, toDegrees } from "../../src/lib/physics/units";
+import { printed, deg } from "./fixtures";
 
-const deg = (d: number): Radians => toRadians(asDegrees(d));
 
 /** |actual − value| ≤ half a unit in the last digit of the printed value. */
-function printed(actual: number, value: string): void {
-  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
-  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
-  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
-}
 
 describe("Fresnel reflectance, air → glass", () => {
   // [calc F1] glazing-physics reference §1, table "Check values, n1 = 1 (air)":

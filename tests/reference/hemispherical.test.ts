@@ -14,15 +14,9 @@ import {
   hemisphericalQuadrature,
 } from "../../src/lib/physics/hemispherical";
 import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
+import { printed, pane6mm, lowIron4mm } from "./fixtures";
 
-function printed(actual: number, value: string): void {
-  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
-  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
-  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
-}
 
-const pane6mm = { thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
-const lowIron4mm = { thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 2 };
 
 describe("Gauss–Legendre rule", () => {
   it("2 and 3 nodes: closed forms ±1/√3 (w = 1); 0, ±√(3/5) (w = 8/9, 5/9)", () => {

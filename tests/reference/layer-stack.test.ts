@@ -16,17 +16,11 @@ import {
   type PolarizedLayerSource,
 } from "../../src/lib/physics/layer-stack";
 import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
-import { asDegrees, toRadians, type Radians } from "../../src/lib/physics/units";
+import { type Radians } from "../../src/lib/physics/units";
+import { printed, deg, pane6mm } from "./fixtures";
 
-const deg = (d: number): Radians => toRadians(asDegrees(d));
 
-function printed(actual: number, value: string): void {
-  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
-  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
-  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
-}
 
-const pane6mm = { thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
 const spec6mm: PaneSpec = { kind: "physical", ...pane6mm };
 const source6mm: PolarizedLayerSource = (theta) => {
   const o = absorbingPaneOptics(pane6mm, theta);

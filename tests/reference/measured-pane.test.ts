@@ -21,15 +21,10 @@ import {
   UNCOATED_FACE_TOLERANCE,
   type MeasuredBandModel,
 } from "../../src/lib/physics/measured-pane";
-import { asDegrees, asRadians, toRadians, type Radians } from "../../src/lib/physics/units";
+import { asRadians, type Radians } from "../../src/lib/physics/units";
+import { printed, deg } from "./fixtures";
 
-const deg = (d: number): Radians => toRadians(asDegrees(d));
 
-function printed(actual: number, value: string): void {
-  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
-  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
-  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
-}
 
 const unpolarized = (model: MeasuredBandModel, theta: Radians) => {
   const l = measuredBandAt(model, theta);
