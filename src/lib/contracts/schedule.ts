@@ -1,0 +1,161 @@
+/**
+ * Request and response of POST /api/v1/calc/schedule: hour-by-hour sun, irradiance and transmitted
+ * solar energy for each surface (façade orientation + glazing make-up) of a site.
+ */
+import { z } from "zod";
+import { isIanaTimeZone } from "./common";
+import { GlazingRequest } from "./glazing";
+
+/** Surfaces × rows one request may ask for (a full year of hours for 6 surfaces; about 13 MB of JSON). */
+export const MAX_SCHEDULE_ROWS = 6 * 8784;
+export const MAX_SURFACES = 24;
+export const MAX_SPAN_DAYS = 366;
+
+const num = (label: string, min: number, max: number) =>
+  z
+    .number({ error: `${label} must be a number` })
+    .refine(Number.isFinite, `${label} must be a finite number`)
+    .refine((v) => v >= min && v <= max, `${label} must be between ${min} and ${max}`);
+
+const positive = (label: string, max: number) =>
+  z
+    .number({ error: `${label} must be a number` })
+    .refine(Number.isFinite, `${label} must be a finite number`)
+    .refine((v) => v > 0 && v <= max, `${label} must be greater than 0 and at most ${max}`);
+
+const localDate = (label: string) =>
+  z
+    .string({ error: `${label} must be a date YYYY-MM-DD` })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `${label} must be a date YYYY-MM-DD`)
+    .refine((s) => {
+      const d = new Date(`${s}T00:00:00Z`);
+      return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
+    }, `${label} is not a real calendar date`);
+
+export const Site = z.object({
+  latitudeDeg: num("latitudeDeg", -90, 90),
+  longitudeDeg: num("longitudeDeg", -180, 180),
+  timeZone: z.string({ error: "timeZone must be text" }).refine(isIanaTimeZone, "timeZone must be an IANA time-zone name such as Europe/Lisbon"),
+  elevationM: num("elevationM", -500, 9000).optional().default(0),
+});
+
+export const Shading = z.object({
+  window: z.object({ widthM: positive("widthM", 100), heightM: positive("heightM", 100) }),
+  overhang: z
+    .object({
+      depthM: num("depthM", 0, 50),
+      gapAboveM: num("gapAboveM", 0, 50),
+      /** How far the overhang runs past each side of the window; omitted = very long. */
+      extensionLeftM: num("extensionLeftM", 0, 100).optional(),
+      extensionRightM: num("extensionRightM", 0, 100).optional(),
+    })
+    .optional(),
+  fins: z.object({ depthM: num("depthM", 0, 50), gapM: num("gapM", 0, 50) }).optional(),
+  /** Obstructions on the horizon in front of the window (buildings, terrain), degrees above horizontal. */
+  horizonDeg: num("horizonDeg", 0, 89).optional(),
+});
+
+const MONTHS = 12;
+
+export const Sky = z
+  .object({
+    /** Sky-diffuse model for tilted surfaces. */
+    model: z.enum(["perez", "hay-davies", "isotropic"]).optional().default("perez"),
+    /** Linke turbidity, one value or twelve monthly values (January first). */
+    linkeTurbidity: z
+      .union([num("linkeTurbidity", 1, 10), z.array(num("linkeTurbidity", 1, 10)).length(MONTHS, "linkeTurbidity needs 12 monthly values")])
+      .optional(),
+    /** Ground reflectance (albedo). */
+    albedo: num("albedo", 0, 1).optional().default(0.2),
+  })
+  .optional()
+  .transform((s) => s ?? { model: "perez" as const, albedo: 0.2, linkeTurbidity: undefined });
+
+export const WeatherRow = z.object({
+  /** ISO-8601 instant with offset or Z: the midpoint of the hour the values stand for. */
+  time: z.string().refine((t) => /[zZ]|[+-]\d{2}:?\d{2}$/.test(t) && !Number.isNaN(Date.parse(t)), "time must be an ISO-8601 instant with a UTC offset"),
+  ghi: num("ghi", 0, 1500),
+  dni: num("dni", 0, 1500),
+  dhi: num("dhi", 0, 1000),
+});
+
+export const ScheduleSurface = z.object({
+  name: z.string({ error: "name must be text" }).trim().min(1, "name is required").max(120),
+  azimuthDeg: num("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
+  tiltDeg: num("tiltDeg", 0, 180),
+  layers: z.array(z.unknown()),
+  shading: Shading.optional(),
+  /** Glazed area for the W and kWh columns; default the shading window's area, else none. */
+  glazedAreaM2: positive("glazedAreaM2", 10_000).optional(),
+});
+
+export const ScheduleRequest = z
+  .object({
+    site: Site,
+    surfaces: z.array(z.unknown()).min(1, "surfaces must contain at least one surface").max(MAX_SURFACES, `at most ${MAX_SURFACES} surfaces`),
+    from: localDate("from"),
+    to: localDate("to"),
+    stepMinutes: z
+      .number({ error: "stepMinutes must be a number" })
+      .int("stepMinutes must be a whole number")
+      .refine((v) => v >= 1 && v <= 1440 && 1440 % v === 0, "stepMinutes must divide a day evenly (e.g. 10, 15, 30, 60)")
+      .optional()
+      .default(60),
+    sky: Sky,
+    /** Measured or typical-year weather in place of the clear sky. */
+    weather: z.array(WeatherRow).max(MAX_SPAN_DAYS * 24 + 48, "weather may hold at most one year of hours").optional(),
+  })
+  .superRefine((r, ctx) => {
+    if (r.from > r.to) ctx.addIssue({ code: "custom", path: ["to"], message: "to must not be before from" });
+    const days = (Date.parse(`${r.to}T00:00:00Z`) - Date.parse(`${r.from}T00:00:00Z`)) / 86_400_000 + 1;
+    if (days > MAX_SPAN_DAYS) ctx.addIssue({ code: "custom", path: ["to"], message: `at most ${MAX_SPAN_DAYS} days per request` });
+  })
+  .transform((r, ctx) => {
+    const surfaces: (z.output<typeof ScheduleSurface> & { glazing: z.output<typeof GlazingRequest> })[] = [];
+    r.surfaces.forEach((raw, i) => {
+      const s = ScheduleSurface.safeParse(raw);
+      if (!s.success) {
+        for (const issue of s.error.issues) ctx.addIssue({ ...issue, path: ["surfaces", i, ...issue.path] } as never);
+        return;
+      }
+      const g = GlazingRequest.safeParse({ layers: s.data.layers, tiltDeg: Math.min(90, s.data.tiltDeg) });
+      if (!g.success) {
+        for (const issue of g.error.issues) ctx.addIssue({ ...issue, path: ["surfaces", i, ...issue.path] } as never);
+        return;
+      }
+      surfaces.push({ ...s.data, glazing: g.data });
+    });
+    return { ...r, surfaces };
+  });
+export type ScheduleRequest = z.output<typeof ScheduleRequest>;
+export type ScheduleRequestInput = z.input<typeof ScheduleRequest>;
+
+/** Estimated number of rows (surfaces × steps) before building anything, for the work limit. */
+export function estimatedScheduleRows(req: Pick<ScheduleRequest, "from" | "to" | "stepMinutes" | "surfaces">): number {
+  const days = (Date.parse(`${req.to}T00:00:00Z`) - Date.parse(`${req.from}T00:00:00Z`)) / 86_400_000 + 1;
+  return Math.ceil(days * (1440 / req.stepMinutes) + 1) * req.surfaces.length;
+}
+
+export interface ScheduleRow {
+  time: string;
+  sunAltitudeDeg: number;
+  sunAzimuthDeg: number;
+  incidenceDeg: number;
+  beamTransmittance: number;
+  sunlitFraction: number;
+  beamIncidentWm2: number;
+  diffuseIncidentWm2: number;
+  transmittedWm2: number;
+  solarGainWm2: number;
+  transmittedW?: number | null;
+  solarGainW?: number | null;
+}
+
+export interface PeriodTotals {
+  incidentKWhPerM2: number;
+  transmittedKWhPerM2: number;
+  solarGainKWhPerM2: number;
+  transmittedKWh: number | null;
+  solarGainKWh: number | null;
+  peak: { time: string; transmittedWm2: number; solarGainWm2: number } | null;
+}
