@@ -42,6 +42,8 @@ import {
 import { localTimeline, type Timeline } from "../time/local-timeline";
 
 const RAD = Math.PI / 180;
+/** Gauss–Legendre points per window axis for the diffuse view factors of shading devices. */
+export const DIFFUSE_QUADRATURE_POINTS = 8;
 /** Kasten–Young air mass at the horizon, used for twilight rows that carry measured diffuse light. */
 const AIR_MASS_AT_HORIZON = 37.919608;
 
@@ -250,14 +252,23 @@ export interface PreparedSurface {
   kGround: number;
 }
 
-export function prepareSurface(s: SurfaceGeometryInput, albedo: number): PreparedSurface {
+/**
+ * Per-surface constants. Shading works in the surface's own frame, so surfaces with the same window,
+ * devices and tilt share one prepared shading (and its diffuse view factors, the costly part: about
+ * 2 ms each) through `shadingCache`, whatever their azimuth.
+ */
+export function prepareSurface(s: SurfaceGeometryInput, albedo: number, shadingCache?: Map<string, PreparedShading>): PreparedSurface {
   const orientation = surfaceOrientationDeg(s.azimuthDeg, s.tiltDeg);
   const frame = surfaceFrame(orientation);
   const t = prepareTranspositionSurface(orientation.tiltRad, albedo);
   let shading: PreparedShading | null = null;
   if (s.shading) {
     const sh = s.shading;
-    shading = new PreparedShading({
+    const key = JSON.stringify([sh, s.tiltDeg]);
+    const cached = shadingCache?.get(key);
+    if (cached) shading = cached;
+    else
+      shading = new PreparedShading({
       windowWidthM: sh.window.widthM,
       windowHeightM: sh.window.heightM,
       surfaceTiltRad: orientation.tiltRad,
@@ -266,7 +277,10 @@ export function prepareSurface(s: SurfaceGeometryInput, albedo: number): Prepare
         : undefined,
       fins: sh.fins ? { depthM: sh.fins.depthM, gapFromJambM: sh.fins.gapM } : undefined,
       horizonAngleRad: (sh.horizonDeg ?? 0) * RAD,
+      // 8 × 8 Gauss points over the window: within 2e-6 of 16 × 16 on our test windows, a quarter of the work.
+      diffuseQuadraturePoints: DIFFUSE_QUADRATURE_POINTS,
     });
+    shadingCache?.set(key, shading);
   }
   const k = shading?.diffuse;
   return {
@@ -363,6 +377,7 @@ export interface ScheduleComputation {
 export function computeSchedule(req: ScheduleRequest): ScheduleComputation {
   const site = prepareSite(req.site, req, req.sky, req.weather);
   const tables = new Map<string, GlazingTables>();
+  const shadingCache = new Map<string, PreparedShading>();
   const warnings = [...site.warnings];
   const surfaces = req.surfaces.map((s) => {
     const key = JSON.stringify(s.glazing.layers) + s.glazing.tiltDeg;
@@ -372,7 +387,7 @@ export function computeSchedule(req: ScheduleRequest): ScheduleComputation {
       tables.set(key, glazing);
       for (const w of glazing.warnings) warnings.push(`${s.name}: ${w}`);
     }
-    const prepared = prepareSurface(s, req.sky.albedo);
+    const prepared = prepareSurface(s, req.sky.albedo, shadingCache);
     const columns = allocateColumns(site.timeline.length);
     computeSurfaceSeries(site, prepared, glazing, columns);
     const areaM2 = s.glazedAreaM2 ?? (s.shading ? s.shading.window.widthM * s.shading.window.heightM : null);
