@@ -71,7 +71,7 @@ test("the project's sun page shows the sun path and a façade's year", async ({ 
   const diagram = page.getByTestId("sun-path");
   await expect(diagram).toBeVisible();
   await expect(diagram.locator("[data-facade]")).toHaveCount(DEMO_PROJECTS[0].facades.length);
-  await page.getByLabel("Façade").selectOption({ index: 0 });
+  await page.getByLabel("Façade", { exact: true }).selectOption({ index: 0 });
   await page.getByRole("button", { name: "Calculate the year" }).click();
   await expect(page.getByTestId("heatmap")).toBeVisible({ timeout: 20_000 });
   await expect(page.getByTestId("transmitted-total")).not.toHaveText("");
