@@ -1,6 +1,6 @@
-// The role rules of the product brief: owner manages members and the organisation; consultant creates and
+// The role rules of the product (README, Roles): owner manages members and the organisation; consultant creates and
 // edits projects and glazing; architect reads, comments, approves or rejects options; client reads shared
-// projects and receives exports. Expected values follow that brief, not the implementation.
+// projects and receives exports. Expected values follow that table, not the implementation.
 import { describe, expect, it } from "vitest";
 import { roleCan, roles, isRoleName, ROLE_NAMES, type Permission, type RoleName } from "../../src/lib/auth/roles";
 

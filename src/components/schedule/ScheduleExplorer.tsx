@@ -46,6 +46,8 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
   const [presetId, setPresetId] = useState(PRESETS[1]!.id);
   const [year, setYear] = useState(new Date().getFullYear());
   const [sky, setSky] = useState<"perez" | "hay-davies" | "isotropic">("perez");
+  const [linke, setLinke] = useState<number | "">("");
+  const [albedo, setAlbedo] = useState(0.2);
   const [overhang, setOverhang] = useState({ on: false, depthM: 0.6, gapAboveM: 0.2, widthM: 1.5, heightM: 1.5 });
   const [result, setResult] = useState<{ surface: SurfaceResult; warnings: string[]; stepHours: number } | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
@@ -66,7 +68,7 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
         from: `${year}-01-01`,
         to: `${year}-12-31`,
         stepMinutes: 60,
-        sky: { model: sky },
+        sky: { model: sky, albedo, ...(linke === "" ? {} : { linkeTurbidity: linke }) },
         surfaces: [
           {
             name: facade.name,
@@ -154,7 +156,15 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
             <option value="isotropic">isotropic</option>
           </select>
         </div>
-        <fieldset className="md:col-span-3 xl:col-span-5">
+        <div>
+          <label htmlFor="linke">Linke turbidity</label>
+          <input id="linke" type="number" step="0.1" min={1} max={10} placeholder="monthly defaults" value={linke} onChange={(e) => setLinke(Number.isNaN(e.target.valueAsNumber) ? "" : e.target.valueAsNumber)} />
+        </div>
+        <div>
+          <label htmlFor="albedo">Ground albedo</label>
+          <input id="albedo" type="number" step="0.05" min={0} max={1} value={albedo} onChange={(e) => setAlbedo(Number.isNaN(e.target.valueAsNumber) ? 0.2 : e.target.valueAsNumber)} />
+        </div>
+        <fieldset className="md:col-span-3 xl:col-span-4">
           <label className="flex items-center gap-2 font-bold">
             <input type="checkbox" className="mt-0 w-auto" checked={overhang.on} onChange={(e) => setOverhang({ ...overhang, on: e.target.checked })} />
             Overhang over a window
