@@ -71,6 +71,8 @@ test("the make-up page recalculates as the consultant edits", async ({ page }) =
   await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
   await page.getByRole("link", { name: "Glazing" }).click();
   await expect(page.getByRole("heading", { name: "Glazing make-up" })).toBeVisible();
+  // The first result shows once the island is live (hydrated) and has calculated the default make-up.
+  await expect(page.getByTestId("g-normal")).toBeVisible();
   await page.getByLabel("Start from").selectOption("double-air");
   const g = page.getByTestId("g-normal");
   const u = page.getByTestId("u-value");

@@ -77,6 +77,6 @@ test("the project's sun page shows the sun path and a façade's year", async ({ 
   await expect(page.getByTestId("transmitted-total")).not.toHaveText("");
   await expect(page.getByTestId("monthly-table").locator("tbody tr")).toHaveCount(12);
   await expect(page.getByTestId("daily-profile")).toBeVisible();
-  await page.getByLabel("Day").fill(`${new Date().getFullYear()}-12-21`);
+  await page.getByLabel("Day", { exact: true }).fill(`${new Date().getFullYear()}-12-21`);
   await expect(page.getByTestId("day-table")).toContainText("12:30");
 });
