@@ -1,4 +1,5 @@
 import { line, scaleLinear } from "d3";
+import ChartLegend from "../ChartLegend";
 
 export interface Series {
   key: string;
@@ -50,14 +51,7 @@ export default function AngularChart({ title, series, yLabel = "fraction", heigh
           <path key={s.key} d={path(s.points) ?? ""} fill="none" stroke={s.color} strokeWidth={2} strokeDasharray={s.dashed ? "5 4" : undefined} data-series={s.key} />
         ))}
       </svg>
-      <ul className="flex flex-wrap gap-x-4 gap-y-1 text-xs">
-        {series.map((s) => (
-          <li key={s.key} className="flex items-center gap-1.5">
-            <svg width="22" height="8" aria-hidden="true"><line x1="0" x2="22" y1="4" y2="4" stroke={s.color} strokeWidth="2" strokeDasharray={s.dashed ? "5 4" : undefined} /></svg>
-            {s.label}
-          </li>
-        ))}
-      </ul>
+      <ChartLegend items={series} />
     </figure>
   );
 }

@@ -1,4 +1,5 @@
 import { line, scaleLinear } from "d3";
+import ChartLegend from "../ChartLegend";
 import type { ScheduleRow } from "../../lib/contracts/schedule";
 
 const W = 520;
@@ -39,14 +40,7 @@ export default function DailyProfile({ rows, localHours, title }: { rows: Schedu
           <path key={s.key} d={path(s.key)} fill="none" stroke={s.color} strokeWidth={2} strokeDasharray={s.dashed ? "5 4" : undefined} />
         ))}
       </svg>
-      <ul className="flex flex-wrap gap-x-4 text-xs">
-        {PROFILE_SERIES.map((s) => (
-          <li key={s.key} className="flex items-center gap-1.5">
-            <svg width="22" height="8" aria-hidden="true"><line x1="0" x2="22" y1="4" y2="4" stroke={s.color} strokeWidth="2" strokeDasharray={s.dashed ? "5 4" : undefined} /></svg>
-            {s.label}
-          </li>
-        ))}
-      </ul>
+      <ChartLegend items={PROFILE_SERIES} />
     </figure>
   );
 }

@@ -81,3 +81,21 @@ export async function requireProject(
   if (permission && !roleCan(m.role, permission)) throw new HttpError(403, `Your role (${m.role}) does not allow you to ${action}`);
   return { project: p, membership: m };
 }
+
+/**
+ * For pages: the project and the caller's membership, or the refusal (404/403) to render instead
+ * of throwing. Other errors are rethrown.
+ */
+export async function projectForPage(
+  userId: string,
+  projectId: string | undefined,
+  permission?: Permission,
+  action?: string,
+): Promise<{ loaded: { project: ProjectRow; membership: Membership } | null; refusal: HttpError | null }> {
+  try {
+    return { loaded: await requireProject(userId, projectId ?? "", permission, action), refusal: null };
+  } catch (e) {
+    if (e instanceof HttpError) return { loaded: null, refusal: e };
+    throw e;
+  }
+}
