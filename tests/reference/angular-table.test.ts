@@ -15,16 +15,12 @@ import {
 } from "../../src/lib/physics/angular-table";
 import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
 import type { Radians } from "../../src/lib/physics/units";
+import { clear6mmSpec, coated6mmSpec } from "./fixtures";
 
 const clear4: PaneSpec = { kind: "physical", thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 20 };
-const clear6: PaneSpec = { kind: "physical", thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
+const clear6: PaneSpec = clear6mmSpec;
 const lowIron4: PaneSpec = { kind: "physical", thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 2 };
-const coated6: PaneSpec = {
-  kind: "measured",
-  thicknessM: 0.006,
-  solar: { T: 0.45, Rf: 0.3, Rb: 0.2 },
-  visible: { T: 0.7, Rf: 0.1, Rb: 0.06 },
-};
+const coated6 = coated6mmSpec;
 
 describe("grids and closed forms", () => {
   it("grid angles: θ_0 = π/2 (grazing), θ_N = 0 (normal)", () => {

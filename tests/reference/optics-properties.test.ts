@@ -16,6 +16,7 @@ import { fresnelInterface } from "../../src/lib/physics/fresnel";
 import type { MeasuredValues } from "../../src/lib/physics/measured-pane";
 import { prepareGlazing, type BandOptics, type PaneSpec } from "../../src/lib/physics/optics";
 import { asRadians, type Radians } from "../../src/lib/physics/units";
+import { clear6mmSpec, coated6mmSpec } from "./fixtures";
 
 const dbl = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
 
@@ -174,13 +175,8 @@ describe("properties of one interface", () => {
 });
 
 describe("glazing façade", () => {
-  const clear: PaneSpec = { kind: "physical", thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
-  const coated: PaneSpec = {
-    kind: "measured",
-    thicknessM: 0.006,
-    solar: { T: 0.45, Rf: 0.3, Rb: 0.2 },
-    visible: { T: 0.7, Rf: 0.1, Rb: 0.06 },
-  };
+  const clear: PaneSpec = clear6mmSpec;
+  const coated: PaneSpec = coated6mmSpec;
 
   it("warns that a coated pane's angular values are estimates", () => {
     const g = prepareGlazing([coated, clear]);
