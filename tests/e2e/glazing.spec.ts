@@ -102,3 +102,22 @@ test("the make-up page recalculates as the consultant edits", async ({ page }) =
   await expect(page.locator('[data-series="A3"]')).toHaveCount(1);
   await expect(page.getByText("not certified or declared values")).toBeVisible();
 });
+
+test("switching how a pane is described keeps the make-up valid", async ({ page }) => {
+  await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
+  await page.goto("/glazing");
+  const g = page.getByTestId("g-normal");
+  await expect(g).toBeVisible();
+  await page.getByLabel("Start from").selectOption("double-lowe");
+  await expect(page.getByTestId("u-value")).toHaveText("1.1"); // low-e 0.03 on face 3, 90 % argon: ≈ 1.10 [calc F8]
+  const before = await g.textContent();
+  // The coated room-side pane becomes clear glass described by its properties: more sun comes in.
+  await page.getByLabel("How pane 2 is described").selectOption("physical");
+  await expect(g).not.toHaveText(before!);
+  await expect(page.locator(".field-error")).toHaveCount(0);
+  await page.getByLabel("How pane 2 is described").selectOption("measured");
+  await expect(page.locator("#layers\\.2\\.measured\\.solarTransmittance")).toHaveValue("0.8");
+  await page.getByRole("button", { name: "Remove pane 2" }).click();
+  await expect(page.getByTestId("pane-row")).toHaveCount(1);
+  await expect(page.getByTestId("u-value")).toHaveText("5.8"); // single 4 mm: 5.79783 [calc F8]
+});
