@@ -4,9 +4,9 @@
  * requested angle and over the hemisphere, and combines them with the EN 673 / EN 410 thermal
  * network into g-values and the U-value. Pure (no I/O), so it also runs in the browser.
  */
-import type { Gap, Gas, GlazingRequest, GlazingResponse, Pane } from "../contracts/glazing";
+import type { Gap, Gas, GlazingRequest, GlazingResponse, GlazingValues, Pane } from "../contracts/glazing";
 import { DEFAULT_EMISSIVITY } from "../contracts/glazing";
-import { prepareGlazing, type BandOptics, type PaneSpec, type PreparedGlazing } from "../physics/optics";
+import { prepareGlazing, type GlazingOptics, type PaneSpec, type PreparedGlazing } from "../physics/optics";
 import { gValue, secondaryHeatTransferFactorsEn410, type SecondaryHeatTransferResult } from "../physics/g-value";
 import type { GasFill } from "../physics/gas-properties";
 import { toRadians, type Degrees } from "../physics/units";
@@ -74,22 +74,18 @@ const round12 = (x: number) => Math.round(x * 1e12) / 1e12;
 export function calculateGlazing(req: GlazingRequest): GlazingResponse {
   const model = prepareGlazingModel(req);
   const N = model.thermal.factors;
-  const g = (b: BandOptics) => gValue(b.T, b.A, N);
-
-  const angles = req.anglesDeg.map((angleDeg) => {
-    const o = model.optics.at(toRadians(angleDeg as Degrees));
-    return {
-      angleDeg,
-      solarTransmittance: o.solar.T,
-      solarReflectanceFront: o.solar.Rf,
-      solarReflectanceBack: o.solar.Rb,
-      layerAbsorptance: [...o.solar.A],
-      gValue: g(o.solar),
-      visibleTransmittance: o.visible?.T ?? null,
-      visibleReflectanceFront: o.visible?.Rf ?? null,
-      visibleReflectanceBack: o.visible?.Rb ?? null,
-    };
+  const values = (o: GlazingOptics): GlazingValues => ({
+    solarTransmittance: o.solar.T,
+    solarReflectanceFront: o.solar.Rf,
+    solarReflectanceBack: o.solar.Rb,
+    layerAbsorptance: [...o.solar.A],
+    gValue: gValue(o.solar.T, o.solar.A, N),
+    visibleTransmittance: o.visible?.T ?? null,
+    visibleReflectanceFront: o.visible?.Rf ?? null,
+    visibleReflectanceBack: o.visible?.Rb ?? null,
   });
+
+  const angles = req.anglesDeg.map((angleDeg) => ({ angleDeg, ...values(model.optics.at(toRadians(angleDeg as Degrees))) }));
   const h = model.optics.hemispherical();
   const normal = model.optics.at(toRadians(0 as Degrees));
   const u = model.thermal.thermal;
@@ -116,14 +112,7 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
 
   return {
     angles,
-    hemispherical: {
-      solarTransmittance: h.solar.T,
-      solarReflectanceFront: h.solar.Rf,
-      solarReflectanceBack: h.solar.Rb,
-      layerAbsorptance: [...h.solar.A],
-      gValue: g(h.solar),
-      visibleTransmittance: h.visible?.T ?? null,
-    },
+    hemispherical: values(h),
     uValue: u.uValueWPerM2K,
     warnings,
     // Extra fields: the intermediate values a consultant checks.

@@ -152,28 +152,27 @@ export const GlazingRequest = z
 export type GlazingRequest = z.output<typeof GlazingRequest>;
 export type GlazingRequestInput = z.input<typeof GlazingRequest>;
 
-export interface GlazingAngleRow {
-  angleDeg: number;
+/** The values of a make-up at one angle or averaged over the hemisphere. */
+export interface GlazingValues {
   solarTransmittance: number;
   solarReflectanceFront: number;
   solarReflectanceBack: number;
   /** One per pane, outdoor first, of solar radiation incident from outdoors. */
   layerAbsorptance: number[];
   gValue: number;
+  /** null unless every pane has measured visible values */
   visibleTransmittance: number | null;
   visibleReflectanceFront: number | null;
+  visibleReflectanceBack: number | null;
+}
+
+export interface GlazingAngleRow extends GlazingValues {
+  angleDeg: number;
 }
 
 export interface GlazingResponse {
   angles: GlazingAngleRow[];
-  hemispherical: {
-    solarTransmittance: number;
-    solarReflectanceFront: number;
-    solarReflectanceBack: number;
-    layerAbsorptance: number[];
-    gValue: number;
-    visibleTransmittance: number | null;
-  };
+  hemispherical: GlazingValues;
   /** Centre-of-glass U-value, W/(m²K), unrounded. */
   uValue: number;
   warnings: string[];
