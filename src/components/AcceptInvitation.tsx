@@ -1,6 +1,7 @@
 import { useState } from "react";
 import { api, ApiError } from "../lib/client/api";
 import { FormMessage } from "./forms/Field";
+import { useHydrated } from "./forms/useHydrated";
 
 interface Props {
   invitationId: string;
@@ -11,6 +12,7 @@ interface Props {
 }
 
 export default function AcceptInvitation(p: Props) {
+  const hydrated = useHydrated();
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
   if (p.invitedEmail.toLowerCase() !== p.userEmail.toLowerCase()) {
@@ -26,7 +28,7 @@ export default function AcceptInvitation(p: Props) {
       <button
         type="button"
         className="btn"
-        disabled={busy}
+        disabled={!hydrated || busy}
         onClick={async () => {
           setBusy(true);
           setFailure(null);

@@ -5,6 +5,7 @@ import { InvitationRequest } from "../lib/contracts/auth";
 import { ASSIGNABLE_ROLES, ROLE_LABELS, isRoleName } from "../lib/auth/roles";
 import { api, ApiError } from "../lib/client/api";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
+import { useHydrated } from "./forms/useHydrated";
 
 interface Member {
   memberId: string;
@@ -32,6 +33,7 @@ const label = (r: string | null) => (r && isRoleName(r) ? ROLE_LABELS[r] : (r ??
 const date = (s: string) => new Date(s).toLocaleDateString("en-GB", { dateStyle: "medium" });
 
 export default function MembersManager({ organizationId, currentUserId, initialMembers, initialInvitations }: Props) {
+  const hydrated = useHydrated();
   const [members, setMembers] = useState(initialMembers);
   const [invitations, setInvitations] = useState(initialInvitations);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
@@ -69,7 +71,7 @@ export default function MembersManager({ organizationId, currentUserId, initialM
       {message && <FormMessage kind={message.kind}>{message.text}</FormMessage>}
       <section className="card space-y-3">
         <h2>Invite someone</h2>
-        <form onSubmit={onInvite} className="grid items-end gap-3 md:grid-cols-[1fr_200px_auto]" noValidate>
+        <form method="post" onSubmit={onInvite} className="grid items-end gap-3 md:grid-cols-[1fr_200px_auto]" noValidate>
           <Field label="E-mail" htmlFor="invite-email" error={formState.errors.email}>
             <input id="invite-email" type="email" {...register("email")} />
           </Field>
@@ -80,7 +82,7 @@ export default function MembersManager({ organizationId, currentUserId, initialM
               ))}
             </select>
           </Field>
-          <button type="submit" className="btn mb-0.5" disabled={formState.isSubmitting}>
+          <button type="submit" className="btn mb-0.5" disabled={!hydrated || formState.isSubmitting}>
             {formState.isSubmitting ? "Sending…" : "Send invitation"}
           </button>
         </form>

@@ -6,6 +6,7 @@ import { ProjectCreateRequest } from "../lib/contracts/projects";
 import { api, ApiError } from "../lib/client/api";
 import { compassPoint } from "../lib/format";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
+import { useHydrated } from "./forms/useHydrated";
 
 type Input = z.input<typeof ProjectCreateRequest>;
 type Output = z.output<typeof ProjectCreateRequest>;
@@ -20,6 +21,7 @@ interface Props {
 const FIELDS = ["name", "reference", "buildingName", "siteName", "latitudeDeg", "longitudeDeg", "timeZone", "elevationM", "description"] as const;
 
 export default function ProjectForm({ organizations, defaultOrganizationId, project }: Props) {
+  const hydrated = useHydrated();
   const [failure, setFailure] = useState<string | null>(null);
   const zones = useMemo(() => (typeof Intl.supportedValuesOf === "function" ? Intl.supportedValuesOf("timeZone") : []), []);
   const { register, handleSubmit, control, formState, setError } = useForm<Input, unknown, Output>({
@@ -65,7 +67,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
   });
 
   return (
-    <form onSubmit={onSubmit} className="space-y-6" noValidate>
+    <form method="post" onSubmit={onSubmit} className="space-y-6" noValidate>
       {failure && <FormMessage kind="error">{failure}</FormMessage>}
       <fieldset className="card grid gap-4 md:grid-cols-2">
         <legend className="px-1 font-bold">Project</legend>
@@ -157,7 +159,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
       </fieldset>
 
       <div className="flex gap-3">
-        <button type="submit" className="btn" disabled={formState.isSubmitting}>
+        <button type="submit" className="btn" disabled={!hydrated || formState.isSubmitting}>
           {formState.isSubmitting ? "Saving…" : project ? "Save changes" : "Create project"}
         </button>
         <a className="btn-quiet" href={project ? `/projects/${project.id}` : "/dashboard"}>Cancel</a>

@@ -5,10 +5,12 @@ import { z } from "zod";
 import { email, password } from "../../lib/contracts/common";
 import { authClient } from "../../lib/client/auth-client";
 import { Field, FormMessage } from "./Field";
+import { useHydrated } from "./useHydrated";
 
 const RequestSchema = z.object({ email });
 
 export function RequestResetForm() {
+  const hydrated = useHydrated();
   const [sent, setSent] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<{ email: string }>({ resolver: zodResolver(RequestSchema), defaultValues: { email: "" } });
@@ -22,12 +24,12 @@ export function RequestResetForm() {
     return <FormMessage kind="ok">If an account exists for that address, we have sent it a link to choose a new password. The link is valid for one hour.</FormMessage>;
   }
   return (
-    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+    <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       {failure && <FormMessage kind="error">{failure}</FormMessage>}
       <Field label="E-mail" htmlFor="email" error={formState.errors.email}>
         <input id="email" type="email" autoComplete="email" {...register("email")} />
       </Field>
-      <button type="submit" className="btn w-full justify-center" disabled={formState.isSubmitting}>
+      <button type="submit" className="btn w-full justify-center" disabled={!hydrated || formState.isSubmitting}>
         Send me a reset link
       </button>
     </form>
@@ -39,6 +41,7 @@ const ResetSchema = z
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "the two passwords differ" });
 
 export function ResetPasswordForm({ token }: { token: string }) {
+  const hydrated = useHydrated();
   const [done, setDone] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<{ password: string; confirm: string }>({
@@ -59,7 +62,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     );
   }
   return (
-    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+    <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       {failure && <FormMessage kind="error">{failure}</FormMessage>}
       <Field label="New password" htmlFor="password" error={formState.errors.password} hint="At least 8 characters.">
         <input id="password" type="password" autoComplete="new-password" {...register("password")} />
@@ -67,7 +70,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
       <Field label="Repeat the new password" htmlFor="confirm" error={formState.errors.confirm}>
         <input id="confirm" type="password" autoComplete="new-password" {...register("confirm")} />
       </Field>
-      <button type="submit" className="btn w-full justify-center" disabled={formState.isSubmitting}>
+      <button type="submit" className="btn w-full justify-center" disabled={!hydrated || formState.isSubmitting}>
         Set new password
       </button>
     </form>

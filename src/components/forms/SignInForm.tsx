@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { SignInRequest } from "../../lib/contracts/auth";
 import { authClient } from "../../lib/client/auth-client";
 import { Field, FormMessage } from "./Field";
+import { useHydrated } from "./useHydrated";
 
 type Values = { email: string; password: string };
 
@@ -13,6 +14,7 @@ export function safeNext(next: string | null | undefined): string {
 }
 
 export default function SignInForm({ next, email }: { next?: string; email?: string }) {
+  const hydrated = useHydrated();
   const [failure, setFailure] = useState<string | null>(null);
   const { register, handleSubmit, formState } = useForm<Values>({
     resolver: zodResolver(SignInRequest),
@@ -28,7 +30,7 @@ export default function SignInForm({ next, email }: { next?: string; email?: str
     window.location.assign(safeNext(next));
   });
   return (
-    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+    <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       {failure && <FormMessage kind="error">{failure}</FormMessage>}
       <Field label="E-mail" htmlFor="email" error={formState.errors.email}>
         <input id="email" type="email" autoComplete="username" {...register("email")} />
@@ -36,7 +38,7 @@ export default function SignInForm({ next, email }: { next?: string; email?: str
       <Field label="Password" htmlFor="password" error={formState.errors.password}>
         <input id="password" type="password" autoComplete="current-password" {...register("password")} />
       </Field>
-      <button type="submit" className="btn w-full justify-center" disabled={formState.isSubmitting}>
+      <button type="submit" className="btn w-full justify-center" disabled={!hydrated || formState.isSubmitting}>
         {formState.isSubmitting ? "Signing in…" : "Sign in"}
       </button>
     </form>

@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { SignUpRequest } from "../../lib/contracts/auth";
 import { api, ApiError } from "../../lib/client/api";
 import { applyServerErrors, Field, FormMessage } from "./Field";
+import { useHydrated } from "./useHydrated";
 
 type Values = { name: string; email: string; password: string; organizationName?: string; invitationId?: string };
 
@@ -13,6 +14,7 @@ interface Props {
 }
 
 export default function SignUpForm({ invitation }: Props) {
+  const hydrated = useHydrated();
   const [failure, setFailure] = useState<string | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<Values>({
     resolver: zodResolver(SignUpRequest) as never,
@@ -30,7 +32,7 @@ export default function SignUpForm({ invitation }: Props) {
     }
   });
   return (
-    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+    <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       {failure && <FormMessage kind="error">{failure}</FormMessage>}
       <Field label="Your name" htmlFor="name" error={formState.errors.name}>
         <input id="name" autoComplete="name" {...register("name")} />
@@ -50,7 +52,7 @@ export default function SignUpForm({ invitation }: Props) {
           <input id="organizationName" autoComplete="organization" {...register("organizationName")} />
         </Field>
       )}
-      <button type="submit" className="btn w-full justify-center" disabled={formState.isSubmitting}>
+      <button type="submit" className="btn w-full justify-center" disabled={!hydrated || formState.isSubmitting}>
         {formState.isSubmitting ? "Creating your account…" : invitation ? "Create account and join" : "Create account"}
       </button>
     </form>

@@ -120,7 +120,7 @@ export default function GlazingComposer() {
 
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,440px)_1fr]">
-      <form className="space-y-4" noValidate onSubmit={(e) => e.preventDefault()} aria-label="Glazing make-up">
+      <form method="post" className="space-y-4" noValidate onSubmit={(e) => e.preventDefault()} aria-label="Glazing make-up">
         <div>
           <label htmlFor="preset">Start from</label>
           <select

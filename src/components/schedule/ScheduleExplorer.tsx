@@ -6,6 +6,7 @@ import { compassPoint } from "../../lib/format";
 import { FormMessage } from "../forms/Field";
 import ScheduleHeatmap, { type HeatCell } from "./ScheduleHeatmap";
 import DailyProfile from "./DailyProfile";
+import { useHydrated } from "../forms/useHydrated";
 
 interface Facade {
   id: string;
@@ -42,6 +43,7 @@ const localHourOf = (iso: string) => Number(iso.slice(11, 13)) + Number(iso.slic
 const f = (v: number | null | undefined, d = 1) => (v == null ? "—" : v.toFixed(d));
 
 export default function ScheduleExplorer({ site, facades }: { site: Site; facades: Facade[] }) {
+  const hydrated = useHydrated();
   const [facadeId, setFacadeId] = useState(facades[0]?.id ?? "");
   const [presetId, setPresetId] = useState(PRESETS[1]!.id);
   const [year, setYear] = useState(new Date().getFullYear());
@@ -122,6 +124,7 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
   return (
     <div className="space-y-5">
       <form
+        method="post"
         className="card grid items-end gap-4 md:grid-cols-3 xl:grid-cols-6"
         onSubmit={(e) => {
           e.preventDefault();
@@ -187,7 +190,7 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
             </div>
           )}
         </fieldset>
-        <button type="submit" className="btn justify-center" disabled={busy || !facade}>
+        <button type="submit" className="btn justify-center" disabled={!hydrated || busy || !facade}>
           {busy ? "Calculating…" : "Calculate the year"}
         </button>
       </form>
