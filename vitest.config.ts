@@ -1,7 +1,9 @@
 /// <reference types="vitest/config" />
+import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
 
 export default defineConfig({
+  resolve: { alias: { "@": fileURLToPath(new URL("./src", import.meta.url)) } },
   test: {
     include: ["tests/unit/**/*.test.ts", "tests/server/**/*.test.ts", "tests/reference/**/*.test.ts"],
     environment: "node",

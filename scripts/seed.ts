@@ -1,6 +1,6 @@
 // Seeds the demo scenario (src/lib/demo-scenario.ts). Idempotent: rows that exist are left alone.
-import { seedDemo } from "../src/lib/server/services/seed";
-import { pool } from "../src/lib/server/db/client";
+import { seedDemo } from "@/lib/server/services/seed";
+import { pool } from "@/lib/server/db/client";
 
 try {
   const created = await seedDemo();

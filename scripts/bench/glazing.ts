@@ -1,7 +1,7 @@
 // The whole glazing calculation as the API runs it (request already validated): a 91-angle table plus
 // hemispherical values, g at every angle, EN 673 U-value and warnings, for triple glazings.
-import { GlazingRequest, type GlazingRequestInput } from "../../src/lib/contracts/glazing";
-import { calculateGlazing } from "../../src/lib/calc/glazing";
+import { GlazingRequest, type GlazingRequestInput } from "@/lib/contracts/glazing";
+import { calculateGlazing } from "@/lib/calc/glazing";
 
 const clear = { kind: "pane", thicknessMm: 4, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;
 const coated = {

@@ -6,11 +6,11 @@
  * Run alone from the repository root:
  *   npx tsx -e 'import("./scripts/bench/optics.ts").then(m=>m.run())'
  */
-import { absorbingPaneOptics, checkAbsorbingPane, absorbingPaneOpticsUnchecked } from "../../src/lib/physics/absorbing-pane";
-import { AngularTable } from "../../src/lib/physics/angular-table";
-import { measuredBandAtUnchecked, prepareMeasuredPane } from "../../src/lib/physics/measured-pane";
-import { prepareGlazing, type PaneSpec, type PreparedGlazing } from "../../src/lib/physics/optics";
-import { asRadians, type Radians } from "../../src/lib/physics/units";
+import { absorbingPaneOptics, checkAbsorbingPane, absorbingPaneOpticsUnchecked } from "@/lib/physics/absorbing-pane";
+import { AngularTable } from "@/lib/physics/angular-table";
+import { measuredBandAtUnchecked, prepareMeasuredPane } from "@/lib/physics/measured-pane";
+import { prepareGlazing, type PaneSpec, type PreparedGlazing } from "@/lib/physics/optics";
+import { asRadians, type Radians } from "@/lib/physics/units";
 
 const TRIALS = 9;
 

@@ -1,7 +1,7 @@
 // The schedule endpoint over real HTTP (session lookup, validation, computation, 2.5 MB of JSON on a socket):
 // one surface, a full year of hours. Needs a running Paneray with the demo seeded (`npm start`); set
 // BENCH_URL (e.g. http://127.0.0.1:4321). Without it this module says so and measures nothing.
-import { DEMO_PASSWORD, demoUser } from "../../src/lib/demo-scenario";
+import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
 
 export async function run(): Promise<void> {
   const base = process.env.BENCH_URL;

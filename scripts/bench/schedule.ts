@@ -3,8 +3,8 @@
 // (a) the floor: a bare loop that only computes the incidence (dot product) and interpolates τ from a
 // typed array for the same 72 series, and (b) evaluating the Fresnel stack directly at every sunlit hour.
 // Also the endpoint handler for one surface and a full year (validation + compute + JSON, in process).
-import { ScheduleRequest, type ScheduleRequestInput } from "../../src/lib/contracts/schedule";
-import { PRESETS } from "../../src/lib/glazing-presets";
+import { ScheduleRequest, type ScheduleRequestInput } from "@/lib/contracts/schedule";
+import { PRESETS } from "@/lib/glazing-presets";
 import {
   allocateColumns,
   computeSurfaceSeries,
@@ -15,9 +15,9 @@ import {
   type PreparedSurface,
   type SiteSeries,
   type SurfaceColumns,
-} from "../../src/lib/calc/schedule";
-import { prepareGlazingModel } from "../../src/lib/calc/glazing";
-import { POST } from "../../src/pages/api/v1/calc/schedule";
+} from "@/lib/calc/schedule";
+import { prepareGlazingModel } from "@/lib/calc/glazing";
+import { POST } from "@/pages/api/v1/calc/schedule";
 
 const YEAR = 2026;
 const site = { latitudeDeg: 38.7053, longitudeDeg: -9.1721, timeZone: "Europe/Lisbon", elevationM: 12 };

@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { api, ApiError } from "../lib/client/api";
+import { api, ApiError } from "@/lib/client/api";
 import { useHydrated } from "./forms/useHydrated";
 
 export default function DeleteProjectButton({ projectId, projectName }: { projectId: string; projectName: string }) {

@@ -1,9 +1,9 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { InvitationRequest } from "../lib/contracts/auth";
-import { ASSIGNABLE_ROLES, ROLE_LABELS, isRoleName } from "../lib/auth/roles";
-import { api, ApiError } from "../lib/client/api";
+import { InvitationRequest } from "@/lib/contracts/auth";
+import { ASSIGNABLE_ROLES, ROLE_LABELS, isRoleName } from "@/lib/auth/roles";
+import { api, ApiError } from "@/lib/client/api";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
 import { useHydrated } from "./forms/useHydrated";
 

@@ -2,9 +2,9 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
-import { ProjectCreateRequest } from "../lib/contracts/projects";
-import { api, ApiError } from "../lib/client/api";
-import { compassPoint } from "../lib/format";
+import { ProjectCreateRequest } from "@/lib/contracts/projects";
+import { api, ApiError } from "@/lib/client/api";
+import { compassPoint } from "@/lib/format";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
 import { useHydrated } from "./forms/useHydrated";
 

@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { api, ApiError } from "../lib/client/api";
+import { api, ApiError } from "@/lib/client/api";
 import { FormMessage } from "./forms/Field";
 
 interface Share {

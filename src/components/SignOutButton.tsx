@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { authClient } from "../lib/client/auth-client";
+import { authClient } from "@/lib/client/auth-client";
 import { useHydrated } from "./forms/useHydrated";
 
 export default function SignOutButton() {

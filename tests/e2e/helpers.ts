@@ -3,7 +3,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { simpleParser, type ParsedMail } from "mailparser";
 
-export { DEMO_PASSWORD, demoUser, DEMO_PROJECTS, DEMO_ORGANIZATION } from "../../src/lib/demo-scenario";
+export { DEMO_PASSWORD, demoUser, DEMO_PROJECTS, DEMO_ORGANIZATION } from "@/lib/demo-scenario";
 
 export async function signIn(page: Page, email: string, password: string) {
   await page.goto("/signin");

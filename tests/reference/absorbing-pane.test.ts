@@ -10,9 +10,9 @@ import {
   absorbingPaneOptics,
   checkAbsorbingPane,
   slabFromFaceReflectance,
-} from "../../src/lib/physics/absorbing-pane";
-import { fresnelReflectancesReal } from "../../src/lib/physics/fresnel";
-import { asRadians, toDegrees } from "../../src/lib/physics/units";
+} from "@/lib/physics/absorbing-pane";
+import { fresnelReflectancesReal } from "@/lib/physics/fresnel";
+import { asRadians, toDegrees } from "@/lib/physics/units";
 import { printed, deg, pane6mm, lowIron4mm } from "./fixtures";
 
 

@@ -12,9 +12,9 @@ import {
   angularTablesFromFunction,
   cosGridAngle,
   maxInterpolationError,
-} from "../../src/lib/physics/angular-table";
-import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
-import type { Radians } from "../../src/lib/physics/units";
+} from "@/lib/physics/angular-table";
+import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
+import type { Radians } from "@/lib/physics/units";
 import { clear6mmSpec, coated6mmSpec } from "./fixtures";
 
 const clear4: PaneSpec = { kind: "physical", thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 20 };

@@ -22,8 +22,8 @@ import {
   profileAngleRad,
   sunlitFractionAt,
   type ShadingSpec,
-} from "../../src/lib/physics/external-shading";
-import { surfaceOrientationDeg } from "../../src/lib/physics/surface-geometry";
+} from "@/lib/physics/external-shading";
+import { surfaceOrientationDeg } from "@/lib/physics/surface-geometry";
 import { deg, printed } from "./fixtures";
 
 const RAD = 180 / Math.PI;

@@ -1,7 +1,7 @@
 // Shared by the reference tests: the handbook's test panes and its comparison rule for printed values.
 import { expect } from "vitest";
-import { asDegrees, toRadians, type Radians } from "../../src/lib/physics/units";
-import type { PaneSpec } from "../../src/lib/physics/optics";
+import { asDegrees, toRadians, type Radians } from "@/lib/physics/units";
+import type { PaneSpec } from "@/lib/physics/optics";
 
 export const deg = (d: number): Radians => toRadians(asDegrees(d));
 

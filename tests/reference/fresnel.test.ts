@@ -17,8 +17,8 @@ import {
   fresnelTransmittanceAtDepth,
   normalWaveVectorComponents,
   snellRefractionAngle,
-} from "../../src/lib/physics/fresnel";
-import { asRadians, toDegrees } from "../../src/lib/physics/units";
+} from "@/lib/physics/fresnel";
+import { asRadians, toDegrees } from "@/lib/physics/units";
 import { printed, deg } from "./fixtures";
 
 

@@ -22,8 +22,8 @@ import {
   secondaryHeatTransfer,
   secondaryHeatTransferFactors,
   secondaryHeatTransferFactorsEn410,
-} from '../../src/lib/physics/g-value';
-import { uValueEn673, type GlazingThermalInput } from '../../src/lib/physics/u-value';
+} from '@/lib/physics/g-value';
+import { uValueEn673, type GlazingThermalInput } from '@/lib/physics/u-value';
 
 const G_TOL = 1.5e-6;
 

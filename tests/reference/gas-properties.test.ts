@@ -17,7 +17,7 @@ import {
   isGasName,
   type GasName,
   type GasProperties,
-} from '../../src/lib/physics/gas-properties';
+} from '@/lib/physics/gas-properties';
 
 // [EN 673 table, mem] ρ [kg/m³], μ [kg/(m·s)], λ [W/(mK)], c [J/(kg·K)] at 10 °C.
 const en673Table10C: Record<GasName, GasProperties> = {

@@ -6,14 +6,14 @@
 // 400-node Gauss–Legendre rule, per polarisation where stacks are involved. Printed to ~6
 // significant digits: each comparison allows half a unit in the last printed digit.
 import { describe, expect, it } from "vitest";
-import { absorbingPaneOptics } from "../../src/lib/physics/absorbing-pane";
+import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import {
   DEFAULT_HEMISPHERICAL_NODES,
   gaussLegendre,
   hemisphericalAverage,
   hemisphericalQuadrature,
-} from "../../src/lib/physics/hemispherical";
-import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
+} from "@/lib/physics/hemispherical";
+import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
 import { printed, pane6mm, lowIron4mm } from "./fixtures";
 
 

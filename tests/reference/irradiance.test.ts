@@ -35,8 +35,8 @@ import {
   relativeAirMassKastenYoung1989,
   skyDiffuseFromCoefficients,
   tiltedSurfaceIrradiance,
-} from "../../src/lib/physics/irradiance";
-import { angleOfIncidenceDeg } from "../../src/lib/physics/surface-geometry";
+} from "@/lib/physics/irradiance";
+import { angleOfIncidenceDeg } from "@/lib/physics/surface-geometry";
 import { deg, printed } from "./fixtures";
 
 const cosd = (d: number): number => Math.cos((d * Math.PI) / 180);

@@ -7,16 +7,16 @@
 // EN 410:2011 §5 and ISO 9050:2003 §4 (clause numbers from memory). Printed to 6 decimals:
 // each comparison allows half a unit in the last printed digit.
 import { describe, expect, it } from "vitest";
-import { absorbingPaneOptics } from "../../src/lib/physics/absorbing-pane";
+import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import {
   combineLayers,
   combineTwoLayers,
   glazingOpticsAt,
   type LayerOptics,
   type PolarizedLayerSource,
-} from "../../src/lib/physics/layer-stack";
-import { prepareGlazing, type PaneSpec } from "../../src/lib/physics/optics";
-import { type Radians } from "../../src/lib/physics/units";
+} from "@/lib/physics/layer-stack";
+import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
+import { type Radians } from "@/lib/physics/units";
 import { printed, deg, pane6mm } from "./fixtures";
 
 

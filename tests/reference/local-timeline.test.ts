@@ -22,7 +22,7 @@
 // - calendar closed forms (365/366 days, 24 h a day).
 // All comparisons are exact: the quantities are integers of milliseconds or strings.
 import { describe, expect, it } from "vitest";
-import { localTimeline, type Timeline } from "../../src/lib/time/local-timeline";
+import { localTimeline, type Timeline } from "@/lib/time/local-timeline";
 
 const H = 3_600_000;
 const MIN = 60_000;

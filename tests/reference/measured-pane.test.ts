@@ -9,7 +9,7 @@
 // J. Karlsson & A. Roos, Solar Energy 69(4):321–329, 2000), evaluated independently [calc];
 // they are not validated against the paper.
 import { describe, expect, it } from "vitest";
-import { absorbingPaneOptics } from "../../src/lib/physics/absorbing-pane";
+import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import {
   invertUncoatedPane,
   karlssonRoosTransmittanceRatio,
@@ -20,8 +20,8 @@ import {
   referenceInternalTransmittance,
   UNCOATED_FACE_TOLERANCE,
   type MeasuredBandModel,
-} from "../../src/lib/physics/measured-pane";
-import { asRadians, type Radians } from "../../src/lib/physics/units";
+} from "@/lib/physics/measured-pane";
+import { asRadians, type Radians } from "@/lib/physics/units";
 import { printed, deg } from "./fixtures";
 
 

@@ -11,11 +11,11 @@
 import Complex from "complex.js";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { absorbingPaneOptics } from "../../src/lib/physics/absorbing-pane";
-import { fresnelInterface } from "../../src/lib/physics/fresnel";
-import type { MeasuredValues } from "../../src/lib/physics/measured-pane";
-import { prepareGlazing, type BandOptics, type PaneSpec } from "../../src/lib/physics/optics";
-import { asRadians, type Radians } from "../../src/lib/physics/units";
+import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
+import { fresnelInterface } from "@/lib/physics/fresnel";
+import type { MeasuredValues } from "@/lib/physics/measured-pane";
+import { prepareGlazing, type BandOptics, type PaneSpec } from "@/lib/physics/optics";
+import { asRadians, type Radians } from "@/lib/physics/units";
 import { clear6mmSpec, coated6mmSpec } from "./fixtures";
 
 const dbl = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });

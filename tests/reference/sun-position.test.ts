@@ -11,7 +11,7 @@
 import { Body, Equator, Horizon, Observer, SearchHourAngle } from "astronomy-engine";
 import { getPosition } from "suncalc";
 import { describe, expect, it } from "vitest";
-import { sunPositionSuncalc, sunTrack } from "../../src/lib/physics/sun-position";
+import { sunPositionSuncalc, sunTrack } from "@/lib/physics/sun-position";
 
 const RAD = 180 / Math.PI;
 

@@ -21,7 +21,7 @@ import {
   surfaceFrame,
   surfaceOrientation,
   surfaceOrientationDeg,
-} from "../../src/lib/physics/surface-geometry";
+} from "@/lib/physics/surface-geometry";
 import { deg, printed } from "./fixtures";
 
 const south = surfaceFrame(surfaceOrientationDeg(180, 90));

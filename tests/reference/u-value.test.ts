@@ -23,8 +23,8 @@ import {
   uValueEn673,
   type GlazingThermalInput,
   type PaneThermalInput,
-} from '../../src/lib/physics/u-value';
-import type { GasFill } from '../../src/lib/physics/gas-properties';
+} from '@/lib/physics/u-value';
+import type { GasFill } from '@/lib/physics/gas-properties';
 
 const MM = 1e-3;
 const AR90: GasFill = { argon: 0.9, air: 0.1 };

@@ -1,12 +1,12 @@
 // Server rules against a real (throwaway) PostgreSQL: sign-up, memberships, invitations, last-owner guard.
 import { afterAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import { db, pool } from "../../src/lib/server/db/client";
-import { invitation, member } from "../../src/lib/server/db/schema";
-import { signUp, slugify } from "../../src/lib/server/services/accounts";
-import { membershipsOf } from "../../src/lib/server/services/access";
-import { acceptInvitation, changeRole, inviteMember, removeMember, membersOf, invitationSummary } from "../../src/lib/server/services/members";
-import { HttpError } from "../../src/lib/server/http";
+import { db, pool } from "@/lib/server/db/client";
+import { invitation, member } from "@/lib/server/db/schema";
+import { signUp, slugify } from "@/lib/server/services/accounts";
+import { membershipsOf } from "@/lib/server/services/access";
+import { acceptInvitation, changeRole, inviteMember, removeMember, membersOf, invitationSummary } from "@/lib/server/services/members";
+import { HttpError } from "@/lib/server/http";
 import { newOwner, uniqueEmail, cookieHeaders } from "./helpers";
 
 afterAll(() => pool.end());

@@ -10,9 +10,9 @@ afterEach(() => {
 
 async function callHealth(): Promise<Response> {
   vi.resetModules();
-  const mod = await import("../../src/pages/api/health");
+  const mod = await import("@/pages/api/health");
   const res = await (mod.GET as (ctx: unknown) => Promise<Response>)({});
-  const { pool } = await import("../../src/lib/server/db/client");
+  const { pool } = await import("@/lib/server/db/client");
   await pool.end();
   return res;
 }

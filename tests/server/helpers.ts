@@ -1,4 +1,4 @@
-import { signUp } from "../../src/lib/server/services/accounts";
+import { signUp } from "@/lib/server/services/accounts";
 
 let n = 0;
 /** A unique address per call (tests share one throwaway database). */

@@ -1,14 +1,14 @@
 // Project visibility and editing rules against PostgreSQL.
 import { afterAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import { db, pool } from "../../src/lib/server/db/client";
-import { invitation } from "../../src/lib/server/db/schema";
-import { signUp } from "../../src/lib/server/services/accounts";
-import { requireProject } from "../../src/lib/server/services/access";
-import { createProject, facadesOf, projectsForUser, shareProject, unshareProject, updateProject } from "../../src/lib/server/services/projects";
-import { inviteMember } from "../../src/lib/server/services/members";
-import { ProjectCreateRequest } from "../../src/lib/contracts/projects";
-import { HttpError } from "../../src/lib/server/http";
+import { db, pool } from "@/lib/server/db/client";
+import { invitation } from "@/lib/server/db/schema";
+import { signUp } from "@/lib/server/services/accounts";
+import { requireProject } from "@/lib/server/services/access";
+import { createProject, facadesOf, projectsForUser, shareProject, unshareProject, updateProject } from "@/lib/server/services/projects";
+import { inviteMember } from "@/lib/server/services/members";
+import { ProjectCreateRequest } from "@/lib/contracts/projects";
+import { HttpError } from "@/lib/server/http";
 import { newOwner, uniqueEmail } from "./helpers";
 
 afterAll(() => pool.end());

@@ -2,10 +2,10 @@
 // finite numbers or raises a RangeError (which the endpoints answer as 400). Property-based (fast-check).
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { GlazingRequest } from "../../src/lib/contracts/glazing";
-import { ScheduleRequest } from "../../src/lib/contracts/schedule";
-import { calculateGlazing } from "../../src/lib/calc/glazing";
-import { scheduleResponse } from "../../src/lib/calc/schedule-response";
+import { GlazingRequest } from "@/lib/contracts/glazing";
+import { ScheduleRequest } from "@/lib/contracts/schedule";
+import { calculateGlazing } from "@/lib/calc/glazing";
+import { scheduleResponse } from "@/lib/calc/schedule-response";
 
 const physical = fc.record({
   kind: fc.constant("pane"),

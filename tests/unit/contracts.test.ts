@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { ProjectCreateRequest, ProjectUpdateRequest } from "../../src/lib/contracts/projects";
-import { InvitationRequest, SignUpRequest } from "../../src/lib/contracts/auth";
-import { isIanaTimeZone } from "../../src/lib/contracts/common";
-import { zodFieldErrors } from "../../src/lib/server/http";
+import { ProjectCreateRequest, ProjectUpdateRequest } from "@/lib/contracts/projects";
+import { InvitationRequest, SignUpRequest } from "@/lib/contracts/auth";
+import { isIanaTimeZone } from "@/lib/contracts/common";
+import { zodFieldErrors } from "@/lib/server/http";
 
 const valid = {
   organizationId: "org_1",

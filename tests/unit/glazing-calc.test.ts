@@ -4,8 +4,8 @@
 // (Duffie & Beckman ch. 5; Rubin 1982). Tolerance 5e-7 = half a unit in the printed 6th decimal
 // unless stated.
 import { describe, expect, it } from "vitest";
-import { GlazingRequest, type GlazingRequestInput } from "../../src/lib/contracts/glazing";
-import { calculateGlazing } from "../../src/lib/calc/glazing";
+import { GlazingRequest, type GlazingRequestInput } from "@/lib/contracts/glazing";
+import { calculateGlazing } from "@/lib/calc/glazing";
 
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;
 const pane4 = { kind: "pane", thicknessMm: 4, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;

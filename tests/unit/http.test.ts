@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { endpoint, HttpError, readJson } from "../../src/lib/server/http";
+import { endpoint, HttpError, readJson } from "@/lib/server/http";
 
 const Schema = z.object({ a: z.number(), b: z.object({ c: z.string() }) });
 const req = (body: BodyInit | null, headers: Record<string, string> = { "content-type": "application/json" }) =>

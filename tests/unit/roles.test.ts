@@ -2,7 +2,7 @@
 // edits projects and glazing; architect reads, comments, approves or rejects options; client reads shared
 // projects and receives exports. Expected values follow that table, not the implementation.
 import { describe, expect, it } from "vitest";
-import { roleCan, roles, isRoleName, ROLE_NAMES, type Permission, type RoleName } from "../../src/lib/auth/roles";
+import { roleCan, roles, isRoleName, ROLE_NAMES, type Permission, type RoleName } from "@/lib/auth/roles";
 
 const table: [Permission, Record<RoleName, boolean>][] = [
   [{ member: ["create"] }, { owner: true, consultant: false, architect: false, client: false }],

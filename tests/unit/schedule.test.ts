@@ -3,8 +3,8 @@
 // Spencer 1971, Kasten & Young 1989, Liu & Jordan 1960, Hay & Davies 1980, Perez et al. 1990 transposition);
 // [calc F4/F5] for the glazing. Internal consistency checks are labelled as such.
 import { describe, expect, it } from "vitest";
-import { ScheduleRequest, type ScheduleRequestInput } from "../../src/lib/contracts/schedule";
-import { GlazingRequest } from "../../src/lib/contracts/glazing";
+import { ScheduleRequest, type ScheduleRequestInput } from "@/lib/contracts/schedule";
+import { GlazingRequest } from "@/lib/contracts/glazing";
 import {
   allocateColumns,
   computeSurfaceSeries,
@@ -12,10 +12,10 @@ import {
   prepareSite,
   prepareSurface,
   type SiteSeries,
-} from "../../src/lib/calc/schedule";
-import { scheduleResponse } from "../../src/lib/calc/schedule-response";
-import { calculateGlazing } from "../../src/lib/calc/glazing";
-import { emptyPerezCoefficients, emptyHaydaviesCoefficients, perezSkyCoefficients, haydaviesSkyCoefficients } from "../../src/lib/physics/irradiance";
+} from "@/lib/calc/schedule";
+import { scheduleResponse } from "@/lib/calc/schedule-response";
+import { calculateGlazing } from "@/lib/calc/glazing";
+import { emptyPerezCoefficients, emptyHaydaviesCoefficients, perezSkyCoefficients, haydaviesSkyCoefficients } from "@/lib/physics/irradiance";
 
 const RAD = Math.PI / 180;
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;

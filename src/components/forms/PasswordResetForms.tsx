@@ -2,8 +2,8 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { z } from "zod";
-import { email, password } from "../../lib/contracts/common";
-import { authClient } from "../../lib/client/auth-client";
+import { email, password } from "@/lib/contracts/common";
+import { authClient } from "@/lib/client/auth-client";
 import { Field, FormMessage } from "./Field";
 import { useHydrated } from "./useHydrated";
 

@@ -1,8 +1,8 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { SignInRequest } from "../../lib/contracts/auth";
-import { authClient } from "../../lib/client/auth-client";
+import { SignInRequest } from "@/lib/contracts/auth";
+import { authClient } from "@/lib/client/auth-client";
 import { Field, FormMessage } from "./Field";
 import { useHydrated } from "./useHydrated";
 

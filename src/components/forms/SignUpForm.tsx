@@ -1,8 +1,8 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { SignUpRequest } from "../../lib/contracts/auth";
-import { api, ApiError } from "../../lib/client/api";
+import { SignUpRequest } from "@/lib/contracts/auth";
+import { api, ApiError } from "@/lib/client/api";
 import { applyServerErrors, Field, FormMessage } from "./Field";
 import { useHydrated } from "./useHydrated";
 

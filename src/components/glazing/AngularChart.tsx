@@ -1,5 +1,5 @@
 import { line, scaleLinear } from "d3";
-import ChartLegend from "../ChartLegend";
+import ChartLegend from "@/components/ChartLegend";
 
 export interface Series {
   key: string;

@@ -1,4 +1,4 @@
-import type { Gas } from "../../lib/contracts/glazing";
+import type { Gas } from "@/lib/contracts/glazing";
 
 const NAMES = ["air", "argon", "krypton"] as const;
 type Name = (typeof NAMES)[number];

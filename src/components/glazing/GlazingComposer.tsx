@@ -2,12 +2,12 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { Controller, useFieldArray, useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
-import { GlazingRequest, MAX_PANES, type Gap, type GlazingResponse, type MeasuredPane, type PhysicalPane } from "../../lib/contracts/glazing";
-import { api, ApiError } from "../../lib/client/api";
-import { PRESETS } from "../../lib/glazing-presets";
+import { GlazingRequest, MAX_PANES, type Gap, type GlazingResponse, type MeasuredPane, type PhysicalPane } from "@/lib/contracts/glazing";
+import { api, ApiError } from "@/lib/client/api";
+import { PRESETS } from "@/lib/glazing-presets";
 import AngularChart, { type Series } from "./AngularChart";
 import GasField from "./GasField";
-import { Field, FormMessage } from "../forms/Field";
+import { Field, FormMessage } from "@/components/forms/Field";
 
 type PhysicalIn = z.input<typeof PhysicalPane>;
 type MeasuredIn = z.input<typeof MeasuredPane>;

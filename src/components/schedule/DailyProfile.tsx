@@ -1,6 +1,6 @@
 import { line, scaleLinear } from "d3";
-import ChartLegend from "../ChartLegend";
-import type { ScheduleRow } from "../../lib/contracts/schedule";
+import ChartLegend from "@/components/ChartLegend";
+import type { ScheduleRow } from "@/lib/contracts/schedule";
 
 const W = 520;
 const H = 260;

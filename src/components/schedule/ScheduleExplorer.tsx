@@ -1,12 +1,12 @@
 import { useMemo, useState } from "react";
-import type { ScheduleRow, PeriodTotals } from "../../lib/contracts/schedule";
-import { PRESETS } from "../../lib/glazing-presets";
-import { api, ApiError } from "../../lib/client/api";
-import { compassPoint } from "../../lib/format";
-import { FormMessage } from "../forms/Field";
+import type { ScheduleRow, PeriodTotals } from "@/lib/contracts/schedule";
+import { PRESETS } from "@/lib/glazing-presets";
+import { api, ApiError } from "@/lib/client/api";
+import { compassPoint } from "@/lib/format";
+import { FormMessage } from "@/components/forms/Field";
 import ScheduleHeatmap, { type HeatCell } from "./ScheduleHeatmap";
 import DailyProfile from "./DailyProfile";
-import { useHydrated } from "../forms/useHydrated";
+import { useHydrated } from "@/components/forms/useHydrated";
 
 interface Facade {
   id: string;

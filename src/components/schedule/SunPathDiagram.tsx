@@ -1,8 +1,8 @@
 import { useMemo } from "react";
 import { line, scaleLinear } from "d3";
-import { sunPositionSuncalc } from "../../lib/physics/sun-position";
-import { localTimeline } from "../../lib/time/local-timeline";
-import { compassPoint } from "../../lib/format";
+import { sunPositionSuncalc } from "@/lib/physics/sun-position";
+import { localTimeline } from "@/lib/time/local-timeline";
+import { compassPoint } from "@/lib/format";
 
 interface Props {
   latitudeDeg: number;

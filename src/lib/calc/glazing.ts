@@ -4,12 +4,12 @@
  * requested angle and over the hemisphere, and combines them with the EN 673 / EN 410 thermal
  * network into g-values and the U-value. Pure (no I/O), so it also runs in the browser.
  */
-import type { Gap, Gas, GlazingRequest, GlazingResponse, GlazingValues, Pane } from "../contracts/glazing";
-import { DEFAULT_EMISSIVITY } from "../contracts/glazing";
-import { prepareGlazing, type GlazingOptics, type PaneSpec, type PreparedGlazing } from "../physics/optics";
-import { gValue, secondaryHeatTransferFactorsEn410, type SecondaryHeatTransferResult } from "../physics/g-value";
-import type { GasFill } from "../physics/gas-properties";
-import { toRadians, type Degrees } from "../physics/units";
+import type { Gap, Gas, GlazingRequest, GlazingResponse, GlazingValues, Pane } from "@/lib/contracts/glazing";
+import { DEFAULT_EMISSIVITY } from "@/lib/contracts/glazing";
+import { prepareGlazing, type GlazingOptics, type PaneSpec, type PreparedGlazing } from "@/lib/physics/optics";
+import { gValue, secondaryHeatTransferFactorsEn410, type SecondaryHeatTransferResult } from "@/lib/physics/g-value";
+import type { GasFill } from "@/lib/physics/gas-properties";
+import { toRadians, type Degrees } from "@/lib/physics/units";
 
 /** Pane absorptance (sun from outdoors, normal incidence) above which thermal stress needs checking (common practice, no source). */
 export const THERMAL_STRESS_ABSORPTANCE = 0.5;

@@ -2,7 +2,7 @@
  * Turns a schedule computation (typed arrays) into the JSON body of POST /api/v1/calc/schedule.
  * Rounding at output only: angles to 0.001°, fractions to 1e-6, W/m² to 0.01, W to 0.1.
  */
-import type { ScheduleRequest, ScheduleRow } from "../contracts/schedule";
+import type { ScheduleRequest, ScheduleRow } from "@/lib/contracts/schedule";
 import { computeSchedule, type ScheduleComputation } from "./schedule";
 import { scheduleTotals } from "./schedule-totals";
 

@@ -3,7 +3,7 @@
  * with the peak interval of each. Energy of a row = power × step length (the row's irradiance
  * stands for its whole interval, evaluated at the interval's midpoint).
  */
-import type { PeriodTotals } from "../contracts/schedule";
+import type { PeriodTotals } from "@/lib/contracts/schedule";
 
 export interface TotalsInput {
   /** W/m² per row */

@@ -18,14 +18,14 @@
  * The circumsolar part of the sky is shaded like the beam (common practice); all diffuse light
  * (circumsolar included) passes the glazing with the hemispherical τ and g (common practice).
  */
-import type { GlazingRequest } from "../contracts/glazing";
-import type { ScheduleRequest } from "../contracts/schedule";
+import type { GlazingRequest } from "@/lib/contracts/glazing";
+import type { ScheduleRequest } from "@/lib/contracts/schedule";
 import { prepareGlazingModel } from "./glazing";
-import { gValue } from "../physics/g-value";
-import { angularTablesFromFunction, type AngularTable } from "../physics/angular-table";
-import { sunTrack, type SunTrack } from "../physics/sun-position";
-import { surfaceFrame, surfaceOrientationDeg, type SurfaceFrame } from "../physics/surface-geometry";
-import { PreparedShading } from "../physics/external-shading";
+import { gValue } from "@/lib/physics/g-value";
+import { angularTablesFromFunction, type AngularTable } from "@/lib/physics/angular-table";
+import { sunTrack, type SunTrack } from "@/lib/physics/sun-position";
+import { surfaceFrame, surfaceOrientationDeg, type SurfaceFrame } from "@/lib/physics/surface-geometry";
+import { PreparedShading } from "@/lib/physics/external-shading";
 import {
   DEFAULT_MONTHLY_LINKE_TURBIDITY,
   clearSkyIneichenPerez2002,
@@ -38,8 +38,8 @@ import {
   prepareTranspositionSurface,
   relativeAirMassKastenYoung1989,
   STANDARD_PRESSURE_PA,
-} from "../physics/irradiance";
-import { localTimeline, type Timeline } from "../time/local-timeline";
+} from "@/lib/physics/irradiance";
+import { localTimeline, type Timeline } from "@/lib/time/local-timeline";
 
 const RAD = Math.PI / 180;
 /** Gauss–Legendre points per window axis for the diffuse view factors of shading devices. */

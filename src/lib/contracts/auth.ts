@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { email, password, rowId, text } from "./common";
-import { ASSIGNABLE_ROLES } from "../auth/roles";
+import { ASSIGNABLE_ROLES } from "@/lib/auth/roles";
 
 export const SignUpRequest = z
   .object({

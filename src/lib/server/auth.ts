@@ -6,7 +6,7 @@ import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins";
 import { asc, eq } from "drizzle-orm";
-import { ac, roles, ROLE_LABELS, isRoleName } from "../auth/roles";
+import { ac, roles, ROLE_LABELS, isRoleName } from "@/lib/auth/roles";
 import { db } from "./db/client";
 import * as schema from "./db/schema";
 import { serverEnv } from "./env";

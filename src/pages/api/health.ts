@@ -1,6 +1,6 @@
 import type { APIRoute } from "astro";
-import { pool } from "../../lib/server/db/client";
-import { json } from "../../lib/server/http";
+import { pool } from "@/lib/server/db/client";
+import { json } from "@/lib/server/http";
 
 export const prerender = false;
 

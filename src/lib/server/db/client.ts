@@ -1,6 +1,6 @@
 import pg from "pg";
 import { drizzle } from "drizzle-orm/node-postgres";
-import { serverEnv } from "../env";
+import { serverEnv } from "@/lib/server/env";
 import * as schema from "./schema";
 
 /** One pool per process; connections open lazily on first query. */

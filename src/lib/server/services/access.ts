@@ -3,10 +3,10 @@
  * owns the resource. Pages and endpoints call these; the UI only mirrors them.
  */
 import { and, asc, eq } from "drizzle-orm";
-import { db } from "../db/client";
-import { member, organization, project, projectShare } from "../db/schema";
-import { HttpError } from "../http";
-import { roleCan, type Permission, isRoleName, type RoleName } from "../../auth/roles";
+import { db } from "@/lib/server/db/client";
+import { member, organization, project, projectShare } from "@/lib/server/db/schema";
+import { HttpError } from "@/lib/server/http";
+import { roleCan, type Permission, isRoleName, type RoleName } from "@/lib/auth/roles";
 
 export interface Membership {
   memberId: string;

@@ -1,9 +1,9 @@
 import { eq } from "drizzle-orm";
-import { auth } from "../auth";
-import { db } from "../db/client";
-import { organization, user } from "../db/schema";
-import { HttpError } from "../http";
-import type { SignUpRequest } from "../../contracts/auth";
+import { auth } from "@/lib/server/auth";
+import { db } from "@/lib/server/db/client";
+import { organization, user } from "@/lib/server/db/schema";
+import { HttpError } from "@/lib/server/http";
+import type { SignUpRequest } from "@/lib/contracts/auth";
 import { acceptInvitation, invitationSummary } from "./members";
 
 export function slugify(name: string): string {

@@ -1,9 +1,9 @@
 import { and, asc, eq, gt, ne } from "drizzle-orm";
-import { auth } from "../auth";
-import { db } from "../db/client";
-import { invitation, member, organization, user } from "../db/schema";
-import { HttpError } from "../http";
-import { isRoleName, type RoleName } from "../../auth/roles";
+import { auth } from "@/lib/server/auth";
+import { db } from "@/lib/server/db/client";
+import { invitation, member, organization, user } from "@/lib/server/db/schema";
+import { HttpError } from "@/lib/server/http";
+import { isRoleName, type RoleName } from "@/lib/auth/roles";
 
 export interface MemberView {
   memberId: string;

@@ -1,9 +1,9 @@
 import { and, asc, desc, eq, inArray, notInArray } from "drizzle-orm";
-import { db } from "../db/client";
-import { facade, member, project, projectShare, user } from "../db/schema";
-import { HttpError } from "../http";
-import { roleCan } from "../../auth/roles";
-import type { ProjectCreateRequest, ProjectUpdateRequest } from "../../contracts/projects";
+import { db } from "@/lib/server/db/client";
+import { facade, member, project, projectShare, user } from "@/lib/server/db/schema";
+import { HttpError } from "@/lib/server/http";
+import { roleCan } from "@/lib/auth/roles";
+import type { ProjectCreateRequest, ProjectUpdateRequest } from "@/lib/contracts/projects";
 import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
 
 export type FacadeRow = typeof facade.$inferSelect;

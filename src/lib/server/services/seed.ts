@@ -1,8 +1,8 @@
 import { and, eq } from "drizzle-orm";
 import { hashPassword } from "better-auth/crypto";
-import { db } from "../db/client";
-import { account, facade, member, organization, project, projectShare, user } from "../db/schema";
-import { DEMO_ORGANIZATION, DEMO_PASSWORD, DEMO_PROJECTS, DEMO_USERS } from "../../demo-scenario";
+import { db } from "@/lib/server/db/client";
+import { account, facade, member, organization, project, projectShare, user } from "@/lib/server/db/schema";
+import { DEMO_ORGANIZATION, DEMO_PASSWORD, DEMO_PROJECTS, DEMO_USERS } from "@/lib/demo-scenario";
 
 /** Inserts whatever part of the demo scenario is missing; returns what it created. */
 export async function seedDemo(): Promise<string[]> {

@@ -1,5 +1,5 @@
 import type { APIRoute } from "astro";
-import { auth, CLIENT_IP_HEADER } from "../../../lib/server/auth";
+import { auth, CLIENT_IP_HEADER } from "@/lib/server/auth";
 
 export const prerender = false;
 

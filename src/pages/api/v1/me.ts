@@ -1,5 +1,5 @@
-import { endpoint, json, requireUser } from "../../../lib/server/http";
-import { membershipsOf } from "../../../lib/server/services/access";
+import { endpoint, json, requireUser } from "@/lib/server/http";
+import { membershipsOf } from "@/lib/server/services/access";
 
 export const prerender = false;
 

@@ -1,6 +1,6 @@
-import { SignUpRequest } from "../../../lib/contracts/auth";
-import { endpoint, json, readJson } from "../../../lib/server/http";
-import { signUp } from "../../../lib/server/services/accounts";
+import { SignUpRequest } from "@/lib/contracts/auth";
+import { endpoint, json, readJson } from "@/lib/server/http";
+import { signUp } from "@/lib/server/services/accounts";
 
 export const prerender = false;
 

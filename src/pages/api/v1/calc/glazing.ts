@@ -1,6 +1,6 @@
-import { GlazingRequest } from "../../../../lib/contracts/glazing";
-import { calculateGlazing } from "../../../../lib/calc/glazing";
-import { endpoint, HttpError, json, readJson, requireUser } from "../../../../lib/server/http";
+import { GlazingRequest } from "@/lib/contracts/glazing";
+import { calculateGlazing } from "@/lib/calc/glazing";
+import { endpoint, HttpError, json, readJson, requireUser } from "@/lib/server/http";
 
 export const prerender = false;
 

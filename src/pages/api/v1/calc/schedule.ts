@@ -1,6 +1,6 @@
-import { estimatedScheduleRows, MAX_SCHEDULE_ROWS, ScheduleRequest } from "../../../../lib/contracts/schedule";
-import { scheduleResponse } from "../../../../lib/calc/schedule-response";
-import { endpoint, HttpError, json, readJson, requireUser } from "../../../../lib/server/http";
+import { estimatedScheduleRows, MAX_SCHEDULE_ROWS, ScheduleRequest } from "@/lib/contracts/schedule";
+import { scheduleResponse } from "@/lib/calc/schedule-response";
+import { endpoint, HttpError, json, readJson, requireUser } from "@/lib/server/http";
 
 export const prerender = false;
 

@@ -1,7 +1,7 @@
-import { ProjectCreateRequest } from "../../../../lib/contracts/projects";
-import { endpoint, json, readJson, requireUser } from "../../../../lib/server/http";
-import { requireOrgPermission } from "../../../../lib/server/services/access";
-import { createProject, projectsForUser } from "../../../../lib/server/services/projects";
+import { ProjectCreateRequest } from "@/lib/contracts/projects";
+import { endpoint, json, readJson, requireUser } from "@/lib/server/http";
+import { requireOrgPermission } from "@/lib/server/services/access";
+import { createProject, projectsForUser } from "@/lib/server/services/projects";
 
 export const prerender = false;
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
-import { rowId } from "../../../../../lib/contracts/common";
-import { endpoint, json, parseParams, requireUser } from "../../../../../lib/server/http";
-import { acceptInvitation } from "../../../../../lib/server/services/members";
+import { rowId } from "@/lib/contracts/common";
+import { endpoint, json, parseParams, requireUser } from "@/lib/server/http";
+import { acceptInvitation } from "@/lib/server/services/members";
 
 export const prerender = false;
 const Params = z.object({ id: rowId });

@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { rowId } from "../../../../../lib/contracts/common";
-import { ProjectUpdateRequest } from "../../../../../lib/contracts/projects";
-import { endpoint, json, parseParams, readJson, requireUser } from "../../../../../lib/server/http";
-import { requireProject } from "../../../../../lib/server/services/access";
-import { deleteProject, facadesOf, updateProject } from "../../../../../lib/server/services/projects";
+import { rowId } from "@/lib/contracts/common";
+import { ProjectUpdateRequest } from "@/lib/contracts/projects";
+import { endpoint, json, parseParams, readJson, requireUser } from "@/lib/server/http";
+import { requireProject } from "@/lib/server/services/access";
+import { deleteProject, facadesOf, updateProject } from "@/lib/server/services/projects";
 
 export const prerender = false;
 const Params = z.object({ id: rowId });

@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { InvitationRequest } from "../../../../../../lib/contracts/auth";
-import { rowId } from "../../../../../../lib/contracts/common";
-import { endpoint, json, parseParams, readJson, requireUser } from "../../../../../../lib/server/http";
-import { requireOrgPermission } from "../../../../../../lib/server/services/access";
-import { inviteMember, pendingInvitationsOf } from "../../../../../../lib/server/services/members";
-import type { RoleName } from "../../../../../../lib/auth/roles";
+import { InvitationRequest } from "@/lib/contracts/auth";
+import { rowId } from "@/lib/contracts/common";
+import { endpoint, json, parseParams, readJson, requireUser } from "@/lib/server/http";
+import { requireOrgPermission } from "@/lib/server/services/access";
+import { inviteMember, pendingInvitationsOf } from "@/lib/server/services/members";
+import type { RoleName } from "@/lib/auth/roles";
 
 export const prerender = false;
 const Params = z.object({ orgId: rowId });

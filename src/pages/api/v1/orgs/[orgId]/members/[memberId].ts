@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { MemberRoleRequest } from "../../../../../../lib/contracts/auth";
-import { rowId } from "../../../../../../lib/contracts/common";
-import { endpoint, json, parseParams, readJson, requireUser } from "../../../../../../lib/server/http";
-import { requireOrgPermission } from "../../../../../../lib/server/services/access";
-import { changeRole, membersOf, removeMember } from "../../../../../../lib/server/services/members";
-import type { RoleName } from "../../../../../../lib/auth/roles";
+import { MemberRoleRequest } from "@/lib/contracts/auth";
+import { rowId } from "@/lib/contracts/common";
+import { endpoint, json, parseParams, readJson, requireUser } from "@/lib/server/http";
+import { requireOrgPermission } from "@/lib/server/services/access";
+import { changeRole, membersOf, removeMember } from "@/lib/server/services/members";
+import type { RoleName } from "@/lib/auth/roles";
 
 export const prerender = false;
 const Params = z.object({ orgId: rowId, memberId: rowId });

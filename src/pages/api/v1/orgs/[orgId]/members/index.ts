@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { rowId } from "../../../../../../lib/contracts/common";
-import { endpoint, json, parseParams, requireUser } from "../../../../../../lib/server/http";
-import { requireOrgPermission } from "../../../../../../lib/server/services/access";
-import { membersOf, pendingInvitationsOf } from "../../../../../../lib/server/services/members";
+import { rowId } from "@/lib/contracts/common";
+import { endpoint, json, parseParams, requireUser } from "@/lib/server/http";
+import { requireOrgPermission } from "@/lib/server/services/access";
+import { membersOf, pendingInvitationsOf } from "@/lib/server/services/members";
 
 export const prerender = false;
 const Params = z.object({ orgId: rowId });

@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { rowId } from "../../../../../../lib/contracts/common";
-import { endpoint, json, parseParams, requireUser } from "../../../../../../lib/server/http";
-import { requireProject } from "../../../../../../lib/server/services/access";
-import { sharesOf, unshareProject } from "../../../../../../lib/server/services/projects";
+import { rowId } from "@/lib/contracts/common";
+import { endpoint, json, parseParams, requireUser } from "@/lib/server/http";
+import { requireProject } from "@/lib/server/services/access";
+import { sharesOf, unshareProject } from "@/lib/server/services/projects";
 
 export const prerender = false;
 const Params = z.object({ id: rowId, memberId: rowId });
