@@ -1,0 +1,26 @@
+// The computed-kind optics reference cases must be reproduced by their scripts under scripts/reference/,
+// each within the case's own tolerance, so that a case value cannot drift from its formula.
+import { describe, expect, it } from "vitest";
+import { fresnelComparison } from "@scripts/reference/fresnel";
+import type { ComparisonRow } from "@scripts/reference/optics-compare";
+import { fresnelDomain } from "@/lib/reference-cases/fresnel";
+import type { ReferenceDomain } from "@/lib/reference-cases/types";
+
+function expectReproduced(domain: ReferenceDomain, rows: readonly ComparisonRow[]): void {
+  const computedValues = domain.cases
+    .filter((c) => c.source.kind === "computed")
+    .reduce((n, c) => n + c.expected.length, 0);
+  // every expected value of every computed case is compared (no case is left to another script)
+  expect(rows).toHaveLength(computedValues);
+  for (const r of rows) {
+    expect(Number.isFinite(r.recomputed), `${r.caseId} ${r.quantity}: the script computes no value`).toBe(true);
+    expect(
+      Math.abs(r.recomputed - r.printed),
+      `${r.caseId} ${r.quantity}: printed ${r.printed}, script ${r.recomputed}`,
+    ).toBeLessThanOrEqual(r.tolerance * (1 + 1e-9));
+  }
+}
+
+describe("optics reference scripts reproduce the computed cases", () => {
+  it("fresnel: scripts/reference/fresnel.ts", () => expectReproduced(fresnelDomain, fresnelComparison()));
+});
