@@ -56,3 +56,17 @@ export const paneFromMm = (p: { readonly thicknessMm: number; readonly refractiv
   refractiveIndex: p.refractiveIndex,
   absorptionPerM: p.absorptionPerMm * 1000,
 });
+
+/** The case with the given id (a test that reads a value from another case fails loudly if it is gone). */
+export function caseById<I>(cases: readonly ReferenceCase<I>[], id: string): ReferenceCase<I> {
+  const c = cases.find((x) => x.id === id);
+  if (!c) throw new Error(`no reference case ${id}`);
+  return c;
+}
+
+/** The expected value of a quantity in a case. */
+export function expectedOf(c: ReferenceCase, quantity: string): ExpectedValue {
+  const e = c.expected.find((x) => x.quantity === quantity);
+  if (!e) throw new Error(`case ${c.id} has no expected ${quantity}`);
+  return e;
+}

@@ -1,8 +1,10 @@
 // The computed-kind optics reference cases must be reproduced by their scripts under scripts/reference/,
 // each within the case's own tolerance, so that a case value cannot drift from its formula.
 import { describe, expect, it } from "vitest";
+import { absorbingPaneComparison } from "@scripts/reference/absorbing-pane";
 import { fresnelComparison } from "@scripts/reference/fresnel";
 import type { ComparisonRow } from "@scripts/reference/optics-compare";
+import { absorbingPaneDomain } from "@/lib/reference-cases/absorbing-pane";
 import { fresnelDomain } from "@/lib/reference-cases/fresnel";
 import type { ReferenceDomain } from "@/lib/reference-cases/types";
 
@@ -23,4 +25,6 @@ function expectReproduced(domain: ReferenceDomain, rows: readonly ComparisonRow[
 
 describe("optics reference scripts reproduce the computed cases", () => {
   it("fresnel: scripts/reference/fresnel.ts", () => expectReproduced(fresnelDomain, fresnelComparison()));
+  it("absorbing-pane: scripts/reference/absorbing-pane.ts", () =>
+    expectReproduced(absorbingPaneDomain, absorbingPaneComparison()));
 });
