@@ -3,9 +3,11 @@
 import { describe, expect, it } from "vitest";
 import { absorbingPaneComparison } from "@scripts/reference/absorbing-pane";
 import { fresnelComparison } from "@scripts/reference/fresnel";
+import { measuredPaneComparison } from "@scripts/reference/measured-pane";
 import type { ComparisonRow } from "@scripts/reference/optics-compare";
 import { absorbingPaneDomain } from "@/lib/reference-cases/absorbing-pane";
 import { fresnelDomain } from "@/lib/reference-cases/fresnel";
+import { measuredPaneDomain } from "@/lib/reference-cases/measured-pane";
 import type { ReferenceDomain } from "@/lib/reference-cases/types";
 
 function expectReproduced(domain: ReferenceDomain, rows: readonly ComparisonRow[]): void {
@@ -27,4 +29,6 @@ describe("optics reference scripts reproduce the computed cases", () => {
   it("fresnel: scripts/reference/fresnel.ts", () => expectReproduced(fresnelDomain, fresnelComparison()));
   it("absorbing-pane: scripts/reference/absorbing-pane.ts", () =>
     expectReproduced(absorbingPaneDomain, absorbingPaneComparison()));
+  it("measured-pane: scripts/reference/measured-pane.ts", () =>
+    expectReproduced(measuredPaneDomain, measuredPaneComparison()));
 });
