@@ -3,10 +3,12 @@
 import { describe, expect, it } from "vitest";
 import { absorbingPaneComparison } from "@scripts/reference/absorbing-pane";
 import { fresnelComparison } from "@scripts/reference/fresnel";
+import { layerStackComparison } from "@scripts/reference/layer-stack";
 import { measuredPaneComparison } from "@scripts/reference/measured-pane";
 import type { ComparisonRow } from "@scripts/reference/optics-compare";
 import { absorbingPaneDomain } from "@/lib/reference-cases/absorbing-pane";
 import { fresnelDomain } from "@/lib/reference-cases/fresnel";
+import { layerStackDomain } from "@/lib/reference-cases/layer-stack";
 import { measuredPaneDomain } from "@/lib/reference-cases/measured-pane";
 import type { ReferenceDomain } from "@/lib/reference-cases/types";
 
@@ -31,4 +33,5 @@ describe("optics reference scripts reproduce the computed cases", () => {
     expectReproduced(absorbingPaneDomain, absorbingPaneComparison()));
   it("measured-pane: scripts/reference/measured-pane.ts", () =>
     expectReproduced(measuredPaneDomain, measuredPaneComparison()));
+  it("layer-stack: scripts/reference/layer-stack.ts", () => expectReproduced(layerStackDomain, layerStackComparison()));
 });
