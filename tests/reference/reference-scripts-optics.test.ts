@@ -3,11 +3,13 @@
 import { describe, expect, it } from "vitest";
 import { absorbingPaneComparison } from "@scripts/reference/absorbing-pane";
 import { fresnelComparison } from "@scripts/reference/fresnel";
+import { hemisphericalComparison } from "@scripts/reference/hemispherical";
 import { layerStackComparison } from "@scripts/reference/layer-stack";
 import { measuredPaneComparison } from "@scripts/reference/measured-pane";
 import type { ComparisonRow } from "@scripts/reference/optics-compare";
 import { absorbingPaneDomain } from "@/lib/reference-cases/absorbing-pane";
 import { fresnelDomain } from "@/lib/reference-cases/fresnel";
+import { hemisphericalDomain } from "@/lib/reference-cases/hemispherical";
 import { layerStackDomain } from "@/lib/reference-cases/layer-stack";
 import { measuredPaneDomain } from "@/lib/reference-cases/measured-pane";
 import type { ReferenceDomain } from "@/lib/reference-cases/types";
@@ -34,4 +36,6 @@ describe("optics reference scripts reproduce the computed cases", () => {
   it("measured-pane: scripts/reference/measured-pane.ts", () =>
     expectReproduced(measuredPaneDomain, measuredPaneComparison()));
   it("layer-stack: scripts/reference/layer-stack.ts", () => expectReproduced(layerStackDomain, layerStackComparison()));
+  it("hemispherical: scripts/reference/hemispherical.ts (400-node Gauss–Legendre)", () =>
+    expectReproduced(hemisphericalDomain, hemisphericalComparison()));
 });
