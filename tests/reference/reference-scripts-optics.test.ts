@@ -1,5 +1,7 @@
 // The computed-kind optics reference cases must be reproduced by their scripts under scripts/reference/,
 // each within the case's own tolerance, so that a case value cannot drift from its formula.
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { absorbingPaneComparison } from "@scripts/reference/absorbing-pane";
 import { fresnelComparison } from "@scripts/reference/fresnel";
@@ -38,4 +40,18 @@ describe("optics reference scripts reproduce the computed cases", () => {
   it("layer-stack: scripts/reference/layer-stack.ts", () => expectReproduced(layerStackDomain, layerStackComparison()));
   it("hemispherical: scripts/reference/hemispherical.ts (400-node Gauss–Legendre)", () =>
     expectReproduced(hemisphericalDomain, hemisphericalComparison()));
+});
+
+describe("the optics reference scripts are independent of the product's code", () => {
+  const dir = join(process.cwd(), "scripts", "reference"); // tests run from the repository root
+  const scripts = ["fresnel.ts", "absorbing-pane.ts", "measured-pane.ts", "layer-stack.ts", "hemispherical.ts", "optics-compare.ts"];
+  it.each(scripts)("%s imports neither src/lib/physics nor src/lib/calc", (name) => {
+    expect(readdirSync(dir)).toContain(name);
+    const imports = [...readFileSync(join(dir, name), "utf8").matchAll(/^import[^;]*?from\s+"([^"]+)"/gms)].map((m) => m[1]!);
+    expect(imports.length).toBeGreaterThan(0);
+    for (const spec of imports) {
+      expect(spec, `${name} imports ${spec}`).not.toMatch(/lib\/(physics|calc)/);
+      if (spec.startsWith("@/")) expect(spec, `${name} imports ${spec}`).toMatch(/^@\/lib\/reference-cases\//);
+    }
+  });
 });
