@@ -34,7 +34,7 @@ const computed: CaseSource = {
 
 const half = (decimals: number): Tolerance => ({
   abs: [0.5, 0.05, 0.005, 5e-4, 5e-5, 5e-6, 5e-7, 5e-8][decimals]!,
-  reason: decimals === 0 ? "printed as an integer: half a unit" : `half a unit in the ${decimals}th printed decimal`,
+  reason: decimals === 0 ? "printed as an integer: half a unit" : `half a unit in the ${decimals}${["th", "st", "nd", "rd"][decimals] ?? "th"} printed decimal`,
 });
 const P6 = half(6);
 const P4 = half(4);

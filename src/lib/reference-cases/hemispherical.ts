@@ -39,7 +39,7 @@ const computed: CaseSource = {
 
 const half = (decimals: number): Tolerance => ({
   abs: [0.5, 0.05, 0.005, 5e-4, 5e-5, 5e-6, 5e-7, 5e-8, 5e-9][decimals]!,
-  reason: `half a unit in the ${decimals}th printed decimal`,
+  reason: `half a unit in the ${decimals}${["th", "st", "nd", "rd"][decimals] ?? "th"} printed decimal`,
 });
 const P6 = half(6);
 const ev = (quantity: string, value: number, tolerance: Tolerance = P6): ExpectedValue => ({
