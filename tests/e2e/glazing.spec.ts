@@ -1,7 +1,20 @@
 // POST /api/v1/calc/glazing through the real server, and the make-up page in the browser.
-// Check values: [calc F4/F7/F8] of the glazing-physics handbook (EN 410 adding method and g, EN 673 U).
+// Check values: the optics reference cases (src/lib/reference-cases/layer-stack.ts, hemispherical.ts: EN 410
+// multiple-glazing method per polarisation, computed independently by scripts/reference/), and g (EN 410:2011)
+// and U (EN 673) of the same glazings computed independently in float64 from those standards' formulas
+// (clause numbers and constants from memory).
 import { expect, test, type APIRequestContext } from "@playwright/test";
+import { double6mmCase } from "@/lib/reference-cases/hemispherical";
+import { double0Case } from "@/lib/reference-cases/layer-stack";
+import type { ReferenceCase } from "@/lib/reference-cases/types";
 import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+
+/** The expected value of a quantity in a reference case. */
+const expected = (c: ReferenceCase, quantity: string): number => {
+  const e = c.expected.find((x) => x.quantity === quantity);
+  if (!e) throw new Error(`case ${c.id} has no expected ${quantity}`);
+  return e.value;
+};
 
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
 const air16 = { kind: "gap", widthMm: 16, gas: "air" };
@@ -16,7 +29,7 @@ test("anonymous callers get 401", async ({ request }) => {
   expect(res.status()).toBe(401);
 });
 
-test("a double glazing answers the contract with the handbook's values", async ({ request }) => {
+test("a double glazing answers the contract with the reference values", async ({ request }) => {
   await signInApi(request);
   const res = await request.post("/api/v1/calc/glazing", { data: { layers: [pane6, air16, pane6] } });
   expect(res.status()).toBe(200);
@@ -24,13 +37,16 @@ test("a double glazing answers the contract with the handbook's values", async (
   expect(body.angles.map((a: { angleDeg: number }) => a.angleDeg)).toEqual([0, 10, 20, 30, 40, 50, 60, 70, 80, 90]);
   const n = body.angles[0];
   expect(Object.keys(n)).toEqual(expect.arrayContaining(["angleDeg", "solarTransmittance", "solarReflectanceFront", "solarReflectanceBack", "layerAbsorptance", "gValue"]));
-  expect(n.solarTransmittance).toBeCloseTo(0.666439, 6); // [calc F4]
-  expect(n.gValue).toBeCloseTo(0.741378, 6); // [calc F7]
+  // T = 0.666439 at 0°: the layer-stack case of two 6 mm panes (within 5e-7, half a unit in its 6th decimal)
+  expect(n.solarTransmittance).toBeCloseTo(expected(double0Case, "T"), 6);
+  // EN 410:2011 double-glazing g, h_e = 23, h_i = 8.0 W/(m²K), Λ by EN 673 for 6|16 air|6 (computed independently)
+  expect(n.gValue).toBeCloseTo(0.741378, 6);
   expect(n.layerAbsorptance).toHaveLength(2);
   expect(body.angles[9].solarTransmittance).toBe(0); // grazing incidence: nothing enters
-  expect(body.hemispherical.solarTransmittance).toBeCloseTo(0.577379, 6); // [calc F5]
+  // hemispherical T = 0.577379: the hemispherical case of two 6 mm panes
+  expect(body.hemispherical.solarTransmittance).toBeCloseTo(expected(double6mmCase, "T"), 6);
   expect(Object.keys(body.hemispherical)).toEqual(expect.arrayContaining(["solarTransmittance", "solarReflectanceFront", "layerAbsorptance", "gValue"]));
-  expect(body.uValue).toBeGreaterThan(2.6); // 6|16 air|6 ≈ 2.71 by EN 673 (4|16|4: 2.74205 [calc F8])
+  expect(body.uValue).toBeGreaterThan(2.6); // 6|16 air|6 ≈ 2.71 by EN 673 (4|16|4: 2.74205, EN 673 computed independently)
   expect(body.uValue).toBeLessThan(2.8);
   expect(Array.isArray(body.warnings)).toBe(true);
 });
@@ -76,7 +92,7 @@ test("the make-up page recalculates as the consultant edits", async ({ page }) =
   await page.getByLabel("Start from").selectOption("double-air");
   const g = page.getByTestId("g-normal");
   const u = page.getByTestId("u-value");
-  await expect(u).toHaveText("2.7"); // 4|16 air|4: 2.74205 [calc F8] → 2.7 as EN 673 rounds
+  await expect(u).toHaveText("2.7"); // 4|16 air|4: 2.74205 (EN 673, computed independently) → 2.7 as EN 673 rounds
   const gBefore = await g.textContent();
   await expect(page.locator('[data-series="T"]')).toHaveCount(1);
   await expect(page.locator('[data-series="A2"]')).toHaveCount(1);
@@ -84,7 +100,7 @@ test("the make-up page recalculates as the consultant edits", async ({ page }) =
   // Argon fill lowers U.
   await page.locator("#layers\\.1-gas").selectOption("argon");
   await page.locator("#layers\\.1-fill").fill("100");
-  await expect(u).toHaveText("2.6"); // 4|16 argon|4: 2.61595 [calc F8]
+  await expect(u).toHaveText("2.6"); // 4|16 argon|4: 2.61595 (EN 673, computed independently)
 
   // An invalid value is flagged at the field and the last good result stays.
   await page.locator("#layers\\.0\\.thicknessMm").fill("-3");
@@ -109,7 +125,7 @@ test("switching how a pane is described keeps the make-up valid", async ({ page 
   const g = page.getByTestId("g-normal");
   await expect(g).toBeVisible();
   await page.getByLabel("Start from").selectOption("double-lowe");
-  await expect(page.getByTestId("u-value")).toHaveText("1.1"); // low-e 0.03 on face 3, 90 % argon: ≈ 1.10 [calc F8]
+  await expect(page.getByTestId("u-value")).toHaveText("1.1"); // low-e 0.03 on face 3, 90 % argon: ≈ 1.10 (EN 673, computed independently)
   const before = await g.textContent();
   // The coated room-side pane becomes clear glass described by its properties: more sun comes in.
   await page.getByLabel("How pane 2 is described").selectOption("physical");
@@ -119,5 +135,5 @@ test("switching how a pane is described keeps the make-up valid", async ({ page 
   await expect(page.locator("#layers\\.2\\.measured\\.solarTransmittance")).toHaveValue("0.8");
   await page.getByRole("button", { name: "Remove pane 2" }).click();
   await expect(page.getByTestId("pane-row")).toHaveCount(1);
-  await expect(page.getByTestId("u-value")).toHaveText("5.8"); // single 4 mm: 5.79783 [calc F8]
+  await expect(page.getByTestId("u-value")).toHaveText("5.8"); // single 4 mm: 5.79783 (EN 673, computed independently)
 });

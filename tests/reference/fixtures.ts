@@ -1,13 +1,15 @@
-// Shared by the reference tests: the handbook's test panes and its comparison rule for printed values.
+// Shared by the reference tests: the model panes, the comparison rule for printed values and the
+// check of a reference case's expected values.
 import { expect } from "vitest";
 import { asDegrees, toRadians, type Radians } from "@/lib/physics/units";
 import type { PaneSpec } from "@/lib/physics/optics";
+import type { ExpectedValue, ReferenceCase } from "@/lib/reference-cases/types";
 
 export const deg = (d: number): Radians => toRadians(asDegrees(d));
 
 /**
- * Compares with a value printed to a given number of decimals: tolerance half a unit in the last
- * printed digit (the handbook's convention for its computed check values).
+ * Compares with a value printed to a given number of decimals. Our tolerance rule for printed values:
+ * half a unit in the last printed digit (two correct float64 evaluations agree far more closely).
  */
 export function printed(actual: number, value: string): void {
   const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
@@ -15,9 +17,27 @@ export function printed(actual: number, value: string): void {
   expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
 }
 
-/** The reference test pane: 6 mm, n = 1.52, α = 0.02 /mm (a broadband test fixture, not a real glass). */
+/**
+ * |actual − expected| ≤ the expected value's tolerance. The relative slack of 1e-9 on the tolerance only
+ * absorbs the binary representation of tolerances such as 5e-7 (the same rule as `printed`).
+ */
+export function expectValue(actual: number | undefined, e: ExpectedValue, where = ""): void {
+  const what = `${where}${where ? " " : ""}${e.quantity}`;
+  expect(actual, `${what}: no value computed`).toBeTypeOf("number");
+  expect(Math.abs(actual! - e.value), `${what}: expected ${e.value} ± ${e.tolerance.abs}, got ${actual}`).toBeLessThanOrEqual(
+    e.tolerance.abs * (1 + 1e-9),
+  );
+}
+
+/** Checks every expected value of a case against the computed quantities, by quantity name. */
+export function expectCase(actual: Readonly<Record<string, number>>, c: ReferenceCase): void {
+  expect(c.expected.length, `${c.id}: a case without expected values checks nothing`).toBeGreaterThan(0);
+  for (const e of c.expected) expectValue(actual[e.quantity], e, c.id);
+}
+
+/** The model pane of the optics reference cases: 6 mm, n = 1.52, α = 0.02 /mm (one broadband α: a test fixture, not a real glass). */
 export const pane6mm = { thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 };
-/** Low-iron pane: 4 mm, n = 1.52, α = 0.002 /mm. */
+/** Low-iron model pane: 4 mm, n = 1.52, α = 0.002 /mm. */
 export const lowIron4mm = { thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 2 };
 
 /** A hypothetical coated 6 mm pane given by measured values (not a product): Rf ≠ Rb. */
@@ -27,5 +47,26 @@ export const coated6mmSpec = {
   solar: { T: 0.45, Rf: 0.3, Rb: 0.2 },
   visible: { T: 0.7, Rf: 0.1, Rb: 0.06 },
 } as const satisfies PaneSpec;
-/** The reference 6 mm pane as a glazing layer. */
+/** The 6 mm model pane as a glazing layer. */
 export const clear6mmSpec: PaneSpec = { kind: "physical", ...pane6mm };
+
+/** A pane as the reference cases give it (millimetres, as printed), in the engine's SI units. */
+export const paneFromMm = (p: { readonly thicknessMm: number; readonly refractiveIndex: number; readonly absorptionPerMm: number }) => ({
+  thicknessM: p.thicknessMm / 1000,
+  refractiveIndex: p.refractiveIndex,
+  absorptionPerM: p.absorptionPerMm * 1000,
+});
+
+/** The case with the given id (a test that reads a value from another case fails loudly if it is gone). */
+export function caseById<I>(cases: readonly ReferenceCase<I>[], id: string): ReferenceCase<I> {
+  const c = cases.find((x) => x.id === id);
+  if (!c) throw new Error(`no reference case ${id}`);
+  return c;
+}
+
+/** The expected value of a quantity in a case. */
+export function expectedOf(c: ReferenceCase, quantity: string): ExpectedValue {
+  const e = c.expected.find((x) => x.quantity === quantity);
+  if (!e) throw new Error(`case ${c.id} has no expected ${quantity}`);
+  return e;
+}

@@ -1,11 +1,10 @@
 // Reference tests for multi-layer glazing (src/lib/physics/layer-stack.ts and the optics.ts
 // façade).
 //
-// [calc F4 with F2 layers]: glazing-physics reference §4, an independent float64 (python3 +
-// numpy) solution of the net-radiation system with slab layers of §2 (6 mm, n = 1.52,
-// α = 0.02 /mm); the two-layer and three-layer forms are the multiple-glazing formulas of
-// EN 410:2011 §5 and ISO 9050:2003 §4 (clause numbers from memory). Printed to 6 decimals:
-// each comparison allows half a unit in the last printed digit.
+// The check values are the cases of src/lib/reference-cases/layer-stack.ts: the net-radiation system with
+// slab layers (6 mm, n = 1.52, α = 0.02 /mm) per polarisation, solved independently in float64 by
+// scripts/reference/layer-stack.ts; its two-layer and three-layer forms are the multiple-glazing formulas of
+// EN 410:2011 §5 and ISO 9050:2003 §4 (clause numbers from memory). Each case gives its tolerance.
 import { describe, expect, it } from "vitest";
 import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import {
@@ -14,12 +13,20 @@ import {
   glazingOpticsAt,
   type LayerOptics,
   type PolarizedLayerSource,
+  type StackOptics,
 } from "@/lib/physics/layer-stack";
 import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
 import { type Radians } from "@/lib/physics/units";
-import { printed, deg, pane6mm } from "./fixtures";
-
-
+import {
+  asymmetricCase,
+  double0Case,
+  double60Cases,
+  layerStackDomain,
+  triple0Case,
+  type LayerStackCaseInput,
+  type StackLayer,
+} from "@/lib/reference-cases/layer-stack";
+import { caseById, deg, expectCase, expectValue, expectedOf, pane6mm, paneFromMm } from "./fixtures";
 
 const spec6mm: PaneSpec = { kind: "physical", ...pane6mm };
 const source6mm: PolarizedLayerSource = (theta) => {
@@ -31,56 +38,73 @@ const layer6mmAt = (theta: Radians): LayerOptics => {
   return { T: o.T, Rf: o.R, Rb: o.R };
 };
 
+/** A case layer as the engine's per-polarisation layer source. */
+const sourceOf = (layer: StackLayer): PolarizedLayerSource => {
+  if (layer.kind === "given") return () => ({ s: layer, p: layer });
+  const pane = paneFromMm(layer.pane);
+  return (theta) => {
+    const o = absorbingPaneOptics(pane, theta);
+    return { s: { T: o.s.T, Rf: o.s.R, Rb: o.s.R }, p: { T: o.p.T, Rf: o.p.R, Rb: o.p.R } };
+  };
+};
+/** A case layer averaged over s and p at one angle (the route of combineLayers with unpolarised layers). */
+const unpolarizedLayerOf = (layer: StackLayer, theta: Radians): LayerOptics => {
+  const l = sourceOf(layer)(theta);
+  return { T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) };
+};
+
+const quantities = (r: StackOptics): Record<string, number> => ({
+  T: r.T,
+  Rf: r.Rf,
+  Rb: r.Rb,
+  ...Object.fromEntries(r.absorptanceFront.map((a, i) => [`A${i + 1}`, a])),
+});
+
+/** The engine's values of the quantities a layer-stack case names, by the case's route. */
+function engine(input: LayerStackCaseInput): Record<string, number> {
+  const theta = deg(input.thetaDeg);
+  const sources = input.layers.map(sourceOf);
+  if (input.route === "s" || input.route === "p") {
+    const route = input.route;
+    return quantities(combineLayers(sources.map((src) => src(theta)[route])));
+  }
+  return quantities(glazingOpticsAt(sources, theta, { polarization: input.route }));
+}
+
+/** A normal-incidence case through combineLayers with unpolarised layers (s and p coincide at 0°). */
+function engineUnpolarized(input: LayerStackCaseInput): Record<string, number> {
+  return quantities(combineLayers(input.layers.map((l) => unpolarizedLayerOf(l, deg(input.thetaDeg)))));
+}
+
+it("case ids are unique", () => {
+  expect(new Set(layerStackDomain.cases.map((c) => c.id)).size).toBe(layerStackDomain.cases.length);
+});
+
 describe("double glazing, two 6 mm panes", () => {
-  it("θ = 0: T, R, A1, A2", () => {
-    // [calc F4] §4: T = 0.666439, R = 0.122195, A1 = 0.119267, A2 = 0.092099
-    const s = combineLayers([layer6mmAt(deg(0)), layer6mmAt(deg(0))]);
-    printed(s.T, "0.666439");
-    printed(s.Rf, "0.122195");
-    printed(s.absorptanceFront[0]!, "0.119267");
-    printed(s.absorptanceFront[1]!, "0.092099");
+  it(double0Case.label, () => {
+    expectCase(engineUnpolarized(double0Case.input), double0Case);
+    expectCase(engine(double0Case.input), double0Case);
   });
 
-  // [calc F4] §4, table "Same pair, θ = 60°": route, T, R, A1, A2
-  const table60 = [
-    ["per-polarization", "0.560292", "0.193315", "0.145683", "0.100710"],
-    ["s only", "0.378386", "0.381989", "0.155224", "0.084401"],
-    ["p only", "0.742198", "0.004641", "0.136142", "0.117019"],
-    ["averaged", "0.538000", "0.215160", "0.147701", "0.099139"],
-  ] as const;
-  it("has the four rows of the 60° table", () => expect(table60).toHaveLength(4));
-  it.each(table60)("θ = 60°, route %s", (route, T, R, A1, A2) => {
-    const theta = deg(60);
-    const layer = source6mm(theta);
-    const result =
-      route === "s only"
-        ? combineLayers([layer.s, layer.s])
-        : route === "p only"
-          ? combineLayers([layer.p, layer.p])
-          : glazingOpticsAt([source6mm, source6mm], theta, { polarization: route });
-    printed(result.T, T);
-    printed(result.Rf, R);
-    printed(result.absorptanceFront[0]!, A1);
-    printed(result.absorptanceFront[1]!, A2);
-  });
+  it("has the four rows of the 60° table", () => expect(double60Cases).toHaveLength(4));
+  for (const c of double60Cases) it(c.label, () => expectCase(engine(c.input), c));
 
   it("the per-polarisation route is the default, in glazingOpticsAt and in prepareGlazing", () => {
-    // [calc F4] §4: per polarisation T = 0.560292 at 60° (averaged route: 0.538000)
-    printed(glazingOpticsAt([source6mm, source6mm], deg(60)).T, "0.560292");
+    // per polarisation T = 0.560292 at 60° (averaged route: 0.538000), case values
+    const perPol = caseById(double60Cases, "layer-stack/double-6-6/60deg/per-polarization");
+    const averaged = caseById(double60Cases, "layer-stack/double-6-6/60deg/averaged");
+    expectValue(glazingOpticsAt([source6mm, source6mm], deg(60)).T, expectedOf(perPol, "T"), perPol.id);
     const g = prepareGlazing([spec6mm, spec6mm]);
     expect(g.polarization).toBe("per-polarization");
     const o = g.at(deg(60)).solar;
-    printed(o.T, "0.560292");
-    printed(o.Rf, "0.193315");
-    printed(o.A[0]!, "0.145683");
-    printed(o.A[1]!, "0.100710");
+    expectCase({ T: o.T, Rf: o.Rf, A1: o.A[0]!, A2: o.A[1]! }, perPol);
     const avg = prepareGlazing([spec6mm, spec6mm], { polarization: "averaged" });
-    printed(avg.at(deg(60)).solar.T, "0.538000");
+    expectValue(avg.at(deg(60)).solar.T, expectedOf(averaged, "T"), averaged.id);
     expect(avg.warnings.map((w) => w.code)).toContain("averaged-polarization");
   });
 
   it("both routes agree at normal incidence", () => {
-    // §4: "At normal incidence both routes agree" (s and p coincide at 0°)
+    // s and p coincide at 0°, so both routes agree there (exact)
     const a = glazingOpticsAt([source6mm, source6mm], deg(0), { polarization: "per-polarization" });
     const b = glazingOpticsAt([source6mm, source6mm], deg(0), { polarization: "averaged" });
     expect(Math.abs(a.T - b.T)).toBeLessThan(1e-15);
@@ -112,13 +136,9 @@ describe("triple glazing, three 6 mm panes, θ = 0", () => {
   const l = layer6mmAt(deg(0));
   const s = combineLayers([l, l, l]);
 
-  it("T, R, A1, A2, A3", () => {
-    // [calc F4] §4: T = 0.547493, R = 0.155056, A = 0.123808, 0.097980, 0.075661
-    printed(s.T, "0.547493");
-    printed(s.Rf, "0.155056");
-    printed(s.absorptanceFront[0]!, "0.123808");
-    printed(s.absorptanceFront[1]!, "0.097980");
-    printed(s.absorptanceFront[2]!, "0.075661");
+  it(triple0Case.label, () => {
+    expectCase(quantities(s), triple0Case);
+    expectCase(engine(triple0Case.input), triple0Case);
   });
 
   it("equals the EN 410 three-layer closed form and the two-layer recursion", () => {
@@ -134,22 +154,19 @@ describe("triple glazing, three 6 mm panes, θ = 0", () => {
   it("through prepareGlazing (identical panes share one model)", () => {
     const g = prepareGlazing([spec6mm, spec6mm, spec6mm]);
     const o = g.at(deg(0)).solar;
-    printed(o.T, "0.547493");
-    printed(o.A[2]!, "0.075661");
+    expectValue(o.T, expectedOf(triple0Case, "T"), triple0Case.id);
+    expectValue(o.A[2]!, expectedOf(triple0Case, "A3"), triple0Case.id);
     expect(g.at(deg(0)).visible).toBeNull(); // physical panes have no visible data
   });
 });
 
 describe("asymmetric layer", () => {
-  it("outer (T, Rf, Rb) = (0.60, 0.10, 0.25) + 6 mm pane at 0°", () => {
-    // [calc F4] §4 asymmetric example (hypothetical layer): T = 0.497618, Rf = 0.126891,
-    // Rb = 0.242135, A1 = 0.306723, A2 = 0.068769
+  it(asymmetricCase.label, () => {
+    // hypothetical layer, not a product
     const s = combineLayers([{ T: 0.6, Rf: 0.1, Rb: 0.25 }, layer6mmAt(deg(0))]);
-    printed(s.T, "0.497618");
-    printed(s.Rf, "0.126891");
-    printed(s.Rb, "0.242135");
-    printed(s.absorptanceFront[0]!, "0.306723");
-    printed(s.absorptanceFront[1]!, "0.068769");
+    expect(asymmetricCase.input.layers[0]).toEqual({ kind: "given", T: 0.6, Rf: 0.1, Rb: 0.25 });
+    expectCase(quantities(s), asymmetricCase);
+    expectCase(engine(asymmetricCase.input), asymmetricCase);
   });
 
   it("radiation from indoors is the mirror image: reversed stack, Rf ↔ Rb", () => {

@@ -1,13 +1,13 @@
 // Reference tests for panes given by measured normal-incidence values
 // (src/lib/physics/measured-pane.ts).
 //
-// [calc F2], [calc F3]: glazing-physics reference §2–§3, independent float64 (python3 + numpy)
-// evaluations of the slab series (Duffie & Beckman, 4th ed., ch. 5, from memory; Rubin 1982)
-// and of its closed-form normal-incidence inversion. Printed to ~6 digits: each comparison
-// allows half a unit in the last printed digit unless stated.
+// The check values are the cases of src/lib/reference-cases/measured-pane.ts (inversion of measured T and R,
+// Karlsson–Roos polynomial) and src/lib/reference-cases/absorbing-pane.ts (the slab values of the 6 mm model
+// pane), evaluated independently in float64 by scripts/reference/measured-pane.ts and
+// scripts/reference/absorbing-pane.ts. Each case gives its tolerance.
 // Karlsson–Roos values are IMPLEMENTATION-ONLY checks: the polynomial as recalled (from memory,
-// J. Karlsson & A. Roos, Solar Energy 69(4):321–329, 2000), evaluated independently [calc];
-// they are not validated against the paper.
+// J. Karlsson & A. Roos, Solar Energy 69(4):321–329, 2000), evaluated independently; they are not
+// validated against the paper.
 import { describe, expect, it } from "vitest";
 import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import {
@@ -22,53 +22,84 @@ import {
   type MeasuredBandModel,
 } from "@/lib/physics/measured-pane";
 import { asRadians, type Radians } from "@/lib/physics/units";
-import { printed, deg } from "./fixtures";
-
-
+import {
+  absorbingPaneDomain,
+  losslessCase,
+  pane6mmCases,
+  ratio6mmCases,
+} from "@/lib/reference-cases/absorbing-pane";
+import {
+  invertedAt60Case,
+  karlssonRoosCases,
+  measuredPaneDomain,
+  printedRoundTripCase,
+  workedInversionCase,
+  type MeasuredPaneCaseInput,
+} from "@/lib/reference-cases/measured-pane";
+import { caseById, deg, expectCase, expectValue, expectedOf } from "./fixtures";
 
 const unpolarized = (model: MeasuredBandModel, theta: Radians) => {
   const l = measuredBandAt(model, theta);
   return { T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) };
 };
 
+/** The engine's values of the quantities a measured-pane case names. */
+function engine(input: MeasuredPaneCaseInput): Record<string, number> {
+  switch (input.kind) {
+    case "inversion": {
+      const inv = invertUncoatedPane(input.T, input.R, input.thicknessMm / 1000);
+      return {
+        b: inv.b,
+        faceReflectance: inv.faceReflectance,
+        internalTransmittance: inv.internalTransmittance,
+        refractiveIndex: inv.refractiveIndex,
+        absorptionPerMm: inv.absorptionPerM / 1000,
+      };
+    }
+    case "uncoated-at-angle": {
+      const pane = prepareMeasuredPane({ thicknessM: input.thicknessMm / 1000, solar: input.solar });
+      const o = unpolarized(pane.solar, deg(input.thetaDeg));
+      return { T: o.T, Rf: o.Rf, Rb: o.Rb, A: 1 - o.T - o.Rf };
+    }
+    case "karlsson-roos":
+      return { TOverT0: karlssonRoosTransmittanceRatio(deg(input.thetaDeg), input.p, input.q) };
+  }
+}
+
+it("case ids are unique", () => {
+  expect(new Set(measuredPaneDomain.cases.map((c) => c.id)).size).toBe(measuredPaneDomain.cases.length);
+});
+
 describe("uncoated pane: inversion of measured T and R to n and α", () => {
-  it("worked example T = 0.830, R = 0.075, d = 6 mm", () => {
-    // [calc F3] §3 worked example: b = 1.833275, r = 0.0428372, τ = 0.904594, n = 1.52198,
-    // α = 0.0167114 /mm (= 16.7114 /m)
-    const inv = invertUncoatedPane(0.83, 0.075, 0.006);
-    expect(Math.abs(inv.b - 1.833275)).toBeLessThan(1e-15); // exact: 1 + 0.15 − 0.005625 + 0.6889
-    printed(inv.faceReflectance, "0.0428372");
-    printed(inv.internalTransmittance, "0.904594");
-    printed(inv.refractiveIndex, "1.52198");
-    printed(inv.absorptionPerM / 1000, "0.0167114");
+  it(workedInversionCase.label, () => {
+    // b is exact decimal arithmetic: 1 + 0.15 − 0.005625 + 0.6889 (tolerance 1e-15 in the case)
+    expectCase(engine(workedInversionCase.input), workedInversionCase);
   });
 
-  it("the inverted pane at 60°: T, R, A", () => {
-    // [calc F3] §3: feeding n and α back through F2 at 60° gives T = 0.743947, R = 0.142721, A = 0.113333
-    const pane = prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.83, Rf: 0.075, Rb: 0.075 } });
+  it(invertedAt60Case.label, () => {
+    // n and α fed back through the slab series at 60°
+    if (invertedAt60Case.input.kind !== "uncoated-at-angle") throw new Error("expected an angle case");
+    const pane = prepareMeasuredPane({ thicknessM: 0.006, solar: invertedAt60Case.input.solar });
     expect(pane.coated).toBe(false);
-    const o = unpolarized(pane.solar, deg(60));
-    printed(o.T, "0.743947");
-    printed(o.Rf, "0.142721");
-    printed(o.Rb, "0.142721");
-    printed(1 - o.T - o.Rf, "0.113333");
+    expectCase(engine(invertedAt60Case.input), invertedAt60Case);
   });
 
   it("round trip: the slab at 0° inverts back to n = 1.52, α = 0.02 /mm within 1e-9", () => {
-    // [calc F3] §3 "Round trip ... That is a 1e-9 test": exact slab values in, exact n, α out
+    // exact slab values in, exact n, α out (the inversion is the closed-form inverse of the slab series)
     const slab = absorbingPaneOptics({ thicknessM: 0.006, refractiveIndex: 1.52, absorptionPerM: 20 }, deg(0));
     const inv = invertUncoatedPane(slab.T, slab.R, 0.006);
     expect(Math.abs(inv.refractiveIndex - 1.52)).toBeLessThan(1e-9);
     expect(Math.abs(inv.absorptionPerM / 1000 - 0.02)).toBeLessThan(1e-9);
   });
 
-  it("round trip from the printed values T = 0.814159, R = 0.073327", () => {
-    // [calc F2]/[calc F3] §3: returns n = 1.520000 and α = 0.0200000 /mm. The printed inputs are
-    // rounded to ±5e-7, which moves n by up to 4e-6 and α by up to 2.5e-7 /mm (our propagation of
-    // that rounding through the closed form), hence the tolerances.
-    const inv = invertUncoatedPane(0.814159, 0.073327, 0.006);
-    expect(Math.abs(inv.refractiveIndex - 1.52)).toBeLessThan(5e-6);
-    expect(Math.abs(inv.absorptionPerM / 1000 - 0.02)).toBeLessThan(3e-7);
+  it(printedRoundTripCase.label, () => {
+    // the 6 mm pane's printed normal-incidence T and R are those of the absorbing-pane case
+    const slab0 = caseById(absorbingPaneDomain.cases, "absorbing-pane/6mm/0deg");
+    if (printedRoundTripCase.input.kind !== "inversion") throw new Error("expected an inversion case");
+    expect(printedRoundTripCase.input.T).toBe(expectedOf(slab0, "T").value);
+    expect(printedRoundTripCase.input.R).toBe(expectedOf(slab0, "R").value);
+    // the tolerances of the case cover the rounding of those printed inputs
+    expectCase(engine(printedRoundTripCase.input), printedRoundTripCase);
   });
 
   it("uses the same slab model as a physical pane, per polarisation", () => {
@@ -141,18 +172,15 @@ describe("uncoated pane: inversion of measured T and R to n and α", () => {
 });
 
 describe("coated pane: Karlsson–Roos transmittance", () => {
-  // IMPLEMENTATION-ONLY check values [calc, formula as written in glazing-physics reference §6a,
-  // from memory]: T(θ)/T(0) for (p, q) at 30, 45, 60, 70, 80, 85, 90°
-  const table = [
-    [1, 1, ["0.968983", "0.909959", "0.771175", "0.601766", "0.348053", "0.185807", "0"]],
-    [2, 4, ["0.992381", "0.971076", "0.874389", "0.700178", "0.391388", "0.195146", "0"]],
-    [3, 4, ["0.992264", "0.968537", "0.856100", "0.656645", "0.325937", "0.141226", "0"]],
-  ] as const;
-  const angles = [30, 45, 60, 70, 80, 85, 90];
-  it.each(table)("(p, q) = (%s, %s)", (p, q, values) => {
-    values.forEach((v, i) => printed(karlssonRoosTransmittanceRatio(deg(angles[i]!), p, q), v));
-    expect(karlssonRoosTransmittanceRatio(deg(0), p, q)).toBe(1);
-  });
+  // IMPLEMENTATION-ONLY check values (the polynomial as recalled, from memory): T(θ)/T(0) for (p, q)
+  it("has the 3 × 7 implementation-only values", () => expect(karlssonRoosCases).toHaveLength(21));
+  for (const c of karlssonRoosCases) {
+    it(c.label, () => {
+      if (c.input.kind !== "karlsson-roos") throw new Error("expected a Karlsson–Roos case");
+      expectCase(engine(c.input), c);
+      expect(karlssonRoosTransmittanceRatio(deg(0), c.input.p, c.input.q)).toBe(1);
+    });
+  }
 
   it("falls monotonically from 1 to 0 over the accepted (p, q)", () => {
     for (const p of [1, 2, 3]) {
@@ -171,14 +199,11 @@ describe("coated pane: Karlsson–Roos transmittance", () => {
 
   it("default per-layer parameters (p, q) = (1, 4) stay within 0.011 of an uncoated 6 mm slab's own curve up to 80°", () => {
     // Sanity check of the chosen default against the slab model (Duffie & Beckman ch. 5, from memory),
-    // our own comparison (no published source): [calc F2] §6c reference curve of the 6 mm pane.
-    const ref = [
-      [30, 0.990297],
-      [45, 0.967005],
-      [60, 0.892051],
-      [70, 0.756402],
-      [80, 0.45755],
-    ] as const;
+    // our own comparison (no published source): the reference curve T(θ)/T(0) of the 6 mm pane (case values)
+    const ref = ratio6mmCases
+      .filter((c) => c.input.thetaDeg <= 80)
+      .map((c) => [c.input.thetaDeg, expectedOf(c, "TOverT0").value] as const);
+    expect(ref.map(([d]) => d)).toEqual([30, 45, 60, 70, 80]);
     for (const [d, r] of ref) expect(Math.abs(karlssonRoosTransmittanceRatio(deg(d), 1, 4) - r)).toBeLessThan(0.011);
   });
 
@@ -192,9 +217,11 @@ describe("coated pane: Karlsson–Roos transmittance", () => {
 });
 
 describe("coated pane: angular model", () => {
-  // A hypothetical coated pane (not a product): same T(0) as the 6 mm test pane, so that the
-  // reference slab is that pane and its §2 values can be used.
-  const coated = prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.814159, Rf: 0.1, Rb: 0.05 } });
+  // A hypothetical coated pane (not a product): same T(0) as the 6 mm model pane, so that the
+  // reference slab is that pane and its slab values (absorbing-pane cases) can be used.
+  const slab = (theta: number) => pane6mmCases.find((c) => c.input.thetaDeg === theta)!;
+  const T0 = expectedOf(slab(0), "T").value;
+  const coated = prepareMeasuredPane({ thicknessM: 0.006, solar: { T: T0, Rf: 0.1, Rb: 0.05 } });
 
   it("is classified as coated (|Rf − Rb| > 0.005)", () => {
     expect(coated.coated).toBe(true);
@@ -202,41 +229,42 @@ describe("coated pane: angular model", () => {
   });
 
   it("reference slab matching T(0) is the 6 mm, α = 0.02 /mm pane", () => {
-    // [calc F2] §2: τ = 0.886920 and R = 0.073327 at 0° for that pane; T(0) printed to 6 decimals
+    // τ = 0.886920 and R = 0.073327 at 0° for that pane (case values); T(0) printed to 6 decimals
     // moves τ by at most ~6e-7 (our propagation), hence 1e-6.
     if (coated.solar.kind !== "coated") throw new Error("expected coated");
-    expect(Math.abs(coated.solar.reference.internalTransmittanceNormal - 0.88692)).toBeLessThan(1e-6);
-    expect(Math.abs(coated.solar.reference.reflectanceNormal - 0.073327)).toBeLessThan(1e-6);
+    expect(T0).toBe(0.814159);
+    expect(Math.abs(coated.solar.reference.internalTransmittanceNormal - expectedOf(slab(0), "tau").value)).toBeLessThan(1e-6);
+    expect(Math.abs(coated.solar.reference.reflectanceNormal - expectedOf(slab(0), "R").value)).toBeLessThan(1e-6);
   });
 
   it("reflectance follows the normalised reference curve, per face (common practice, no source)", () => {
-    // [cp] rule R_c(θ) = R_c(0) + (1 − R_c(0))·[R_ref(θ) − R_ref(0)]/[1 − R_ref(0)], evaluated here
-    // with the [calc F2] §2 reference values R_ref(0) = 0.073327, R_ref(60°) = 0.139896,
-    // R_ref(80°) = 0.495741; tolerance 3e-6 covers the rounding of those printed inputs.
-    const rule = (c0: number, r: number) => c0 + ((1 - c0) * (r - 0.073327)) / (1 - 0.073327);
-    for (const [d, refR] of [
-      [60, 0.139896],
-      [80, 0.495741],
-    ] as const) {
+    // common practice (no source): R_c(θ) = R_c(0) + (1 − R_c(0))·[R_ref(θ) − R_ref(0)]/[1 − R_ref(0)],
+    // evaluated here with the reference slab values (absorbing-pane cases) R_ref(0) = 0.073327,
+    // R_ref(60°) = 0.139896, R_ref(80°) = 0.495741; tolerance 3e-6 covers the rounding of those printed inputs.
+    const R0 = expectedOf(slab(0), "R").value;
+    const rule = (c0: number, r: number) => c0 + ((1 - c0) * (r - R0)) / (1 - R0);
+    for (const [d, refR] of [60, 80].map((t) => [t, expectedOf(slab(t), "R").value] as const)) {
       const l = measuredBandAt(coated.solar, deg(d));
       expect(Math.abs(l.s.Rf - rule(0.1, refR))).toBeLessThan(3e-6);
       expect(Math.abs(l.s.Rb - rule(0.05, refR))).toBeLessThan(3e-6);
-      expect(Math.abs(referenceCurveReflectance(0.1, refR, 0.073327) - rule(0.1, refR))).toBeLessThan(1e-15);
+      expect(Math.abs(referenceCurveReflectance(0.1, refR, R0) - rule(0.1, refR))).toBeLessThan(1e-15);
     }
   });
 
   it("transmittance is T(0)·KR(θ; 1, q); with q = 1 it follows the implementation-only (1, 1) row", () => {
-    // IMPLEMENTATION-ONLY [calc] §6a (p, q) = (1, 1): 0.771175 at 60°, 0.348053 at 80°
+    // IMPLEMENTATION-ONLY (p, q) = (1, 1) cases: 0.771175 at 60°, 0.348053 at 80°
     const q1 = prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.6, Rf: 0.1, Rb: 0.2 } }, { karlssonRoosQ: 1 });
-    printed(measuredBandAt(q1.solar, deg(60)).s.T / 0.6, "0.771175");
-    printed(measuredBandAt(q1.solar, deg(80)).s.T / 0.6, "0.348053");
+    for (const theta of [60, 80]) {
+      const c = caseById(karlssonRoosCases, `measured-pane/karlsson-roos/p1-q1/${theta}deg`);
+      expectValue(measuredBandAt(q1.solar, deg(theta)).s.T / 0.6, expectedOf(c, "TOverT0"), c.id);
+    }
     const l = measuredBandAt(coated.solar, deg(45));
-    expect(l.s.T).toBe(0.814159 * karlssonRoosTransmittanceRatio(deg(45), 1, 4));
+    expect(l.s.T).toBe(T0 * karlssonRoosTransmittanceRatio(deg(45), 1, 4));
   });
 
   it("normal incidence returns the measured values; grazing gives T = 0, R = 1", () => {
     const l0 = measuredBandAt(coated.solar, deg(0));
-    expect(l0.s).toEqual({ T: 0.814159, Rf: 0.1, Rb: 0.05 });
+    expect(l0.s).toEqual({ T: T0, Rf: 0.1, Rb: 0.05 });
     const l90 = measuredBandAt(coated.solar, asRadians(Math.PI / 2));
     expect(l90.s.T).toBe(0);
     expect(l90.s.Rf).toBe(1);
@@ -261,9 +289,9 @@ describe("coated pane: angular model", () => {
   });
 
   it("very clear coated pane: the reference slab is lossless, T_ref(0) = 2n/(n² + 1)", () => {
-    // closed form of the lossless slab at 0°, 2n/(n² + 1) = 0.918318 for n = 1.52 ([calc F2] §2)
+    // closed form of the lossless slab at 0°, 2n/(n² + 1) = 0.918318 for n = 1.52 (absorbing-pane case)
     expect(referenceInternalTransmittance(0.95)).toBe(1);
-    printed((2 * 1.52) / (1.52 ** 2 + 1), "0.918318");
+    expectValue((2 * 1.52) / (1.52 ** 2 + 1), expectedOf(losslessCase, "T"), losslessCase.id);
     expect(Math.abs(referenceInternalTransmittance((2 * 1.52) / (1.52 ** 2 + 1)) - 1)).toBeLessThan(1e-12);
     // an opaque coated pane (T = 0) keeps working: the reference slab is opaque too
     const opaque = prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0, Rf: 0.3, Rb: 0.1 } });
@@ -279,7 +307,7 @@ describe("uncoated / coated classification", () => {
     expect(a.coated).toBe(false);
     if (a.solar.kind !== "uncoated") throw new Error("expected uncoated");
     // same inversion as the worked example with R = 0.075
-    printed(a.solar.inversion.refractiveIndex, "1.52198");
+    expectValue(a.solar.inversion.refractiveIndex, expectedOf(workedInversionCase, "refractiveIndex"), workedInversionCase.id);
     const b = prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.83, Rf: 0.078, Rb: 0.072 } });
     expect(b.coated).toBe(true);
   });
