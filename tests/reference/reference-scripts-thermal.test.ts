@@ -2,8 +2,11 @@
 // (scripts/reference/*.ts) within each case's tolerance, so a case value cannot drift from its formula.
 import { describe, expect, it } from 'vitest';
 import { gasPropertiesDomain } from '@/lib/reference-cases/gas-properties';
+import { uValueDomain } from '@/lib/reference-cases/u-value';
 import { gasPropertiesComparison } from '@scripts/reference/gas-properties';
+import { uValueComparison } from '@scripts/reference/u-value';
 import type { ComparisonRow } from '@scripts/reference/thermal-compare';
+import type { ReferenceDomain } from '@/lib/reference-cases/types';
 
 const expectReproduced = (rows: readonly ComparisonRow[]) => {
   for (const r of rows) {
@@ -11,13 +14,23 @@ const expectReproduced = (rows: readonly ComparisonRow[]) => {
   }
 };
 
+/** Every computed or closed-form case of the domain is covered by the script (none is left out). */
+const expectCovered = (domain: ReferenceDomain, rows: readonly ComparisonRow[]) => {
+  const covered = new Set(rows.map((r) => r.caseId));
+  const due = domain.cases.filter((c) => c.source.kind === 'computed' || c.source.kind === 'closed-form');
+  expect(due.length).toBeGreaterThan(0);
+  for (const c of due) expect(covered.has(c.id), c.id).toBe(true);
+  expect(rows).toHaveLength(due.reduce((n, c) => n + c.expected.length, 0));
+};
+
 describe('scripts/reference/gas-properties.ts', () => {
   const rows = gasPropertiesComparison();
-  it('covers every computed and closed-form case', () => {
-    const covered = new Set(rows.map((r) => r.caseId));
-    for (const c of gasPropertiesDomain.cases) {
-      if (c.source.kind === 'computed' || c.source.kind === 'closed-form') expect(covered.has(c.id), c.id).toBe(true);
-    }
-  });
+  it('covers every computed and closed-form case', () => expectCovered(gasPropertiesDomain, rows));
+  it('reproduces every computed value within its tolerance', () => expectReproduced(rows));
+});
+
+describe('scripts/reference/u-value.ts', () => {
+  const rows = uValueComparison();
+  it('covers every computed and closed-form case', () => expectCovered(uValueDomain, rows));
   it('reproduces every computed value within its tolerance', () => expectReproduced(rows));
 });
