@@ -2,9 +2,11 @@
 // (scripts/reference/*.ts) within each case's tolerance, so a case value cannot drift from its formula.
 import { describe, expect, it } from 'vitest';
 import { gasPropertiesDomain } from '@/lib/reference-cases/gas-properties';
+import { gValueDomain } from '@/lib/reference-cases/g-value';
 import { uValueDomain } from '@/lib/reference-cases/u-value';
 import { gasPropertiesComparison } from '@scripts/reference/gas-properties';
 import { uValueComparison } from '@scripts/reference/u-value';
+import { gFromRecomputedOpticsComparison, gValueComparison, opticalInputComparison } from '@scripts/reference/g-value';
 import type { ComparisonRow } from '@scripts/reference/thermal-compare';
 import type { ReferenceDomain } from '@/lib/reference-cases/types';
 
@@ -33,4 +35,28 @@ describe('scripts/reference/u-value.ts', () => {
   const rows = uValueComparison();
   it('covers every computed and closed-form case', () => expectCovered(uValueDomain, rows));
   it('reproduces every computed value within its tolerance', () => expectReproduced(rows));
+});
+
+describe('scripts/reference/g-value.ts', () => {
+  const rows = gValueComparison();
+  it('covers every computed and closed-form case', () => expectCovered(gValueDomain, rows));
+  it('reproduces every g, q_i, N_k, Λ and h_s from the printed optical inputs within its tolerance', () => expectReproduced(rows));
+
+  // The optical inputs of the g cases are printed optics of the named panes: recomputed from the panes
+  // (Fresnel + slab + adding method, 400-node Gauss–Legendre) they agree within half a printed unit.
+  const optics = opticalInputComparison();
+  it('recomputes every printed optical input (T, R, A_k) within its printed rounding', () => {
+    const printed = gValueDomain.cases.reduce((n, c) => {
+      const o = c.input.optics;
+      return o ? n + 1 + (o.solarReflectanceFront === undefined ? 0 : 1) + o.absorptances.length : n;
+    }, 0);
+    expect(optics).toHaveLength(printed);
+    expectReproduced(optics);
+  });
+
+  it('reproduces every printed g and q_i from the recomputed, unrounded optics too', () => {
+    const fromOptics = gFromRecomputedOpticsComparison();
+    expect(fromOptics.length).toBeGreaterThan(0);
+    expectReproduced(fromOptics);
+  });
 });
