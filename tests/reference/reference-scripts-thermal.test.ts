@@ -1,5 +1,6 @@
 // The computed check values of the thermal case modules are reproduced by their independent scripts
 // (scripts/reference/*.ts) within each case's tolerance, so a case value cannot drift from its formula.
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { gasPropertiesDomain } from '@/lib/reference-cases/gas-properties';
 import { gValueDomain } from '@/lib/reference-cases/g-value';
@@ -58,5 +59,25 @@ describe('scripts/reference/g-value.ts', () => {
     const fromOptics = gFromRecomputedOpticsComparison();
     expect(fromOptics.length).toBeGreaterThan(0);
     expectReproduced(fromOptics);
+  });
+});
+
+describe('independence', () => {
+  const importsOf = (path: string) => [...readFileSync(path, 'utf8').matchAll(/^\s*import\b[^;]*?from\s+['"]([^'"]+)['"]/gm)].map((m) => m[1]!);
+
+  it('the thermal scripts import no product code (only case modules, each other and libraries)', () => {
+    for (const script of ['gas-properties', 'u-value', 'g-value', 'thermal-compare']) {
+      const imports = importsOf(`scripts/reference/${script}.ts`);
+      expect(imports.length, script).toBeGreaterThan(0);
+      for (const from of imports) {
+        expect(from.startsWith('@/lib/reference-cases/') || from.startsWith('./'), `${script}.ts imports ${from}`).toBe(true);
+      }
+    }
+  });
+
+  it('the thermal case modules are pure data: they import nothing but ./types', () => {
+    for (const domain of ['gas-properties', 'u-value', 'g-value']) {
+      expect(importsOf(`src/lib/reference-cases/${domain}.ts`), domain).toEqual(['./types']);
+    }
   });
 });
