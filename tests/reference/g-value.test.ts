@@ -1,18 +1,14 @@
-// Total solar energy transmittance g per EN 410:2011 (h_e 23, h_i 8.0 for uncoated glass), with
-// the gap conductance from EN 673:2011. Check values are copied here with their labels.
+// Total solar energy transmittance g per EN 410:2011 (h_e 23, h_i 8.0 for uncoated glass), with the gap
+// conductance from EN 673:2011. The check values, tolerances and sources are the cases of
+// @/lib/reference-cases/g-value: computed from the EN 410 formulae (from memory) and reproduced
+// independently by scripts/reference/g-value.ts.
 //
-// Labels:
-//   [calc F7]  glazing-physics handbook §7: computed in float64, optics from §2/§4, h_e 23, h_i 8.0.
-//   [calc F2]  handbook §2 (one absorbing pane, n 1.52); [calc F4] handbook §4 (two panes);
-//   [calc F5]  handbook §5 (hemispherical averages, 400-node Gauss–Legendre).
-//   [pub mem]  EN 410:2011 formulae as quoted in handbook §7, from memory.
-//   [cp]       common practice (no source).
-//
-// The optical inputs (T, A) are the handbook's printed values, 6 decimals, since the optics are
-// computed elsewhere. Tolerance for g and q_i: each printed input carries ≤ 5e-7, which reaches g
-// as ≤ 5e-7·(1 + Σ N_k) ≤ 9e-7 (double glazing, Σ N_k = 0.78); the printed g itself carries
-// 5e-7 → 1.5e-6 in total. N_k and Λ are computed here from unrounded EN 673 values: half a
-// printed unit (5e-7 for N, 5e-6 for Λ).
+// The optical inputs (T, A) of the g cases are the printed optics (6 decimals) of the panes each case names
+// (Fresnel + absorbing slab + adding method, hemispherical by 400-node Gauss–Legendre); the same script
+// recomputes them from the panes. Here they are inputs: these tests check the EN 410 part alone.
+// Tolerance for g and q_i: each printed input carries ≤ 5e-7, which reaches g as ≤ 5e-7·(1 + Σ N_k) ≤ 9e-7
+// (double glazing, Σ N_k = 0.78); the printed g itself carries 5e-7 → 1.5e-6 in total. N_k and Λ come
+// from unrounded EN 673 values: half a printed unit (5e-7 for N, 5e-6 for Λ).
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
@@ -24,57 +20,75 @@ import {
   secondaryHeatTransferFactorsEn410,
 } from '@/lib/physics/g-value';
 import { uValueEn673, type GlazingThermalInput } from '@/lib/physics/u-value';
+import { gValueDomain, type GValueCase, type GValueCaseInput } from '@/lib/reference-cases/g-value';
 
-const G_TOL = 1.5e-6;
+const caseById = (id: string): GValueCase => {
+  const c = gValueDomain.cases.find((x) => x.id === id);
+  if (!c) throw new Error(`unknown case ${id}`);
+  return c;
+};
+const expectedOf = (c: GValueCase, quantity: string) => {
+  const e = c.expected.find((x) => x.quantity === quantity);
+  if (!e) throw new Error(`${c.id}: no expected ${quantity}`);
+  return e;
+};
+const opticsOf = (c: GValueCase) => {
+  if (!c.input.optics) throw new Error(`${c.id} has no optical input`);
+  return c.input.optics;
+};
+/** The case's make-up (mm) as the engine takes it (m). */
+const toUnit = (unit: GValueCaseInput['unit']): GlazingThermalInput => ({
+  panes: unit.panes.map((p) => ({ thicknessM: p.thicknessMm * 1e-3, emissivityFront: p.emissivityFront, emissivityBack: p.emissivityBack })),
+  gaps: unit.gaps.map((g) => ({ widthM: g.widthMm * 1e-3, gas: g.gas })),
+});
+const factorsOf = (c: GValueCase) =>
+  secondaryHeatTransferFactorsEn410(toUnit(c.input.unit), c.input.glassConduction ? { glassConduction: c.input.glassConduction } : {}).factors;
+/** q_i (where the case gives it) and g from the case's printed optics, each within the case's tolerance. */
+const expectG = (c: GValueCase) => {
+  const o = opticsOf(c);
+  const n = factorsOf(c);
+  const qi = c.expected.find((e) => e.quantity === 'secondaryHeatTransfer');
+  if (qi) expect(Math.abs(secondaryHeatTransfer(o.absorptances, n) - qi.value)).toBeLessThan(qi.tolerance.abs);
+  const g = expectedOf(c, 'gValue');
+  expect(Math.abs(gValue(o.solarTransmittance, o.absorptances, n) - g.value)).toBeLessThan(g.tolerance.abs);
+};
+const gCases = (panes: number) => gValueDomain.cases.filter((c) => c.input.kind === 'g' && c.input.unit.panes.length === panes);
 
-const single6: GlazingThermalInput = { panes: [{ thicknessM: 0.006 }], gaps: [] };
-const single4: GlazingThermalInput = { panes: [{ thicknessM: 0.004 }], gaps: [] };
 const double6Air16: GlazingThermalInput = {
   panes: [{ thicknessM: 0.006 }, { thicknessM: 0.006 }],
   gaps: [{ widthM: 0.016, gas: 'air' }],
 };
 
 describe('single pane', () => {
-  // [pub mem] EN 410 single glazing q_i = α_e h_i/(h_e + h_i) → N = 8/31 = 0.258065 [calc F7].
+  // EN 410 single glazing (from memory): q_i = α_e h_i/(h_e + h_i) → N = 8/31 = 0.258065.
+  const factor = caseById('g-value/single-6/factor');
   it('N = h_i / (h_e + h_i) = 8/31', () => {
-    const r = secondaryHeatTransferFactorsEn410(single6);
+    const r = secondaryHeatTransferFactorsEn410(toUnit(factor.input.unit));
+    const n = expectedOf(factor, 'factors[0]');
     expect(r.factors).toHaveLength(1);
     expect(r.factors[0]).toBeCloseTo(8 / 31, 12);
-    expect(Math.abs(r.factors[0]! - 0.258065)).toBeLessThan(5e-7);
+    expect(Math.abs(r.factors[0]! - n.value)).toBeLessThan(n.tolerance.abs);
     expect(r.internalCoefficientWPerM2K).toBeCloseTo(8, 12);
     expect(r.externalCoefficientWPerM2K).toBe(23);
     expect(r.standard).toBe(EN410_EDITION);
   });
 
-  // [calc F7] 6 mm pane, n 1.52, α 0.02/mm; T and A from [calc F2] as printed in §7.
-  const single6mmTable = [
-    { thetaDeg: 0, t: 0.814159, a: 0.112514, qi: 0.029036, g: 0.843195 },
-    { thetaDeg: 30, t: 0.806259, a: 0.118671, qi: 0.030625, g: 0.836884 },
-    { thetaDeg: 60, t: 0.726272, a: 0.133832, qi: 0.034537, g: 0.760809 },
-    { thetaDeg: 80, t: 0.372519, a: 0.13174, qi: 0.033997, g: 0.406516 },
-  ];
-  const nSingle = secondaryHeatTransferFactorsEn410(single6).factors;
-  for (const row of single6mmTable) {
-    // [cp] N fixed at its normal-incidence thermal value at every angle.
-    it(`6 mm at ${row.thetaDeg}°: g = ${row.g}`, () => {
-      expect(Math.abs(secondaryHeatTransfer([row.a], nSingle) - row.qi)).toBeLessThan(G_TOL);
-      expect(Math.abs(gValue(row.t, [row.a], nSingle) - row.g)).toBeLessThan(G_TOL);
-    });
-  }
-
-  // [calc F5] 6 mm pane hemispherical T 0.736431, A 0.125328 → [calc F7] hemispherical g 0.768774
-  // (F5 applied to g(θ); g is linear in T and A, so hemispherical T and A give the same g).
-  it('hemispherical g of the 6 mm pane = 0.768774', () => {
-    expect(Math.abs(gValue(0.736431, [0.125328], nSingle) - 0.768774)).toBeLessThan(G_TOL);
+  // 6 mm pane (n 1.52, α 0.02/mm) at 0/30/60/80° and hemispherical; low-iron 4 mm at 0°. N fixed at its
+  // normal-incidence thermal value at every angle (common practice, no source); g is linear in T and A, so
+  // hemispherical T and A give the hemispherical g.
+  it('has the 6 mm pane at four angles and hemispherical, and the low-iron pane', () => {
+    expect(gCases(1).map((c) => c.id)).toEqual([
+      'g-value/single-6/0deg',
+      'g-value/single-6/30deg',
+      'g-value/single-6/60deg',
+      'g-value/single-6/80deg',
+      'g-value/single-6/hemispherical',
+      'g-value/low-iron-4/0deg',
+    ]);
   });
+  for (const c of gCases(1)) it(c.label, () => expectG(c));
 
-  // [calc F2] low-iron 4 mm, θ 0: T 0.910975, A 0.007965 → [calc F7] g 0.913030.
-  it('low-iron 4 mm: g = 0.913030', () => {
-    const n = secondaryHeatTransferFactorsEn410(single4).factors;
-    expect(Math.abs(gValue(0.910975, [0.007965], n) - 0.91303)).toBeLessThan(G_TOL);
-  });
-
-  // [closed form] h_i = 3.6 + 4.4·0.2/0.837 = 4.651374 for a room-side low-e surface (ε 0.2),
+  // Closed form: h_i = 3.6 + 4.4·0.2/0.837 = 4.651374 for a room-side low-e surface (ε 0.2),
   // so N = h_i/(23 + h_i).
   it('room-side emissivity lowers h_i and N', () => {
     const r = secondaryHeatTransferFactorsEn410({ panes: [{ thicknessM: 0.006, emissivityBack: 0.2 }], gaps: [] });
@@ -87,58 +101,66 @@ describe('single pane', () => {
 });
 
 describe('double glazing 6 / 16 air / 6, uncoated', () => {
-  const r = secondaryHeatTransferFactorsEn410(double6Air16);
+  const network = caseById('g-value/double-6-16air-6/network');
+  const r = secondaryHeatTransferFactorsEn410(toUnit(network.input.unit));
+  const hs = expectedOf(network, 'gaps[0].conductanceWPerM2K');
+  const lambda = expectedOf(network, 'conductancesBetweenPanesWPerM2K[0]');
 
-  // [calc F7] h_s = 5.31315 (§8) and Λ = 1/(d1/λ + 1/h_s + d2/λ) = 4.99470 W/m²K.
-  it('Λ = 4.99470 from h_s = 5.31315', () => {
-    expect(Math.abs(r.thermal.gaps[0]!.conductanceWPerM2K - 5.31315)).toBeLessThan(5e-6);
+  // h_s = 5.31315 (EN 673, as in the U-value cases) and Λ = 1/(d1/λ + 1/h_s + d2/λ) = 4.99470 W/m²K.
+  it(`Λ = ${lambda.value} from h_s = ${hs.value}`, () => {
+    expect(Math.abs(r.thermal.gaps[0]!.conductanceWPerM2K - hs.value)).toBeLessThan(hs.tolerance.abs);
     expect(r.conductancesBetweenPanesWPerM2K).toHaveLength(1);
-    expect(Math.abs(r.conductancesBetweenPanesWPerM2K[0]! - 4.9947)).toBeLessThan(5e-6);
+    expect(Math.abs(r.conductancesBetweenPanesWPerM2K[0]! - lambda.value)).toBeLessThan(lambda.tolerance.abs);
     expect(r.glassConduction).toBe('surfaces');
   });
 
-  // [calc F7] N1 = 0.117926, N2 = 0.660962.
-  it('N1 = 0.117926, N2 = 0.660962', () => {
+  const n1 = expectedOf(network, 'factors[0]');
+  const n2 = expectedOf(network, 'factors[1]');
+  it(`N1 = ${n1.value}, N2 = ${n2.value}`, () => {
     expect(r.factors).toHaveLength(2);
-    expect(Math.abs(r.factors[0]! - 0.117926)).toBeLessThan(5e-7);
-    expect(Math.abs(r.factors[1]! - 0.660962)).toBeLessThan(5e-7);
+    expect(Math.abs(r.factors[0]! - n1.value)).toBeLessThan(n1.tolerance.abs);
+    expect(Math.abs(r.factors[1]! - n2.value)).toBeLessThan(n2.tolerance.abs);
   });
 
-  // [pub mem] EN 410 double-glazing formula
+  // EN 410 double-glazing formula (from memory)
   //   q_i = [(α1 + α2)/h_e + α2/Λ] / [1/h_e + 1/h_i + 1/Λ]
-  // with the printed Λ = 4.99470 [calc F7] must equal Σ N_k α_k (closed-form identity; the
-  // printed Λ carries 5e-6 → < 1e-7 in q_i for α ≤ 0.2).
+  // with the printed Λ = 4.99470 must equal Σ N_k α_k (closed-form identity; the printed Λ carries
+  // 5e-6 → < 1e-7 in q_i for α ≤ 0.2).
   it('Σ N_k α_k equals the EN 410 double-glazing formula', () => {
-    const lambda = 4.9947;
-    const [a1, a2] = [0.119267, 0.092099];
-    const en410 = ((a1 + a2) / 23 + a2 / lambda) / (1 / 23 + 1 / 8 + 1 / lambda);
+    const [a1, a2] = opticsOf(caseById('g-value/double-6-16air-6/0deg')).absorptances as [number, number];
+    const l = lambda.value;
+    const en410 = ((a1 + a2) / 23 + a2 / l) / (1 / 23 + 1 / 8 + 1 / l);
     expect(Math.abs(secondaryHeatTransfer([a1, a2], r.factors) - en410)).toBeLessThan(1e-7);
   });
 
-  // [calc F7] T, A1, A2 from [calc F4] (per polarisation, then averaged), h_e 23, h_i 8.0.
-  const double6mmTable = [
-    { thetaDeg: 0, t: 0.666439, a1: 0.119267, a2: 0.092099, qi: 0.074939, g: 0.741378 },
-    { thetaDeg: 30, t: 0.654858, a1: 0.125812, a2: 0.096293, qi: 0.078482, g: 0.73334 },
-    { thetaDeg: 60, t: 0.560292, a1: 0.145683, a2: 0.10071, qi: 0.083745, g: 0.644037 },
-    { thetaDeg: 80, t: 0.196926, a1: 0.161459, a2: 0.065233, qi: 0.062157, g: 0.259083 },
-  ];
-  for (const row of double6mmTable) {
-    it(`at ${row.thetaDeg}°: q_i = ${row.qi}, g = ${row.g}`, () => {
-      expect(Math.abs(secondaryHeatTransfer([row.a1, row.a2], r.factors) - row.qi)).toBeLessThan(G_TOL);
-      expect(Math.abs(gValue(row.t, [row.a1, row.a2], r.factors) - row.g)).toBeLessThan(G_TOL);
-    });
-  }
+  // T, A1, A2 printed for the pair of 6 mm panes (stack solved per polarisation, then averaged), h_e 23, h_i 8.0.
+  it('has the pair at four angles, with the glass left out of Λ, and hemispherical', () => {
+    expect(gCases(2).map((c) => c.id)).toEqual([
+      'g-value/double-6-16air-6/0deg',
+      'g-value/double-6-16air-6/30deg',
+      'g-value/double-6-16air-6/60deg',
+      'g-value/double-6-16air-6/80deg',
+      'g-value/double-6-16air-6/0deg/gap-only',
+      'g-value/double-6-16air-6/hemispherical',
+    ]);
+  });
+  for (const c of gCases(2)) it(c.label, () => expectG(c));
 
-  // [calc F7] "If Λ = h_s (gap only), g(0) = 0.740801": the glass-conduction choice moves g by ~0.0006.
-  it('Λ = h_s only: g(0) = 0.740801', () => {
-    const gapOnly = secondaryHeatTransferFactorsEn410(double6Air16, { glassConduction: 'none' });
-    expect(gapOnly.conductancesBetweenPanesWPerM2K[0]).toBeCloseTo(gapOnly.thermal.gaps[0]!.conductanceWPerM2K, 12);
-    const g = gValue(0.666439, [0.119267, 0.092099], gapOnly.factors);
-    expect(Math.abs(g - 0.740801)).toBeLessThan(G_TOL);
-    expect(Math.abs(g - 0.741378)).toBeGreaterThan(4e-4);
+  // "If Λ = h_s (gap only), g(0) = 0.740801": the glass-conduction choice moves g by ~0.0006.
+  it('Λ = h_s only: the glass-conduction choice moves g(0) by more than 4e-4', () => {
+    const gapOnly = caseById('g-value/double-6-16air-6/0deg/gap-only');
+    expect(gapOnly.input.glassConduction).toBe('none');
+    const withGlass = caseById('g-value/double-6-16air-6/0deg');
+    const noGlass = secondaryHeatTransferFactorsEn410(toUnit(gapOnly.input.unit), { glassConduction: 'none' });
+    expect(noGlass.conductancesBetweenPanesWPerM2K[0]).toBeCloseTo(noGlass.thermal.gaps[0]!.conductanceWPerM2K, 12);
+    const o = opticsOf(gapOnly);
+    const g = gValue(o.solarTransmittance, o.absorptances, noGlass.factors);
+    const e = expectedOf(gapOnly, 'gValue');
+    expect(Math.abs(g - e.value)).toBeLessThan(e.tolerance.abs);
+    expect(Math.abs(g - expectedOf(withGlass, 'gValue').value)).toBeGreaterThan(4e-4);
   });
 
-  // [closed form] For two panes the network total 1/h_e + 1/Λ + 1/h_i equals 1/U of EN 673.
+  // Closed form: for two panes the network total 1/h_e + 1/Λ + 1/h_i equals 1/U of EN 673.
   it('network total equals 1/U', () => {
     const total = 1 / 23 + r.resistancesBetweenPanesM2KPerW[0]! + 1 / 8;
     expect(total).toBeCloseTo(1 / uValueEn673(double6Air16).uValueWPerM2K, 12);
@@ -146,7 +168,7 @@ describe('double glazing 6 / 16 air / 6, uncoated', () => {
 });
 
 describe('general N-pane network', () => {
-  // [closed form] Λ → ∞ reduces the double formula to the single-pane one: N1 = N2 = h_i/(h_e + h_i).
+  // Closed form: Λ → ∞ reduces the double formula to the single-pane one: N1 = N2 = h_i/(h_e + h_i).
   it('reduces to the single-pane factor as the resistance between panes vanishes', () => {
     const n = secondaryHeatTransferFactors({
       externalCoefficientWPerM2K: 23,
@@ -157,8 +179,8 @@ describe('general N-pane network', () => {
     expect(n[1]).toBeCloseTo(8 / 31, 9);
   });
 
-  // [pub mem] EN 410 triple glazing: Λ12 from the outer surface to the centre of pane 2,
-  // Λ23 from that centre to the innermost surface. [closed form] then 1/Λ12 + 1/Λ23 + 1/h_e + 1/h_i = 1/U.
+  // EN 410 triple glazing (from memory): Λ12 from the outer surface to the centre of pane 2,
+  // Λ23 from that centre to the innermost surface. Closed form: then 1/Λ12 + 1/Λ23 + 1/h_e + 1/h_i = 1/U.
   it('triple: half of the middle pane on each side; total equals 1/U', () => {
     const unit: GlazingThermalInput = {
       panes: [{ thicknessM: 0.006, emissivityBack: 0.03 }, { thicknessM: 0.004 }, { thicknessM: 0.008, emissivityFront: 0.03 }],
@@ -177,7 +199,7 @@ describe('general N-pane network', () => {
     expect(r.factors[2]).toBeCloseTo(1 - 1 / 8 / total, 12);
   });
 
-  // [closed form] N_k = (resistance to outside)/(total) is increasing and lies in (0, 1); the
+  // Closed form: N_k = (resistance to outside)/(total) is increasing and lies in (0, 1); the
   // heat absorbed in every layer splits into an inward part N_k and an outward part 1 − N_k.
   it('property: 0 < N_1 < … < N_n < 1 and N_n = 1 − (1/h_i)/total (fast-check)', () => {
     fc.assert(

@@ -1,12 +1,10 @@
 // Gas properties of glazing fills at the EN 673 mean temperature (10 °C, 283 K) and the EN 673
-// linear-by-volume mixing rule. Check values are copied here (the tests read no outside file).
-//
-// Sources and labels:
-//   [EN 673 table, mem]  EN 673:2011 clause 6, gas property table at 10 °C, values from memory as
-//                        reproduced in the glazing-physics handbook §8; a public table of the same
-//                        gases at −10/0/10/20 °C agrees at 10 °C.
-//   [calc F8]            glazing-physics handbook §8, computed with float64 from the EN 673 formulae.
-//   [closed form]        arithmetic from the formula stated next to the check.
+// linear-by-volume mixing rule. The check values, their tolerances and their sources are the cases of
+// @/lib/reference-cases/gas-properties:
+//   - ρ, μ, λ, c: EN 673:2011 clause 6, gas property table at 10 °C (values from memory);
+//   - Prandtl numbers: computed from Pr = μc/λ, recomputed by scripts/reference/gas-properties.ts;
+//   - mixtures: closed form P_mix = Σ F_i P_i (EN 673:2011 clause 6, from memory).
+// Checks that are not tabular (mixing identities, properties, bad input) stay here.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
@@ -18,15 +16,30 @@ import {
   type GasName,
   type GasProperties,
 } from '@/lib/physics/gas-properties';
+import { gasPropertiesDomain, type GasPropertiesCase } from '@/lib/reference-cases/gas-properties';
 
-// [EN 673 table, mem] ρ [kg/m³], μ [kg/(m·s)], λ [W/(mK)], c [J/(kg·K)] at 10 °C.
-const en673Table10C: Record<GasName, GasProperties> = {
-  air: { densityKgPerM3: 1.232, dynamicViscosityPaS: 1.761e-5, conductivityWPerMK: 2.496e-2, specificHeatJPerKgK: 1008 },
-  argon: { densityKgPerM3: 1.699, dynamicViscosityPaS: 2.164e-5, conductivityWPerMK: 1.684e-2, specificHeatJPerKgK: 519 },
-  krypton: { densityKgPerM3: 3.56, dynamicViscosityPaS: 2.4e-5, conductivityWPerMK: 0.9e-2, specificHeatJPerKgK: 245 },
+const caseById = (id: string): GasPropertiesCase => {
+  const c = gasPropertiesDomain.cases.find((x) => x.id === id);
+  if (!c) throw new Error(`unknown case ${id}`);
+  return c;
+};
+const expectedValue = (c: GasPropertiesCase, quantity: string) => {
+  const e = c.expected.find((x) => x.quantity === quantity);
+  if (!e) throw new Error(`${c.id}: no expected ${quantity}`);
+  return e;
 };
 
 const KEYS = ['densityKgPerM3', 'dynamicViscosityPaS', 'conductivityWPerMK', 'specificHeatJPerKgK'] as const;
+
+/** ρ [kg/m³], μ [kg/(m·s)], λ [W/(mK)], c [J/(kg·K)] at 10 °C: EN 673:2011 clause 6 table (from memory). */
+const en673Table10C = Object.fromEntries(
+  (['air', 'argon', 'krypton'] as const).map((name) => {
+    const c = caseById(`gas-properties/${name}/10C`);
+    return [name, Object.fromEntries(KEYS.map((k) => [k, expectedValue(c, k).value])) as unknown as GasProperties];
+  }),
+) as Record<GasName, GasProperties>;
+
+const pr = (g: GasProperties) => (g.dynamicViscosityPaS * g.specificHeatJPerKgK) / g.conductivityWPerMK;
 
 describe('EN 673 gas table at 10 °C', () => {
   it('holds exactly air, argon and krypton', () => {
@@ -34,42 +47,48 @@ describe('EN 673 gas table at 10 °C', () => {
     expect(Object.keys(GAS_PROPERTIES_EN673).sort()).toEqual(['air', 'argon', 'krypton']);
   });
 
-  for (const name of ['air', 'argon', 'krypton'] as const) {
-    // [EN 673 table, mem]: printed to 4 significant digits, stored as printed → exact equality.
-    it(`${name}: ρ, μ, λ, c as tabulated`, () => {
-      expect(gasPropertiesEn673(name)).toEqual(en673Table10C[name]);
+  const tabulated = gasPropertiesDomain.cases.filter((c) => c.source.kind === 'published');
+  it('has a tabulated case for each gas', () => {
+    expect(tabulated.map((c) => c.input.gas).sort()).toEqual(['air', 'argon', 'krypton']);
+  });
+  for (const c of tabulated) {
+    // Printed to 4 significant digits, stored as printed → exact equality (tolerance 0).
+    it(c.label, () => {
+      expect(gasPropertiesEn673(c.input.gas)).toEqual(en673Table10C[c.input.gas as GasName]);
+      for (const e of c.expected) expect(e.tolerance.abs).toBe(0);
     });
   }
 
-  // [calc F8] handbook §8 intermediate values: Pr = μc/λ = 0.711173 (air), 0.666933 (argon),
-  // printed to 6 decimals → tolerance 5e-7.
-  it('gives the handbook Prandtl numbers for air and argon', () => {
-    const pr = (g: GasProperties) => (g.dynamicViscosityPaS * g.specificHeatJPerKgK) / g.conductivityWPerMK;
-    expect(Math.abs(pr(gasPropertiesEn673('air')) - 0.711173)).toBeLessThan(5e-7);
-    expect(Math.abs(pr(gasPropertiesEn673('argon')) - 0.666933)).toBeLessThan(5e-7);
-  });
+  // Pr = μc/λ printed to 6 decimals → tolerance 5e-7 (scripts/reference/gas-properties.ts).
+  for (const id of ['gas-properties/air/prandtl', 'gas-properties/argon/prandtl']) {
+    const c = caseById(id);
+    it(c.label, () => {
+      const e = expectedValue(c, 'prandtl');
+      expect(Math.abs(pr(gasPropertiesEn673(c.input.gas)) - e.value)).toBeLessThan(e.tolerance.abs);
+    });
+  }
 });
 
 describe('mixtures (EN 673: properties linear in volume fraction)', () => {
-  // [closed form] EN 673 rule P_mix = Σ F_i P_i with the [EN 673 table, mem] values:
-  // 90 % argon / 10 % air → ρ = 0.9·1.699 + 0.1·1.232 = 1.6523 kg/m³,
-  // μ = 0.9·2.164e-5 + 0.1·1.761e-5 = 2.1237e-5, λ = 0.9·1.684e-2 + 0.1·2.496e-2 = 1.7652e-2,
-  // c = 0.9·519 + 0.1·1008 = 567.9. Tolerance 1e-12 relative: float64 rounding only.
-  it('90 % argon / 10 % air', () => {
-    const m = gasPropertiesEn673({ argon: 0.9, air: 0.1 });
-    expect(m.densityKgPerM3).toBeCloseTo(1.6523, 12);
-    expect(m.dynamicViscosityPaS / 2.1237e-5).toBeCloseTo(1, 12);
-    expect(m.conductivityWPerMK / 1.7652e-2).toBeCloseTo(1, 12);
-    expect(m.specificHeatJPerKgK).toBeCloseTo(567.9, 9);
+  // Closed form P_mix = Σ F_i P_i with the EN 673 table: ρ, c to float64 rounding; μ and λ as the ratio
+  // to the expected value, to 12 decimals.
+  const mixed = caseById('gas-properties/argon90-air10/mixed');
+  it(mixed.label, () => {
+    const m = gasPropertiesEn673(mixed.input.gas);
+    expect(m.densityKgPerM3).toBeCloseTo(expectedValue(mixed, 'densityKgPerM3').value, 12);
+    expect(m.dynamicViscosityPaS / expectedValue(mixed, 'dynamicViscosityPaS').value).toBeCloseTo(1, 12);
+    expect(m.conductivityWPerMK / expectedValue(mixed, 'conductivityWPerMK').value).toBeCloseTo(1, 12);
+    expect(m.specificHeatJPerKgK).toBeCloseTo(expectedValue(mixed, 'specificHeatJPerKgK').value, 9);
   });
 
-  // [closed form] Pr of the mixture from the mixed properties above:
-  // 2.1237e-5 · 567.9 / 1.7652e-2 = 0.683237 (6 decimals → 5e-7). The handbook's 90 % Ar
-  // U-values [calc F8], tested in u-value.test.ts, confirm that all four properties mix linearly.
+  // Pr of the mixture from the mixed properties (6 decimals → 5e-7). The 90 % Ar U values of
+  // u-value.test.ts confirm that all four properties mix linearly.
+  const mixedPr = caseById('gas-properties/argon90-air10/prandtl');
   it('mixes μ, c and λ separately (Pr of the mixture is not the mixed Pr)', () => {
-    const m = gasPropertiesEn673({ argon: 0.9, air: 0.1 });
-    const prMix = (m.dynamicViscosityPaS * m.specificHeatJPerKgK) / m.conductivityWPerMK;
-    expect(Math.abs(prMix - 0.683237)).toBeLessThan(5e-7);
+    const m = gasPropertiesEn673(mixedPr.input.gas);
+    const prMix = pr(m);
+    const e = expectedValue(mixedPr, 'prandtl');
+    expect(Math.abs(prMix - e.value)).toBeLessThan(e.tolerance.abs);
     // A naive mixing of Pr itself would give 0.9·0.666933 + 0.1·0.711173 = 0.671357.
     expect(Math.abs(prMix - 0.671357)).toBeGreaterThan(0.01);
   });

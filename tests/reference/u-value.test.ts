@@ -1,16 +1,12 @@
 // Centre-of-glass U value per EN 673:2011, declared conditions (h_e 23, h_i 3.6 + 4.4 ε/0.837,
-// ΔT 15 K, T_m 283 K, glass λ 1.0, vertical). Check values are copied here with their labels.
-//
-// Labels:
-//   [calc F8]  glazing-physics handbook §8: computed in float64 from the EN 673 formulae
-//              (equations and constants from memory of EN 673; gas table from memory).
-//   [pub mem]  "common published rounded values", handbook §8, from memory.
-//   [closed form] arithmetic from the formula stated beside it.
-//
-// Tolerances: the handbook prints U and h_s to 5 decimals, so a correct implementation must be
-// within half a unit of the last digit (5e-6); values printed to 6 decimals get 5e-7; Gr and
-// Gr·Pr printed to 2 decimals get 0.005. Two float64 implementations of the same formulae agree
-// to ~1e-12, so anything outside half a printed unit is a real disagreement.
+// ΔT 15 K, T_m 283 K, glass λ 1.0, vertical). The check values, tolerances and sources are the cases of
+// @/lib/reference-cases/u-value:
+//   - computed from the EN 673:2011 formulae (equations and constants from memory) and reproduced
+//     independently by scripts/reference/u-value.ts;
+//   - common published rounded values, from memory (no single source);
+//   - the convection constants A and n of EN 673:2011 clause 5 (from memory);
+//   - closed-form arithmetic where the case says so.
+// Checks that are not tabular (identities, properties, labelling, bad input) stay here.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
@@ -21,10 +17,13 @@ import {
   nusseltNumberEn673,
   radiativeConductanceEn673,
   uValueEn673,
+  type GapThermalResult,
   type GlazingThermalInput,
   type PaneThermalInput,
+  type UValueOptions,
 } from '@/lib/physics/u-value';
 import type { GasFill } from '@/lib/physics/gas-properties';
+import { uValueDomain, type UValueCase, type UValueCaseInput } from '@/lib/reference-cases/u-value';
 
 const MM = 1e-3;
 const AR90: GasFill = { argon: 0.9, air: 0.1 };
@@ -40,114 +39,123 @@ const double = (gapMm: number, gas: GasFill, e = 0.837): GlazingThermalInput => 
   panes: [pane(4, 0.837, e), pane(4)],
   gaps: [{ widthM: gapMm * MM, gas }],
 });
-/** Triple: 4 / gap / 4 / gap / 4, coatings of emissivity e on faces 2 and 5 (both facing a gap). */
-const triple = (gapMm: number, gas: GasFill, e: number): GlazingThermalInput => ({
-  panes: [pane(4, 0.837, e), pane(4), pane(4, e, 0.837)],
-  gaps: [
-    { widthM: gapMm * MM, gas },
-    { widthM: gapMm * MM, gas },
-  ],
+type UnitInput = Extract<UValueCaseInput, { kind: 'unit' }>;
+const caseById = (id: string): UValueCase => {
+  const c = uValueDomain.cases.find((x) => x.id === id);
+  if (!c) throw new Error(`unknown case ${id}`);
+  return c;
+};
+const expectedOf = (c: UValueCase, quantity: string) => {
+  const e = c.expected.find((x) => x.quantity === quantity);
+  if (!e) throw new Error(`${c.id}: no expected ${quantity}`);
+  return e;
+};
+const unitInput = (c: UValueCase): UnitInput => {
+  if (c.input.kind !== 'unit') throw new Error(`${c.id} is not a unit case`);
+  return c.input;
+};
+/** The case's unit (mm) as the engine takes it (m), like the app converts at the edge. */
+const toUnit = (input: UnitInput): GlazingThermalInput => ({
+  panes: input.panes.map((p) => pane(p.thicknessMm, p.emissivityFront, p.emissivityBack)),
+  gaps: input.gaps.map((g) => ({ widthM: g.widthMm * MM, gas: g.gas })),
 });
-
-interface Row {
-  name: string;
-  unit: GlazingThermalInput;
-  /** [calc F8] h_s per gap, 5 decimals (null: single glazing). */
-  hs: number | null;
-  /** [calc F8] U, 5 decimals. */
-  u: number;
-  /** [calc F8] U rounded to 0.1 as EN 673 clause 9 declares (from memory). */
-  rounded: number;
-  /** [calc F8] U with h_e = 25 (the EN ISO 6946 R_se = 0.04 convention), 5 decimals. */
-  u25: number;
-  /** [pub mem] common published rounded value or range; null where the handbook gives none. */
-  published: readonly [number, number] | null;
-}
-
-// glazing-physics handbook §8 check table [calc F8], every row; coatings face the gap.
-const handbookSection8Table: Row[] = [
-  { name: 'single 4 mm', unit: { panes: [pane(4)], gaps: [] }, hs: null, u: 5.79783, rounded: 5.8, u25: 5.91716, published: [5.8, 5.8] },
-  { name: 'single 6 mm', unit: { panes: [pane(6)], gaps: [] }, hs: null, u: 5.73137, rounded: 5.7, u25: 5.84795, published: [5.7, 5.7] },
-  { name: '4/12 air/4 uncoated', unit: double(12, 'air'), hs: 5.77954, u: 2.86121, rounded: 2.9, u25: 2.88997, published: [2.9, 2.9] },
-  { name: '4/16 air/4 uncoated', unit: double(16, 'air'), hs: 5.31315, u: 2.74205, rounded: 2.7, u25: 2.76845, published: [2.7, 2.7] },
-  { name: '4/16 argon/4 uncoated', unit: double(16, 'argon'), hs: 4.85928, u: 2.61595, rounded: 2.6, u25: 2.63997, published: [2.6, 2.6] },
-  { name: '4/16 air/4 ε 0.03', unit: double(16, 'air', 0.03), hs: 1.76692, u: 1.34692, rounded: 1.3, u25: 1.35326, published: [1.3, 1.4] },
-  { name: '4/16 Ar 100 %/4 ε 0.03', unit: double(16, 'argon', 0.03), hs: 1.31306, u: 1.06603, rounded: 1.1, u25: 1.07, published: [1.0, 1.1] },
-  { name: '4/16 Ar 100 %/4 ε 0.04', unit: double(16, 'argon', 0.04), hs: 1.36377, u: 1.09921, rounded: 1.1, u25: 1.10343, published: [1.1, 1.1] },
-  { name: '4/16 Ar 90 %/4 ε 0.03', unit: double(16, AR90, 0.03), hs: 1.37175, u: 1.1044, rounded: 1.1, u25: 1.10866, published: [1.1, 1.1] },
-  { name: '4/16 Ar 90 %/4 ε 0.04', unit: double(16, AR90, 0.04), hs: 1.42246, u: 1.13703, rounded: 1.1, u25: 1.14155, published: [1.1, 1.1] },
-  { name: '4/16Ar/4/16Ar/4 2× ε 0.03', unit: triple(16, 'argon', 0.03), hs: 1.20582, u: 0.54374, rounded: 0.5, u25: 0.54477, published: [0.5, 0.6] },
-  { name: '4/16Ar90/4/16Ar90/4 2× ε 0.03', unit: triple(16, AR90, 0.03), hs: 1.25657, u: 0.5643, rounded: 0.6, u25: 0.56541, published: [0.6, 0.6] },
-  { name: '4/16Ar/4/16Ar/4 2× ε 0.04', unit: triple(16, 'argon', 0.04), hs: 1.25653, u: 0.56428, rounded: 0.6, u25: 0.56539, published: [0.6, 0.6] },
-  { name: '4/12Kr/4/12Kr/4 2× ε 0.03', unit: triple(12, 'krypton', 0.03), hs: 0.90332, u: 0.41762, rounded: 0.4, u25: 0.41822, published: null },
-];
+const toOptions = (input: UnitInput): UValueOptions => ({
+  ...(input.externalCoefficientWPerM2K === undefined ? {} : { externalCoefficientWPerM2K: input.externalCoefficientWPerM2K }),
+  ...(input.tiltDeg === undefined ? {} : { tiltDeg: input.tiltDeg }),
+});
+/** Every `gap.X` expected value of a case, checked in every gap within its tolerance. */
+const expectGapValues = (c: UValueCase, gaps: readonly GapThermalResult[]) => {
+  for (const e of c.expected.filter((x) => x.quantity.startsWith('gap.'))) {
+    const key = e.quantity.slice(4) as keyof GapThermalResult;
+    expect(gaps.length).toBeGreaterThan(0);
+    for (const g of gaps) {
+      const v = g[key] as number;
+      if (e.tolerance.abs === 0) expect(v, `${c.id} ${e.quantity}`).toBe(e.value);
+      else expect(Math.abs(v - e.value), `${c.id} ${e.quantity}`).toBeLessThan(e.tolerance.abs);
+    }
+  }
+};
 
 /** EN 673 clause 9 (from memory): U is declared to one decimal. */
 const roundToTenth = (x: number) => Math.round(x * 10) / 10;
 
-describe('EN 673 check table (handbook §8, every row)', () => {
+/** The 14 build-ups of the check table: the cases with a U value under the declared conditions. */
+const tableCases = uValueDomain.cases.filter(
+  (c) => c.input.kind === 'unit' && c.expected.some((e) => e.quantity === 'uValueWPerM2K') && c.input.externalCoefficientWPerM2K === undefined,
+);
+
+describe('EN 673 check table (every row)', () => {
   it('has all 14 rows', () => {
-    expect(handbookSection8Table).toHaveLength(14);
+    expect(tableCases).toHaveLength(14);
   });
 
-  for (const row of handbookSection8Table) {
-    describe(row.name, () => {
-      const r = uValueEn673(row.unit);
+  for (const row of tableCases) {
+    const he25 = caseById(`${row.id}/he25`);
+    const published = uValueDomain.cases.find((c) => c.id === `${row.id}/published-rounded`);
+    const u = expectedOf(row, 'uValueWPerM2K');
+    const rounded = expectedOf(row, 'uValueRoundedToTenth');
+    const hs = row.expected.find((e) => e.quantity === 'gap.conductanceWPerM2K');
+    describe(row.label, () => {
+      const r = uValueEn673(toUnit(unitInput(row)));
 
-      // [calc F8] U to 5 decimals → 5e-6.
-      it(`U = ${row.u} W/m²K`, () => {
-        expect(Math.abs(r.uValueWPerM2K - row.u)).toBeLessThan(5e-6);
+      // U to 5 decimals → 5e-6.
+      it(`U = ${u.value} W/m²K`, () => {
+        expect(Math.abs(r.uValueWPerM2K - u.value)).toBeLessThan(u.tolerance.abs);
         expect(r.declaredConditions).toBe(true);
         expect(r.standard).toBe('EN 673:2011');
       });
 
-      // [calc F8] h_s per gap to 5 decimals → 5e-6; in the triples both gaps are equal by symmetry.
+      // h_s per gap to 5 decimals → 5e-6; in the triples both gaps are equal by symmetry.
       it('h_s per gap', () => {
-        if (row.hs === null) {
+        if (hs === undefined) {
           expect(r.gaps).toHaveLength(0);
         } else {
           expect(r.gaps.length).toBeGreaterThan(0);
-          for (const g of r.gaps) expect(Math.abs(g.conductanceWPerM2K - row.hs)).toBeLessThan(5e-6);
+          for (const g of r.gaps) expect(Math.abs(g.conductanceWPerM2K - hs.value)).toBeLessThan(hs.tolerance.abs);
         }
       });
 
-      // [calc F8] "rounded" column; [pub mem] common published rounded values (or ranges).
-      it(`rounds to ${row.rounded} (published: ${row.published ? row.published.join('–') : 'none'})`, () => {
-        const rounded = roundToTenth(r.uValueWPerM2K);
-        expect(rounded).toBeCloseTo(row.rounded, 10);
-        if (row.published) {
-          expect(rounded).toBeGreaterThanOrEqual(row.published[0] - 1e-9);
-          expect(rounded).toBeLessThanOrEqual(row.published[1] + 1e-9);
-        }
+      // "rounded" column (EN 673 clause 9); common published rounded values (or ranges), from memory.
+      const pub = published?.expected[0];
+      const range = pub ? [pub.value - (pub.tolerance.abs - 1e-9), pub.value + (pub.tolerance.abs - 1e-9)] : null;
+      it(`rounds to ${rounded.value} (published: ${range ? `${+range[0]!.toFixed(1)}–${+range[1]!.toFixed(1)}` : 'none'})`, () => {
+        const declared = roundToTenth(r.uValueWPerM2K);
+        expect(declared).toBeCloseTo(rounded.value, 10);
+        if (pub) expect(Math.abs(declared - pub.value)).toBeLessThanOrEqual(pub.tolerance.abs);
       });
 
-      // [calc F8] "h_e = 25" column, 5 decimals → 5e-6.
-      it(`U = ${row.u25} with h_e = 25`, () => {
-        const r25 = uValueEn673(row.unit, { externalCoefficientWPerM2K: 25 });
-        expect(Math.abs(r25.uValueWPerM2K - row.u25)).toBeLessThan(5e-6);
+      // "h_e = 25" column, 5 decimals → 5e-6.
+      const u25 = expectedOf(he25, 'uValueWPerM2K');
+      it(`U = ${u25.value} with h_e = 25`, () => {
+        const input = unitInput(he25);
+        expect(input.externalCoefficientWPerM2K).toBe(25);
+        const r25 = uValueEn673(toUnit(input), toOptions(input));
+        expect(Math.abs(r25.uValueWPerM2K - u25.value)).toBeLessThan(u25.tolerance.abs);
         expect(r25.declaredConditions).toBe(false);
         expect(r25.label).toMatch(/non-declared/);
       });
     });
   }
 
-  // [calc F8] the 4/12 air row has Nu = 1, the triples have ΔT 7.5 K per gap and Nu = 1.
+  // The 4/12 air row has Nu = 1, the triples have ΔT 7.5 K per gap and Nu = 1.
   it('4/12 air only conducts; the argon triple splits ΔT 7.5 / 7.5 K with Nu = 1', () => {
-    const d = uValueEn673(double(12, 'air'));
-    expect(d.gaps[0]!.nusselt).toBe(1);
+    const conducts = caseById('u-value/4-12air-4/conduction-only');
+    const d = uValueEn673(toUnit(unitInput(conducts)));
     expect(d.gaps[0]!.convective).toBe(false);
-    // [closed form] h_g = λ/s = 0.02496 / 0.012 = 2.08 W/m²K when Nu = 1.
-    expect(d.gaps[0]!.gasConductanceWPerM2K).toBeCloseTo(2.08, 12);
-    const t = uValueEn673(triple(16, 'argon', 0.03));
+    // Nu = 1 exactly; closed form h_g = λ/s = 0.02496 / 0.012 = 2.08 W/m²K when Nu = 1 (12 decimals).
+    expect(d.gaps[0]!.nusselt).toBe(expectedOf(conducts, 'gap.nusselt').value);
+    expect(d.gaps[0]!.gasConductanceWPerM2K).toBeCloseTo(expectedOf(conducts, 'gap.gasConductanceWPerM2K').value, 12);
+    const split = caseById('u-value/4-16ar-4-16ar-4-e0.03/split');
+    const t = uValueEn673(toUnit(unitInput(split)));
     for (const g of t.gaps) {
-      expect(g.temperatureDifferenceK).toBeCloseTo(7.5, 9);
-      expect(g.nusselt).toBe(1);
+      expect(g.temperatureDifferenceK).toBeCloseTo(expectedOf(split, 'gap.temperatureDifferenceK').value, 9);
+      expect(g.nusselt).toBe(expectedOf(split, 'gap.nusselt').value);
     }
   });
 });
 
 describe('single glazing', () => {
-  // [closed form] 1/U = 1/23 + 0.004/1.0 + 1/8 → U = 5.797827…; [pub mem] "≈ 5.8 for 4 mm".
+  // Closed form: 1/U = 1/23 + 0.004/1.0 + 1/8 → U = 5.797827…; common published value ≈ 5.8 for 4 mm.
   it('4 mm: U = 1 / (1/23 + 0.004 + 1/8)', () => {
     const r = uValueEn673({ panes: [{ thicknessM: 0.004 }], gaps: [] });
     expect(r.uValueWPerM2K).toBeCloseTo(1 / (1 / 23 + 0.004 + 1 / 8), 12);
@@ -157,49 +165,55 @@ describe('single glazing', () => {
   });
 });
 
-describe('intermediate values (handbook §8)', () => {
-  // [calc F8] 4/16 air/4 uncoated: h_r 3.699543, Gr 10424.05, Pr 0.711173, Gr·Pr 7413.30,
-  // Nu 1.03436, h_g 1.613605. Tolerances: half a printed unit.
-  it('4/16 air/4 uncoated', () => {
-    const g = uValueEn673(double(16, 'air')).gaps[0]!;
-    expect(Math.abs(g.radiativeConductanceWPerM2K - 3.699543)).toBeLessThan(5e-7);
-    expect(Math.abs(g.grashof - 10424.05)).toBeLessThan(0.005);
-    expect(Math.abs(g.prandtl - 0.711173)).toBeLessThan(5e-7);
-    expect(Math.abs(g.grashofPrandtl - 7413.3)).toBeLessThan(0.005);
-    expect(Math.abs(g.nusselt - 1.03436)).toBeLessThan(5e-6);
-    expect(Math.abs(g.gasConductanceWPerM2K - 1.613605)).toBeLessThan(5e-7);
+describe('intermediate values', () => {
+  // 4/16 air/4 uncoated: h_r, Gr, Pr, Gr·Pr, Nu, h_g. Tolerances: half a printed unit.
+  const air = caseById('u-value/4-16air-4/intermediate');
+  it(air.label, () => {
+    const gaps = uValueEn673(toUnit(unitInput(air))).gaps;
+    expectGapValues(air, gaps);
+    const g = gaps[0]!;
     expect(g.temperatureDifferenceK).toBe(15);
     expect(g.convective).toBe(true);
     // h_s = h_r + h_g (definition, EN 673 clause 5 from memory)
     expect(g.conductanceWPerM2K).toBeCloseTo(g.radiativeConductanceWPerM2K + g.gasConductanceWPerM2K, 12);
   });
 
-  // [calc F8] argon, 16 mm, ΔT 15 K: Gr 13128.23, Pr 0.666933, Nu 1.10189.
-  it('argon, 16 mm, ΔT 15 K', () => {
-    const g = uValueEn673(double(16, 'argon')).gaps[0]!;
-    expect(Math.abs(g.grashof - 13128.23)).toBeLessThan(0.005);
-    expect(Math.abs(g.prandtl - 0.666933)).toBeLessThan(5e-7);
-    expect(Math.abs(g.nusselt - 1.10189)).toBeLessThan(5e-6);
+  // argon, 16 mm, ΔT 15 K: Gr, Pr, Nu.
+  const argon = caseById('u-value/4-16ar-4/intermediate');
+  it(argon.label, () => {
+    expectGapValues(argon, uValueEn673(toUnit(unitInput(argon))).gaps);
   });
 
-  // [calc F8] one surface ε 0.03 (other 0.837): h_r 0.153318; ε 0.04: 0.204029.
+  // One surface ε 0.03 (other 0.837), ε 0.04, and two uncoated faces (6 decimals → 5e-7).
+  const radiative = uValueDomain.cases.filter((c) => c.input.kind === 'radiative-conductance');
   it('h_r with one low-e surface', () => {
-    expect(Math.abs(radiativeConductanceEn673(0.03, 0.837) - 0.153318)).toBeLessThan(5e-7);
-    expect(Math.abs(radiativeConductanceEn673(0.837, 0.04) - 0.204029)).toBeLessThan(5e-7);
-    expect(Math.abs(radiativeConductanceEn673(0.837, 0.837) - 3.699543)).toBeLessThan(5e-7);
+    expect(radiative).toHaveLength(3);
+    for (const c of radiative) {
+      if (c.input.kind !== 'radiative-conductance') throw new Error('unreachable');
+      const e = expectedOf(c, 'radiativeConductanceWPerM2K');
+      expect(Math.abs(radiativeConductanceEn673(c.input.emissivity1, c.input.emissivity2) - e.value), c.id).toBeLessThan(e.tolerance.abs);
+    }
   });
 
-  // [calc F8] h_i = 3.6 + 4.4 ε/0.837: 8.0 for 0.837, 4.65 for 0.2, 4.13 for 0.1 (2 decimals → 0.005).
+  // h_i = 3.6 + 4.4 ε/0.837: 8.0 for 0.837 (closed form, 12 decimals), 4.65 for 0.2, 4.13 for 0.1 (2 decimals → 0.005).
+  const internal = uValueDomain.cases.filter((c) => c.input.kind === 'internal-coefficient');
   it('h_i for room-side ε 0.837 / 0.2 / 0.1', () => {
-    expect(internalHeatTransferCoefficientEn673(0.837)).toBeCloseTo(8.0, 12);
-    expect(Math.abs(internalHeatTransferCoefficientEn673(0.2) - 4.65)).toBeLessThan(0.005);
-    expect(Math.abs(internalHeatTransferCoefficientEn673(0.1) - 4.13)).toBeLessThan(0.005);
+    expect(internal).toHaveLength(3);
+    const uncoated = expectedOf(caseById('u-value/internal/0.837'), 'internalCoefficientWPerM2K');
+    expect(internalHeatTransferCoefficientEn673(0.837)).toBeCloseTo(uncoated.value, 12);
+    for (const id of ['u-value/internal/0.2', 'u-value/internal/0.1']) {
+      const c = caseById(id);
+      if (c.input.kind !== 'internal-coefficient') throw new Error('unreachable');
+      const e = expectedOf(c, 'internalCoefficientWPerM2K');
+      expect(Math.abs(internalHeatTransferCoefficientEn673(c.input.roomSideEmissivity) - e.value), id).toBeLessThan(e.tolerance.abs);
+    }
   });
 
   it('h_i follows the innermost (room-side) surface only', () => {
+    const lowE = expectedOf(caseById('u-value/internal/0.2'), 'internalCoefficientWPerM2K');
     const coatedInside = uValueEn673({ panes: [pane(4), pane(4, 0.837, 0.2)], gaps: [{ widthM: 0.016, gas: 'air' }] });
     expect(coatedInside.roomSideEmissivity).toBe(0.2);
-    expect(Math.abs(coatedInside.internalCoefficientWPerM2K - 4.65)).toBeLessThan(0.005);
+    expect(Math.abs(coatedInside.internalCoefficientWPerM2K - lowE.value)).toBeLessThan(lowE.tolerance.abs);
     const coatedOutside = uValueEn673({ panes: [pane(4, 0.2, 0.837), pane(4)], gaps: [{ widthM: 0.016, gas: 'air' }] });
     expect(coatedOutside.internalCoefficientWPerM2K).toBeCloseTo(8.0, 12);
     // A coating on the outdoor face (face 1) takes part in neither h_r nor h_i under EN 673.
@@ -207,54 +221,70 @@ describe('intermediate values (handbook §8)', () => {
   });
 });
 
-describe('onset of convection (handbook §8)', () => {
-  // [calc F8] ΔT 15 K: Nu reaches 1 at Gr·Pr = 6782.66, s = 15.53 mm (air), 14.69 mm (argon),
-  // 9.68 mm (krypton). Printed to 0.01 mm → 0.005 mm.
-  const onsets = [
-    ['air', 15.53],
-    ['argon', 14.69],
-    ['krypton', 9.68],
-  ] as const;
-  for (const [gas, mm] of onsets) {
-    it(`${gas}: ${mm} mm`, () => {
+describe('onset of convection', () => {
+  // ΔT 15 K: Nu reaches 1 at Gr·Pr = 6782.66; widths printed to 0.01 mm → 0.005 mm.
+  const threshold = caseById('u-value/onset/threshold');
+  if (threshold.input.kind !== 'nusselt') throw new Error('threshold case must be a nusselt case');
+  const thresholdGrPr = threshold.input.grashofPrandtl;
+  const onsets = uValueDomain.cases.filter((c) => c.input.kind === 'convection-onset');
+  it('has an onset case for air, argon and krypton', () => {
+    expect(onsets.map((c) => (c.input.kind === 'convection-onset' ? c.input.gas : null))).toEqual(['air', 'argon', 'krypton']);
+  });
+  for (const c of onsets) {
+    if (c.input.kind !== 'convection-onset') continue;
+    const gas = c.input.gas;
+    const e = expectedOf(c, 'convectionOnsetWidthMm');
+    it(`${gas}: ${e.value} mm`, () => {
       const s = convectionOnsetWidthEn673(gas);
-      expect(Math.abs(s / MM - mm)).toBeLessThan(0.005);
+      expect(Math.abs(s / MM - e.value)).toBeLessThan(e.tolerance.abs);
       // The gap correlation itself flips at that width.
       const below = uValueEn673({ panes: [pane(4), pane(4)], gaps: [{ widthM: s * 0.999, gas }] }).gaps[0]!;
       const above = uValueEn673({ panes: [pane(4), pane(4)], gaps: [{ widthM: s * 1.001, gas }] }).gaps[0]!;
       expect(below.nusselt).toBe(1);
       expect(above.nusselt).toBeGreaterThan(1);
-      expect(Math.abs(below.grashofPrandtl - 6782.66) / 6782.66).toBeLessThan(0.004);
+      expect(Math.abs(below.grashofPrandtl - thresholdGrPr) / thresholdGrPr).toBeLessThan(0.004);
     });
   }
 
-  // [closed form] 0.035 (Gr·Pr)^0.38 = 1 ⇔ Gr·Pr = 0.035^(−1/0.38) = 6782.66 [calc F8].
-  it('threshold Gr·Pr = 6782.66 for vertical glazing', () => {
-    expect(nusseltNumberEn673(6782.66)).toBeCloseTo(1, 5);
+  // Closed form: 0.035 (Gr·Pr)^0.38 = 1 ⇔ Gr·Pr = 0.035^(−1/0.38) = 6782.66 (scripts/reference/u-value.ts).
+  it(`threshold Gr·Pr = ${thresholdGrPr} for vertical glazing`, () => {
+    expect(threshold.input).toMatchObject({ tiltDeg: 90 });
+    expect(nusseltNumberEn673(thresholdGrPr)).toBeCloseTo(expectedOf(threshold, 'nusselt').value, 5);
     expect(nusseltNumberEn673(6700)).toBe(1);
     expect(nusseltNumberEn673(7000)).toBeGreaterThan(1);
   });
 });
 
 describe('tilt (EN 673 convection constants, from memory)', () => {
-  // [mem] vertical A 0.035 n 0.38; 45° A 0.10 n 0.31; horizontal A 0.16 n 0.28.
+  // EN 673:2011 clause 5 (from memory): vertical A 0.035 n 0.38; 45° A 0.10 n 0.31; horizontal A 0.16 n 0.28.
+  const constants = uValueDomain.cases.filter((c) => c.input.kind === 'convection-constants');
   it('picks the nearest tabulated tilt, ties toward horizontal', () => {
-    expect(convectionConstantsEn673(90)).toEqual({ tabulatedTiltDeg: 90, a: 0.035, n: 0.38 });
+    expect(constants).toHaveLength(3);
+    for (const c of constants) {
+      if (c.input.kind !== 'convection-constants') continue;
+      expect(convectionConstantsEn673(c.input.tiltDeg), c.id).toEqual({
+        tabulatedTiltDeg: expectedOf(c, 'tabulatedTiltDeg').value,
+        a: expectedOf(c, 'a').value,
+        n: expectedOf(c, 'n').value,
+      });
+    }
     expect(convectionConstantsEn673(70)).toMatchObject({ tabulatedTiltDeg: 90 });
     expect(convectionConstantsEn673(67.5)).toMatchObject({ tabulatedTiltDeg: 45 });
-    expect(convectionConstantsEn673(45)).toEqual({ tabulatedTiltDeg: 45, a: 0.1, n: 0.31 });
     expect(convectionConstantsEn673(22.5)).toMatchObject({ tabulatedTiltDeg: 0 });
-    expect(convectionConstantsEn673(0)).toEqual({ tabulatedTiltDeg: 0, a: 0.16, n: 0.28 });
   });
 
-  // [closed form] with the [calc F8] Gr·Pr = 7413.30 of 4/16 air: Nu(45°) = 0.10·7413.30^0.31,
+  // Closed form with the Gr·Pr = 7413.30 of 4/16 air: Nu(45°) = 0.10·7413.30^0.31,
   // Nu(0°) = 0.16·7413.30^0.28 (Gr·Pr does not depend on tilt in EN 673). Tolerance: the
   // printed Gr·Pr carries ±0.005, i.e. a relative 7e-7 → ~3e-7 relative in Nu; we allow 1e-6.
   it('4/16 air at 45° and horizontal', () => {
-    const g45 = uValueEn673(double(16, 'air'), { tiltDeg: 45 });
-    const g0 = uValueEn673(double(16, 'air'), { tiltDeg: 0 });
-    expect(Math.abs(g45.gaps[0]!.nusselt - 0.1 * 7413.3 ** 0.31)).toBeLessThan(1e-6);
-    expect(Math.abs(g0.gaps[0]!.nusselt - 0.16 * 7413.3 ** 0.28)).toBeLessThan(1e-6);
+    const c45 = caseById('u-value/4-16air-4/tilt-45deg');
+    const c0 = caseById('u-value/4-16air-4/tilt-0deg');
+    const g45 = uValueEn673(toUnit(unitInput(c45)), toOptions(unitInput(c45)));
+    const g0 = uValueEn673(toUnit(unitInput(c0)), toOptions(unitInput(c0)));
+    expect(unitInput(c45).tiltDeg).toBe(45);
+    expect(unitInput(c0).tiltDeg).toBe(0);
+    expectGapValues(c45, g45.gaps);
+    expectGapValues(c0, g0.gaps);
     expect(g45.declaredConditions).toBe(false);
     // More horizontal glazing convects more: U rises (physical expectation).
     const u90 = uValueEn673(double(16, 'air')).uValueWPerM2K;
@@ -264,9 +294,9 @@ describe('tilt (EN 673 convection constants, from memory)', () => {
 });
 
 describe('multi-gap ΔT split', () => {
-  // Handbook §8: ΔT_k ∝ 1/h_s,k, Σ ΔT_k = 15 K. At convergence the same heat flux crosses every
-  // gap: ΔT_k · h_s,k equal [closed form of the series network]. An asymmetric unit exercises the
-  // iteration (the handbook's triples are symmetric).
+  // EN 673 (from memory): ΔT_k ∝ 1/h_s,k, Σ ΔT_k = 15 K. At convergence the same heat flux crosses every
+  // gap: ΔT_k · h_s,k equal (closed form of the series network). An asymmetric unit exercises the
+  // iteration (the triples of the case module are symmetric).
   it('converges to equal flux in an asymmetric triple (20 mm air / 10 mm argon)', () => {
     const unit: GlazingThermalInput = {
       panes: [pane(6, 0.837, 0.03), pane(4), pane(4, 0.1, 0.837)],
