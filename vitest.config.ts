@@ -3,7 +3,12 @@ import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
 
 export default defineConfig({
-  resolve: { alias: { "@": fileURLToPath(new URL("./src", import.meta.url)) } },
+  resolve: {
+    alias: {
+      "@": fileURLToPath(new URL("./src", import.meta.url)),
+      "@scripts": fileURLToPath(new URL("./scripts", import.meta.url)),
+    },
+  },
   test: {
     include: ["tests/unit/**/*.test.ts", "tests/server/**/*.test.ts", "tests/reference/**/*.test.ts"],
     environment: "node",
