@@ -3,9 +3,13 @@
 // case's own tolerance, so a value in a case module cannot drift from its formula.
 import { describe, expect, it } from "vitest";
 import { incidenceReport } from "@scripts/reference/incidence";
+import { irradianceReport } from "@scripts/reference/irradiance";
 import type { ReportRow } from "@scripts/reference/report";
 
-const reports: [string, () => ReportRow[]][] = [["incidence", incidenceReport]];
+const reports: [string, () => ReportRow[]][] = [
+  ["incidence", incidenceReport],
+  ["irradiance", irradianceReport],
+];
 
 describe.each(reports)("%s: the script reproduces every computed case", (_domain, report) => {
   const rows = report();
