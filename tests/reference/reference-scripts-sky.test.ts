@@ -4,11 +4,13 @@
 import { describe, expect, it } from "vitest";
 import { incidenceReport } from "@scripts/reference/incidence";
 import { irradianceReport } from "@scripts/reference/irradiance";
+import { shadingReport } from "@scripts/reference/shading";
 import type { ReportRow } from "@scripts/reference/report";
 
 const reports: [string, () => ReportRow[]][] = [
   ["incidence", incidenceReport],
   ["irradiance", irradianceReport],
+  ["shading", shadingReport],
 ];
 
 describe.each(reports)("%s: the script reproduces every computed case", (_domain, report) => {
