@@ -25,3 +25,8 @@ export function expectBelow(actual: number, e: ExpectedValue): void {
 
 /** The cases of a domain whose expected values come from a committed script. */
 export const computedCases = <I>(cases: readonly ReferenceCase<I>[]): ReferenceCase<I>[] => cases.filter((c) => c.source.kind === "computed");
+
+/** |actual − expected| ≤ tolerance exactly, for a bound stated as "half a unit" of a recorded value. */
+export function expectAtMost(actual: number, e: ExpectedValue): void {
+  expect(Math.abs(actual - e.value), `${e.quantity}: expected ${e.value}, got ${actual}`).toBeLessThanOrEqual(e.tolerance.abs);
+}
