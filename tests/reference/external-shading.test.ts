@@ -1,17 +1,17 @@
 // Reference tests for overhang/fin shading of a window (src/lib/physics/external-shading.ts).
 //
-// Beam checks: Paneray physics handbook §11 worked example and table [calc F11], computed with
-// python3 + numpy from the standard overhang/fin geometry [pub: ASHRAE Handbook—Fundamentals,
+// Beam checks: src/lib/reference-cases/shading.ts (worked example and table), computed by
+// scripts/reference/shading.ts from the standard overhang/fin geometry [ASHRAE Handbook—Fundamentals,
 // fenestration chapter, from memory]:
 //   γ = az_sun − az_façade, tan Ω = tan α / cos γ, h_s = clamp(P tan Ω − G, 0, H),
 //   w_s = clamp(F |tan γ| − E, 0, W), f = (W − w_s)(H − h_s)/(W H).
 // Finite devices: closed forms of elementary plane geometry (parallelogram minus triangle),
 // stated beside each check. Diffuse checks: Hottel's crossed-string rule for 2-D (infinitely long)
-// configurations [pub: H. C. Hottel & A. F. Sarofim, Radiative Transfer, 1967, from memory;
+// configurations [H. C. Hottel & A. F. Sarofim, Radiative Transfer, 1967, from memory;
 // also Incropera & DeWitt, Fundamentals of Heat and Mass Transfer, ch. 13] and the closed form for
-// perpendicular rectangles with a common edge [pub: Incropera & DeWitt, Table 13.2, from memory],
+// perpendicular rectangles with a common edge [Incropera & DeWitt, Table 13.2, from memory],
 // with view-factor algebra for offsets.
-// Tolerance for printed values: half a unit in the last printed digit (`printed`).
+// Tolerance for printed values: half a unit in the last printed digit, as stated in each case.
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
@@ -24,60 +24,74 @@ import {
   type ShadingSpec,
 } from "@/lib/physics/external-shading";
 import { surfaceOrientationDeg } from "@/lib/physics/surface-geometry";
-import { deg, printed } from "./fixtures";
+import { shading as shadingCases, type ShadingInput } from "@/lib/reference-cases/shading";
+import type { ReferenceCase } from "@/lib/reference-cases/types";
+import { expectBelow, expectedOf, expectPrinted } from "./case-check";
+import { deg } from "./fixtures";
 
 const RAD = 180 / Math.PI;
 const southVertical = surfaceOrientationDeg(180, 90);
-// Handbook §11 worked-example geometry: W = 1.5, H = 1.2, P = 0.6, G = 0.3, F = 0.4, E = 0.
-const W = 1.5;
-const H = 1.2;
-const example: ShadingSpec = {
-  windowWidthM: W,
-  windowHeightM: H,
-  surfaceTiltRad: deg(90),
-  overhang: { depthM: 0.6, gapAboveHeadM: 0.3 },
-  fins: { depthM: 0.4, gapFromJambM: 0 },
+const caseById = (id: string): ReferenceCase<ShadingInput> => {
+  const c = shadingCases.cases.find((x) => x.id === id);
+  if (!c) throw new Error(`no case ${id}`);
+  return c;
 };
+const specOfCase = (i: ShadingInput): ShadingSpec => ({
+  windowWidthM: i.windowWidthM,
+  windowHeightM: i.windowHeightM,
+  surfaceTiltRad: deg(i.surfaceTiltDeg),
+  overhang: { ...i.overhang },
+  fins: { ...i.fins },
+});
+// Worked-example geometry: W = 1.5, H = 1.2, P = 0.6, G = 0.3, F = 0.4, E = 0.
+const exampleInput = caseById("shading/example/angles").input;
+const W = exampleInput.windowWidthM;
+const H = exampleInput.windowHeightM;
+const example: ShadingSpec = specOfCase(exampleInput);
 
-describe("beam, infinite devices: handbook §11 worked example (south façade, sun alt 50°, az 210°)", () => {
-  const gamma = horizontalShadowAngleRad(deg(210), deg(180));
-  const omega = profileAngleRad(deg(50), gamma);
+describe("beam, infinite devices: worked example (south façade, sun alt 50°, az 210°)", () => {
+  const gamma = horizontalShadowAngleRad(deg(exampleInput.sunAzimuthDeg), deg(exampleInput.surfaceAzimuthDeg));
+  const omega = profileAngleRad(deg(exampleInput.sunAltitudeDeg), gamma);
+  const P = exampleInput.overhang.depthM;
 
-  it("γ = 30°, tan Ω = 1.376119, Ω = 53.9948°, P tan Ω = 0.825671 m", () => {
-    expect(Math.abs(gamma * RAD - 30)).toBeLessThan(1e-12);
-    printed(Math.tan(omega), "1.376119");
-    printed(omega * RAD, "53.9948");
-    printed(0.6 * Math.tan(omega), "0.825671");
+  const angles = caseById("shading/example/angles");
+  it(angles.label, () => {
+    expectBelow(gamma * RAD, expectedOf(angles, "horizontalShadowAngleDeg"));
+    expectPrinted(Math.tan(omega), expectedOf(angles, "tanProfileAngle"));
+    expectPrinted(omega * RAD, expectedOf(angles, "profileAngleDeg"));
+    expectPrinted(P * Math.tan(omega), expectedOf(angles, "shadowDropM"));
   });
 
-  it("h_s = 0.525671 m, w_s = 0.230940 m", () => {
-    printed(overhangShadedHeightM(0.6, 0.3, H, omega), "0.525671");
-    printed(finShadedWidthM(0.4, 0, W, gamma), "0.230940");
+  const band = caseById("shading/example/shaded-band-and-strip");
+  it(band.label, () => {
+    const i = band.input;
+    expectPrinted(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, omega), expectedOf(band, "overhangShadedHeightM"));
+    expectPrinted(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, gamma), expectedOf(band, "finShadedWidthM"));
   });
 
-  it("f_sunlit = 0.475424 (both), 0.561941 (overhang alone), 0.846040 (fins alone), on the hot path", () => {
-    printed(sunlitFractionAt(prepareShading(example), southVertical, deg(50), deg(210)), "0.475424");
+  const fractions = caseById("shading/example/sunlit-fractions");
+  it(`${fractions.label}, on the hot path`, () => {
+    const i = fractions.input;
+    const at = (spec: ShadingSpec) => sunlitFractionAt(prepareShading(spec), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg));
+    expectPrinted(at(example), expectedOf(fractions, "sunlitFraction"));
     const { fins: _f, ...overhangOnly } = example;
-    printed(sunlitFractionAt(prepareShading(overhangOnly), southVertical, deg(50), deg(210)), "0.561941");
+    expectPrinted(at(overhangOnly), expectedOf(fractions, "sunlitFractionOverhangOnly"));
     const { overhang: _o, ...finsOnly } = example;
-    printed(sunlitFractionAt(prepareShading(finsOnly), southVertical, deg(50), deg(210)), "0.846040");
+    expectPrinted(at(finsOnly), expectedOf(fractions, "sunlitFractionFinsOnly"));
   });
 
-  const rows: [number, number, string, string, string, string][] = [
-    [65, 180, "65.0000", "0.986704", "0", "0.177747"],
-    [20, 240, "36.0524", "0.136764", "0.692820", "0.476790"],
-    [50, 100, "81.7099", "1.2", "1.5", "0"],
-  ];
-  it.each(rows)("sun alt %i°, az %i°: Ω = %s°, h_s = %s, w_s = %s, f = %s", (alt, az, om, hs, ws, f) => {
-    const g = horizontalShadowAngleRad(deg(az), deg(180));
-    const o = profileAngleRad(deg(alt), g);
-    printed(o * RAD, om);
-    printed(overhangShadedHeightM(0.6, 0.3, H, o), hs);
-    printed(finShadedWidthM(0.4, 0, W, g), ws);
-    printed(sunlitFractionAt(prepareShading(example), southVertical, deg(alt), deg(az)), f);
+  const rows = shadingCases.cases.filter((c) => c.id.startsWith("shading/example-window/"));
+  it.each(rows)("$label", (c) => {
+    const i = c.input;
+    const g = horizontalShadowAngleRad(deg(i.sunAzimuthDeg), deg(i.surfaceAzimuthDeg));
+    const o = profileAngleRad(deg(i.sunAltitudeDeg), g);
+    expectPrinted(o * RAD, expectedOf(c, "profileAngleDeg"));
+    expectPrinted(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, o), expectedOf(c, "overhangShadedHeightM"));
+    expectPrinted(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, g), expectedOf(c, "finShadedWidthM"));
+    expectPrinted(sunlitFractionAt(prepareShading(specOfCase(i)), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg)), expectedOf(c, "sunlitFraction"));
   });
 
-  it("the hot path equals the rectangle product of the §11 formulas (property, random geometry and sun)", () => {
+  it("the hot path equals the rectangle product of the overhang/fin formulas (property, random geometry and sun)", () => {
     fc.assert(
       fc.property(
         fc.record({
@@ -124,7 +138,8 @@ describe("beam, limits and properties", () => {
     expect(prepareShading(tilted).sunlitFraction(1, 0, 0)).toBe(1);
     expect(prepareShading({ ...tilted, overhang: example.overhang, fins: example.fins }).sunlitFraction(1, 0, 0)).toBe(1);
     expect(sunlitFractionAt(prepareShading(tilted), surfaceOrientationDeg(180, 60), deg(30), deg(180))).toBe(1);
-    // On a vertical façade the sun along the normal is ON the horizon (altitude 0): no beam (§10).
+    // On a vertical façade the sun along the normal is ON the horizon (altitude 0): no beam (the beam
+    // needs the sun above the horizon).
     expect(prepareShading({ ...tilted, surfaceTiltRad: deg(90) }).sunlitFraction(1, 0, 0)).toBe(0);
   });
 

@@ -1,6 +1,6 @@
 // Reference tests for the solar position (src/lib/physics/sun-position.ts, suncalc v2 wrapped).
 //
-// Outside references:
+// Check values: src/lib/reference-cases/sun-position.ts, each case naming its source:
 // - the NREL SPA worked example (Reda & Andreas, NREL/TP-560-34302, 2004, rev. 2008);
 // - astronomy-engine 2.1.19 (npm; a full-precision astronomy library): topocentric apparent
 //   equatorial coordinates of date, `Equator(Body.Sun, date, observer, true, true)`, turned
@@ -12,48 +12,48 @@ import { Body, Equator, Horizon, Observer, SearchHourAngle } from "astronomy-eng
 import { getPosition } from "suncalc";
 import { describe, expect, it } from "vitest";
 import { sunPositionSuncalc, sunTrack } from "@/lib/physics/sun-position";
+import { sunPosition, type SunInstantInput, type SunPositionInput, type SunTransitInput, type SunYearInput } from "@/lib/reference-cases/sun-position";
+import type { ReferenceCase } from "@/lib/reference-cases/types";
+import { expectAtMost, expectBelow, expectedOf } from "./case-check";
 
 const RAD = 180 / Math.PI;
 
-/**
- * Source: I. Reda & A. Andreas, "Solar Position Algorithm for Solar Radiation Applications",
- * NREL/TP-560-34302 (2004, rev. 2008), worked example (table number not checked): 2003-10-17
- * 12:30:30 local time at UTC−7 (= 19:30:30 UTC), 39.742476° N, 105.1786° W, 1830.14 m,
- * 820 mbar, 11 °C, ΔT = 67 s → topocentric zenith 50.111622° (with refraction),
- * azimuth (eastward from north) 194.340241°.
- */
-const reda2004Example = {
-  epochMs: Date.UTC(2003, 9, 17, 19, 30, 30),
-  latitudeDeg: 39.742476,
-  longitudeDeg: -105.1786,
-  zenithDeg: 50.111622,
-  azimuthDeg: 194.340241,
-} as const;
+function group<I extends SunPositionInput>(prefix: string): ReferenceCase<I>[] {
+  const found = sunPosition.cases.filter((c) => c.id.startsWith(prefix)) as ReferenceCase<I>[];
+  if (found.length === 0) throw new Error(`no cases ${prefix}`);
+  return found;
+}
 
 describe("NREL SPA worked example (Reda & Andreas 2004)", () => {
-  // Tolerance 0.02°: suncalc is a low-precision model (its README: ~0.08° typical error). It
-  // takes no pressure/temperature, while SPA refracts for 820 mbar / 11 °C: at 40° altitude the
-  // standard-atmosphere refraction is ≈0.0197° against SPA's Δe = 0.016332°, so ≈0.004° of the
-  // zenith difference is expected from refraction alone. 0.02° allows 4–5× that and stays 4×
-  // tighter than the library's stated accuracy: a wrong convention, unit or time would fail it.
-  const ex = reda2004Example;
+  // Tolerance 0.02° (stated in the case): suncalc is a low-precision model (its README: ~0.08°
+  // typical error). It takes no pressure/temperature, while SPA refracts for 820 mbar / 11 °C: at
+  // 40° altitude the standard-atmosphere refraction is ≈0.0197° against SPA's Δe = 0.016332°, so
+  // ≈0.004° of the zenith difference is expected from refraction alone. 0.02° allows 4–5× that and
+  // stays 4× tighter than the library's stated accuracy: a wrong convention, unit or time would fail it.
+  const [spa] = group<SunInstantInput>("sun-position/spa-example");
+  const [recorded] = group<SunInstantInput>("sun-position/suncalc-2.0.2/");
+  const ex = { epochMs: Date.parse(spa!.input.instantUtc), latitudeDeg: spa!.input.latitudeDeg, longitudeDeg: spa!.input.longitudeDeg };
+  const zenith = expectedOf(spa!, "zenithDeg");
+  const azimuth = expectedOf(spa!, "azimuthDeg");
 
   it("zenith and azimuth within 0.02°", () => {
+    expect(ex.epochMs).toBe(Date.UTC(2003, 9, 17, 19, 30, 30));
     const p = sunPositionSuncalc(ex.epochMs, ex.latitudeDeg, ex.longitudeDeg);
-    expect(Math.abs(90 - p.altitudeDeg - ex.zenithDeg)).toBeLessThan(0.02);
-    expect(Math.abs(p.azimuthDeg - ex.azimuthDeg)).toBeLessThan(0.02);
+    expectBelow(90 - p.altitudeDeg, zenith);
+    expectBelow(p.azimuthDeg, azimuth);
   });
 
   it("wrapper returns exactly what suncalc v2 returns at that instant", () => {
     // Outside reference: the library itself, called directly. Regression values recorded with
-    // suncalc 2.0.2 when this test was written (our own regression value): zenith 50.10748°,
-    // azimuth 194.33906°, printed to 5 decimals → half a unit (5e-6°) allowed.
+    // suncalc 2.0.2 when this test was written: zenith 50.10748°, azimuth 194.33906°, printed to
+    // 5 decimals → half a unit (5e-6°) allowed.
     const direct = getPosition(new Date(ex.epochMs), ex.latitudeDeg, ex.longitudeDeg);
     const p = sunPositionSuncalc(ex.epochMs, ex.latitudeDeg, ex.longitudeDeg);
     expect(p.altitudeDeg).toBe(direct.altitude);
     expect(p.azimuthDeg).toBe(direct.azimuth);
-    expect(Math.abs(90 - p.altitudeDeg - 50.10748)).toBeLessThanOrEqual(5e-6);
-    expect(Math.abs(p.azimuthDeg - 194.33906)).toBeLessThanOrEqual(5e-6);
+    expect(Date.parse(recorded!.input.instantUtc)).toBe(ex.epochMs);
+    expectAtMost(90 - p.altitudeDeg, expectedOf(recorded!, "zenithDeg"));
+    expectAtMost(p.azimuthDeg, expectedOf(recorded!, "azimuthDeg"));
   });
 
   it("sunTrack agrees with sunPositionSuncalc, in radians, with a unit ENU vector", () => {
@@ -63,17 +63,17 @@ describe("NREL SPA worked example (Reda & Andreas 2004)", () => {
     // float64 degree↔radian round trip: 1e-12 is ~1e4 ulps of margin
     expect(Math.abs(t.altitudeRad[0]! * RAD - p.altitudeDeg)).toBeLessThan(1e-12);
     expect(Math.abs(t.azimuthRad[0]! * RAD - p.azimuthDeg)).toBeLessThan(1e-11);
-    expect(Math.abs(t.zenithRad[0]! * RAD - ex.zenithDeg)).toBeLessThan(0.02); // same reason as above
+    expectBelow(t.zenithRad[0]! * RAD, zenith); // same reason as above
     // closed form: zenith = π/2 − altitude (both apparent), to float64 rounding
     expect(Math.abs(t.zenithRad[0]! + t.altitudeRad[0]! - Math.PI / 2)).toBeLessThan(1e-15);
     // closed form: (cos h sin A, cos h cos A, sin h) has unit length
     const n2 = t.east[0]! ** 2 + t.north[0]! ** 2 + t.up[0]! ** 2;
     expect(Math.abs(n2 - 1)).toBeLessThan(1e-15);
     // SPA azimuth 194.34° (S by W): sun west of south → east < 0, north < 0; 14.34° west of
-    // south → east/north = tan(14.34°) (closed form), checked to 1e-3 (≈0.05° in azimuth)
+    // south → east/north = tan(14.340241°) (closed form), checked to 1e-3 (≈0.05° in azimuth)
     expect(t.east[0]!).toBeLessThan(0);
     expect(t.north[0]!).toBeLessThan(0);
-    expect(Math.abs(t.east[0]! / t.north[0]! - Math.tan(14.340241 / RAD))).toBeLessThan(1e-3);
+    expect(Math.abs(t.east[0]! / t.north[0]! - Math.tan((azimuth.value - 180) / RAD))).toBeLessThan(1e-3);
   });
 });
 
@@ -116,16 +116,12 @@ describe("a year of hours against astronomy-engine 2.1.19", () => {
   // (raw |ΔA| maxima for comparison: 0.037°, 0.028°, 0.069°, 0.015°.)
   // A maximum below 1e-4° would mean the two sides are not independent models (e.g. the test
   // comparing suncalc with itself), so that is asserted as well.
-  const sites = [
-    { name: "Lisbon (38.7° N, daylight saving)", lat: 38.7, lon: -9.14 },
-    { name: "Sydney (33.87° S, southern hemisphere)", lat: -33.87, lon: 151.21 },
-    { name: "Singapore (1.35° N, tropical, sun near the zenith)", lat: 1.35, lon: 103.8 },
-    { name: "Reykjavik (64.1° N, low sun)", lat: 64.1, lon: -21.9 },
-  ];
-  const hours = new Float64Array(8760);
-  for (let i = 0; i < hours.length; i++) hours[i] = Date.UTC(2026, 0, 1, 0, 30) + i * 3_600_000;
-
-  it.each(sites)("$name: altitude, azimuth and direction within 0.05° above 10°", ({ lat, lon }) => {
+  const sites = group<SunYearInput>("sun-position/year-2026/");
+  it.each(sites)("$label", (c) => {
+    // Instants: the midpoints of the 8760 UTC hours of the case's year.
+    const { latitudeDeg: lat, longitudeDeg: lon, year, minReferenceAltitudeDeg } = c.input;
+    const hours = new Float64Array(8760);
+    for (let i = 0; i < hours.length; i++) hours[i] = Date.UTC(year, 0, 1, 0, 30) + i * 3_600_000;
     const track = sunTrack(hours, lat, lon);
     const observer = new Observer(lat, lon, 0);
     let compared = 0;
@@ -136,7 +132,7 @@ describe("a year of hours against astronomy-engine 2.1.19", () => {
       const date = new Date(hours[i]!);
       const eq = Equator(Body.Sun, date, observer, true, true);
       const ref = Horizon(date, observer, eq.ra, eq.dec, "normal");
-      if (ref.altitude <= 10) continue;
+      if (ref.altitude <= minReferenceAltitudeDeg) continue;
       compared++;
       const altDeg = track.altitudeRad[i]! * RAD;
       const azDeg = track.azimuthRad[i]! * RAD;
@@ -147,9 +143,9 @@ describe("a year of hours against astronomy-engine 2.1.19", () => {
     }
     // at least ~7 h a day above 10° on average even at 64° N (measured: 2932 to 3754 hours)
     expect(compared).toBeGreaterThan(2500);
-    expect(maxAlt).toBeLessThan(0.05);
-    expect(maxAzCos).toBeLessThan(0.05);
-    expect(maxSep).toBeLessThan(0.05);
+    expectBelow(maxAlt, expectedOf(c, "maxAltitudeDifferenceDeg"));
+    expectBelow(maxAzCos, expectedOf(c, "maxAzimuthArcDeg"));
+    expectBelow(maxSep, expectedOf(c, "maxSeparationDeg"));
     expect(maxSep).toBeGreaterThan(1e-4);
   });
 });
@@ -163,18 +159,16 @@ describe("conventions", () => {
   // declination and 0° (due north) when south of it [closed form: hour angle 0]. Tolerance
   // 0.2°: near transit dA/dH ≈ cos δ / sin(φ − δ) (≈3.5 at Lisbon in June), so suncalc's
   // ~0.01° hour-angle error can move A by ~0.04°; 0.2° still tells south from anything else.
-  const noonCases = [
-    { name: "Lisbon, June solstice", lat: 38.7, lon: -9.14, day: Date.UTC(2026, 5, 21), azDeg: 180 },
-    { name: "Lisbon, December solstice", lat: 38.7, lon: -9.14, day: Date.UTC(2026, 11, 21), azDeg: 180 },
-    { name: "Sydney, June solstice", lat: -33.87, lon: 151.21, day: Date.UTC(2026, 5, 20, 12), azDeg: 0 },
-    { name: "Sydney, December solstice", lat: -33.87, lon: 151.21, day: Date.UTC(2026, 11, 20, 12), azDeg: 0 },
-  ];
-  it.each(noonCases)("$name: azimuth at solar noon is $azDeg°", ({ lat, lon, day, azDeg }) => {
+  const noonCases = group<SunTransitInput>("sun-position/solar-noon/");
+  it.each(noonCases)("$label", (c) => {
+    const { latitudeDeg: lat, longitudeDeg: lon } = c.input;
+    const day = Date.parse(c.input.searchFromUtc);
+    const az = expectedOf(c, "azimuthDeg");
     const noon = transitMs(lat, lon, day);
     expect(noon - day).toBeLessThan(86_400_000); // the transit found is on the intended day
     const p = sunPositionSuncalc(noon, lat, lon);
-    const diff = Math.abs(((p.azimuthDeg - azDeg + 540) % 360) - 180);
-    expect(diff).toBeLessThan(0.2);
+    const diff = Math.abs(((p.azimuthDeg - az.value + 540) % 360) - 180);
+    expect(diff).toBeLessThan(az.tolerance.abs);
     expect(p.altitudeDeg).toBeGreaterThan(0);
   });
 

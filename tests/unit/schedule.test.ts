@@ -1,7 +1,10 @@
-// The hourly schedule engine. Check values: [calc F10/F11/F12] of the glazing-physics handbook — computed
-// from the published formulas (Duffie & Beckman ch. 1 incidence; overhang/fin geometry; Ineichen & Perez 2002,
-// Spencer 1971, Kasten & Young 1989, Liu & Jordan 1960, Hay & Davies 1980, Perez et al. 1990 transposition);
-// [calc F4/F5] for the glazing. Internal consistency checks are labelled as such.
+// The hourly schedule engine. Check values: the reference cases of src/lib/reference-cases/irradiance.ts
+// ("transposition/example/…") and src/lib/reference-cases/shading.ts ("shading/example/…"), computed from the
+// published formulas (Duffie & Beckman ch. 1 incidence; overhang/fin geometry, ASHRAE Handbook—Fundamentals,
+// fenestration chapter; Ineichen & Perez 2002, Spencer 1971, Kasten & Young 1989, Liu & Jordan 1960,
+// Hay & Davies 1980, Perez et al. 1990 transposition) by scripts/reference/irradiance.ts and
+// scripts/reference/shading.ts; the glazing's hemispherical value is the check value of
+// tests/reference/hemispherical.test.ts. Internal consistency checks are labelled as such.
 import { describe, expect, it } from "vitest";
 import { ScheduleRequest, type ScheduleRequestInput } from "@/lib/contracts/schedule";
 import { GlazingRequest } from "@/lib/contracts/glazing";
@@ -21,10 +24,10 @@ const RAD = Math.PI / 180;
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;
 const double6 = [pane6, { kind: "gap", widthMm: 16, gas: "air" }, pane6] as const;
 
-/** A one-row site with the sun and sky of the handbook's transposition worked example. */
+/** A one-row site with the sun and sky of the transposition worked example (irradiance reference cases). */
 function exampleSite(model: "isotropic" | "hay-davies" | "perez", zenithDeg = 40, azimuthDeg = 160): SiteSeries {
-  // [calc F12c] doy 172 → E0 = 1321.62 (Spencer, 1366.1); z = 40°, TL = 3, sea level:
-  // GHI 755.302, DNI 864.288, DHI 93.2191 (AM = 1.304224)
+  // case "transposition/example/clear-sky" (scripts/reference/irradiance.ts): doy 172 → E0 = 1321.62
+  // (Spencer, 1366.1); z = 40°, TL = 3, sea level: GHI 755.302, DNI 864.288, DHI 93.2191 (AM = 1.304224)
   const ghi = 755.302, dni = 864.288, dhi = 93.2191, e0 = 1321.62, am = 1.304224;
   const z = zenithDeg * RAD, a = azimuthDeg * RAD, alt = Math.PI / 2 - z;
   const hour = { dhiWPerM2: dhi, dniWPerM2: dni, extraterrestrialWPerM2: e0, zenithRad: z };
@@ -61,7 +64,7 @@ function exampleSite(model: "isotropic" | "hay-davies" | "perez", zenithDeg = 40
 
 const glazing = prepareGlazingTables(GlazingRequest.parse({ layers: double6 }));
 
-describe("irradiance on a vertical south façade [calc F12 worked example]", () => {
+describe("irradiance on a vertical south façade (transposition worked example)", () => {
   it.each([
     ["isotropic", 644.189],
     ["hay-davies", 661.776],
@@ -70,10 +73,11 @@ describe("irradiance on a vertical south façade [calc F12 worked example]", () 
     const site = exampleSite(model);
     const out = allocateColumns(1);
     computeSurfaceSeries(site, prepareSurface({ azimuthDeg: 180, tiltDeg: 90 }, 0.2), glazing, out);
-    // θ = 52.8415° (cos θ = 0.604023) [calc F10]; beam term 522.049, ground term 75.5302 [calc F12e]
+    // θ = 52.8415° (cos θ = 0.604023), case "transposition/example/incidence"; beam term 522.049, ground term
+    // 75.5302, case "transposition/example/isotropic"; totals, cases "transposition/example/total-…"
     expect(Math.acos(out.cosIncidence[0]!) / RAD).toBeCloseTo(52.8415, 3);
     expect(out.beamIncidentWm2[0]!).toBeCloseTo(522.049, 1);
-    // tolerance 0.02 W/m²: the handbook prints the inputs (GHI, DNI, DHI) to 6 significant digits
+    // tolerance 0.02 W/m²: the cases print the inputs (GHI, DNI, DHI) to 6 significant digits
     expect(Math.abs(out.beamIncidentWm2[0]! + out.diffuseIncidentWm2[0]! - total)).toBeLessThan(0.02);
   });
 
@@ -85,7 +89,7 @@ describe("irradiance on a vertical south façade [calc F12 worked example]", () 
     const direct = calculateGlazing(GlazingRequest.parse({ layers: double6, anglesDeg: [theta] })).angles[0]!;
     // table interpolation error ≤ 1e-5 (angular-table tests)
     expect(Math.abs(out.beamTransmittance[0]! - direct.solarTransmittance)).toBeLessThan(1e-5);
-    expect(glazing.tauHem).toBeCloseTo(0.577379, 6); // [calc F5] double 6|16|6 hemispherical T
+    expect(glazing.tauHem).toBeCloseTo(0.577379, 6); // double 6|16|6 hemispherical T, check value of tests/reference/hemispherical.test.ts
     const expected = out.beamIncidentWm2[0]! * direct.solarTransmittance + out.diffuseIncidentWm2[0]! * 0.577379;
     expect(Math.abs(out.transmittedWm2[0]! - expected)).toBeLessThan(0.01);
     const expectedGain = out.beamIncidentWm2[0]! * direct.gValue + out.diffuseIncidentWm2[0]! * glazing.gHem;
@@ -93,7 +97,7 @@ describe("irradiance on a vertical south façade [calc F12 worked example]", () 
   });
 });
 
-describe("external shading in the schedule [calc F11 worked example]", () => {
+describe("external shading in the schedule (overhang/fin worked example, case \"shading/example/sunlit-fractions\")", () => {
   // W 1.5, H 1.2, overhang P 0.6 with G 0.3, fins F 0.4 flush; south façade; sun alt 50°, az 210° → f_sunlit 0.475424
   const shading = { window: { widthM: 1.5, heightM: 1.2 }, overhang: { depthM: 0.6, gapAboveM: 0.3 }, fins: { depthM: 0.4, gapM: 0 } };
   it("sunlit fraction 0.475424 and the beam reduced by it", () => {
