@@ -38,7 +38,7 @@ export default function MembersManager({ organizationId, currentUserId, initialM
   const [invitations, setInvitations] = useState(initialInvitations);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
   const base = `/api/v1/orgs/${organizationId}`;
-  const { register, handleSubmit, formState, reset, setError } = useForm<{ email: string; role: string }>({
+  const { register, handleSubmit, formState, reset, setError } = useForm<InvitationRequest>({
     resolver: zodResolver(InvitationRequest),
     defaultValues: { email: "", role: "consultant" },
   });

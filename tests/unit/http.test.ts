@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { endpoint, HttpError, readJson } from "@/lib/server/http";
+import { withProblems, HttpError, readJson } from "@/lib/server/http";
 
 const Schema = z.object({ a: z.number(), b: z.object({ c: z.string() }) });
 const req = (body: BodyInit | null, headers: Record<string, string> = { "content-type": "application/json" }) =>
@@ -53,7 +53,7 @@ describe("readJson", () => {
 describe("endpoint wrapper", () => {
   const ctx = { request: new Request("http://127.0.0.1/x"), url: new URL("http://127.0.0.1/x") } as never;
   it("turns HttpError into problem+json", async () => {
-    const res = await endpoint(() => {
+    const res = await withProblems(() => {
       throw new HttpError(403, "no");
     })(ctx);
     expect(res.status).toBe(403);
@@ -63,7 +63,7 @@ describe("endpoint wrapper", () => {
   it("hides unexpected errors behind a 500 without details", async () => {
     const err = console.error;
     console.error = () => {};
-    const res = await endpoint(() => {
+    const res = await withProblems(() => {
       throw new Error("secret internals");
     })(ctx);
     console.error = err;

@@ -19,9 +19,12 @@ export type SignUpRequest = z.infer<typeof SignUpRequest>;
 
 export const SignInRequest = z.object({ email, password: z.string().min(1, "password is required").max(128) });
 
-export const role = z.enum(ASSIGNABLE_ROLES as [string, ...string[]], {
+/** A role an owner may give; the parsed value is a `RoleName`. */
+export const role = z.enum(ASSIGNABLE_ROLES, {
   error: `role must be one of ${ASSIGNABLE_ROLES.join(", ")}`,
 });
 
 export const InvitationRequest = z.object({ email, role });
+export type InvitationRequest = z.infer<typeof InvitationRequest>;
 export const MemberRoleRequest = z.object({ role });
+export type MemberRoleRequest = z.infer<typeof MemberRoleRequest>;
