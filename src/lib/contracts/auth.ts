@@ -28,3 +28,23 @@ export const InvitationRequest = z.object({ email, role });
 export type InvitationRequest = z.infer<typeof InvitationRequest>;
 export const MemberRoleRequest = z.object({ role });
 export type MemberRoleRequest = z.infer<typeof MemberRoleRequest>;
+
+/** A member as the members endpoints send it (dates as ISO-8601 strings). */
+export interface MemberEntry {
+  memberId: string;
+  userId: string;
+  name: string;
+  email: string;
+  role: string;
+  joinedAt: string;
+}
+
+/** A pending invitation as the members and invitations endpoints send it. */
+export interface InvitationEntry {
+  id: string;
+  email: string;
+  role: string | null;
+  status: string;
+  expiresAt: string;
+  inviterName: string | null;
+}

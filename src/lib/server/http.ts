@@ -5,7 +5,7 @@
  */
 import type { APIContext, APIRoute } from "astro";
 import { z, type ZodType } from "zod";
-import type { FieldError } from "@/lib/contracts/problem";
+import type { FieldError, Problem } from "@/lib/contracts/problem";
 import { permissionFor, PERMISSION_PHRASES, type PermissionKey } from "@/lib/auth/roles";
 import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import type { Membership, ProjectRow } from "@/lib/server/services/access";
@@ -31,7 +31,8 @@ const TITLES: Record<number, string> = {
 };
 
 export function problem(status: number, detail: string, extra: { errors?: FieldError[]; [k: string]: unknown } = {}): Response {
-  return new Response(JSON.stringify({ type: "about:blank", title: TITLES[status] ?? "Error", status, detail, ...extra }), {
+  const body: Problem = { type: "about:blank", title: TITLES[status] ?? "Error", status, detail, ...extra };
+  return new Response(JSON.stringify(body), {
     status,
     headers: { "content-type": "application/problem+json; charset=utf-8", "cache-control": "no-store" },
   });

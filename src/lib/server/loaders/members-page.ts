@@ -1,8 +1,9 @@
 /** View model of an organisation's members page (owners only). */
 import { roleCan } from "@/lib/auth/roles";
+import type { InvitationEntry, MemberEntry } from "@/lib/contracts/auth";
 import { ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { membershipsOf } from "@/lib/server/services/access";
-import { membersOf, pendingInvitationsOf, type InvitationView, type MemberView } from "@/lib/server/services/members";
+import { membersOf, pendingInvitationsOf } from "@/lib/server/services/members";
 
 /** Dates as ISO strings, as the island receives them. */
 type Serialised<T> = { [K in keyof T]: T[K] extends Date ? string : T[K] };
@@ -12,8 +13,8 @@ const serialise = <T extends object>(row: T): Serialised<T> =>
 export interface MembersPage {
   organizationId: string;
   organizationName: string;
-  members: Serialised<MemberView>[];
-  invitations: Serialised<InvitationView>[];
+  members: MemberEntry[];
+  invitations: InvitationEntry[];
 }
 
 /** NotFoundError when the user is not a member of the organisation; ForbiddenError unless an owner. */

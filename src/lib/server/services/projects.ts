@@ -3,7 +3,7 @@ import { db } from "@/lib/server/db/client";
 import { facade, member, project, projectShare, user } from "@/lib/server/db/schema";
 import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { ROLE_NAMES, roleCan } from "@/lib/auth/roles";
-import type { ProjectCreateRequest, ProjectUpdateRequest } from "@/lib/contracts/projects";
+import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
 import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
 
 export type FacadeRow = typeof facade.$inferSelect;
@@ -88,13 +88,7 @@ export async function deleteProject(projectId: string): Promise<void> {
   await db.delete(project).where(eq(project.id, projectId));
 }
 
-export interface ShareRow {
-  memberId: string;
-  name: string;
-  email: string;
-  role: string;
-  shared: boolean;
-}
+export type ShareRow = ShareEntry;
 
 /** Members of the project's organisation who see projects only when shared, and whether they see this one. */
 export async function sharesOf(p: ProjectRow): Promise<ShareRow[]> {
