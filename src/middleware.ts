@@ -1,6 +1,6 @@
 import { defineMiddleware } from "astro:middleware";
-import { auth } from "./lib/server/auth";
-import { problem } from "./lib/server/http";
+import { auth } from "@/lib/server/auth";
+import { problem } from "@/lib/server/http";
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];

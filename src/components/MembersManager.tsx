@@ -1,27 +1,14 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { InvitationRequest } from "@/lib/contracts/auth";
+import { InvitationRequest, type InvitationEntry, type MemberEntry } from "@/lib/contracts/auth";
 import { ASSIGNABLE_ROLES, ROLE_LABELS, isRoleName } from "@/lib/auth/roles";
 import { api, ApiError } from "@/lib/client/api";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
 import { useHydrated } from "./forms/useHydrated";
 
-interface Member {
-  memberId: string;
-  userId: string;
-  name: string;
-  email: string;
-  role: string;
-  joinedAt: string;
-}
-interface Invitation {
-  id: string;
-  email: string;
-  role: string | null;
-  expiresAt: string;
-  inviterName: string | null;
-}
+type Member = MemberEntry;
+type Invitation = InvitationEntry;
 interface Props {
   organizationId: string;
   currentUserId: string;
@@ -38,7 +25,7 @@ export default function MembersManager({ organizationId, currentUserId, initialM
   const [invitations, setInvitations] = useState(initialInvitations);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
   const base = `/api/v1/orgs/${organizationId}`;
-  const { register, handleSubmit, formState, reset, setError } = useForm<{ email: string; role: string }>({
+  const { register, handleSubmit, formState, reset, setError } = useForm<InvitationRequest>({
     resolver: zodResolver(InvitationRequest),
     defaultValues: { email: "", role: "consultant" },
   });

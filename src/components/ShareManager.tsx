@@ -1,14 +1,9 @@
 import { useState } from "react";
+import type { ShareEntry } from "@/lib/contracts/projects";
 import { api, ApiError } from "@/lib/client/api";
 import { FormMessage } from "./forms/Field";
 
-interface Share {
-  memberId: string;
-  name: string;
-  email: string;
-  role: string;
-  shared: boolean;
-}
+type Share = ShareEntry;
 
 /** Ticks which clients (members who see only shared projects) see this project. */
 export default function ShareManager({ projectId, initial }: { projectId: string; initial: Share[] }) {

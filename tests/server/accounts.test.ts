@@ -6,12 +6,12 @@ import { invitation, member } from "@/lib/server/db/schema";
 import { signUp, slugify } from "@/lib/server/services/accounts";
 import { membershipsOf } from "@/lib/server/services/access";
 import { acceptInvitation, changeRole, inviteMember, removeMember, membersOf, invitationSummary } from "@/lib/server/services/members";
-import { HttpError } from "@/lib/server/http";
+import { problemFor } from "@/lib/server/http";
 import { newOwner, uniqueEmail, cookieHeaders } from "./helpers";
 
 afterAll(() => pool.end());
 
-const status = async (p: Promise<unknown>) => p.then(() => "ok" as const, (e) => (e instanceof HttpError ? e.status : String(e)));
+const status = async (p: Promise<unknown>) => p.then(() => "ok" as const, (e) => problemFor(e)?.status ?? String(e));
 
 describe("sign-up", () => {
   it("creates the user, an organisation and an owner membership, and returns a session cookie", async () => {

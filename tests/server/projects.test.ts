@@ -8,11 +8,11 @@ import { requireProject } from "@/lib/server/services/access";
 import { createProject, facadesOf, projectsForUser, shareProject, unshareProject, updateProject } from "@/lib/server/services/projects";
 import { inviteMember } from "@/lib/server/services/members";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
-import { HttpError } from "@/lib/server/http";
+import { problemFor } from "@/lib/server/http";
 import { newOwner, uniqueEmail } from "./helpers";
 
 afterAll(() => pool.end());
-const status = async (p: Promise<unknown>) => p.then(() => "ok" as const, (e) => (e instanceof HttpError ? e.status : String(e)));
+const status = async (p: Promise<unknown>) => p.then(() => "ok" as const, (e) => problemFor(e)?.status ?? String(e));
 
 async function orgWithClient() {
   const o = await newOwner();

@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import type { FieldError as RhfFieldError } from "react-hook-form";
+import type { FieldError } from "@/lib/contracts/problem";
 
 /** A labelled form control with its validation message. */
 export function Field(props: { label: string; htmlFor: string; error?: RhfFieldError | { message?: string }; hint?: string; children: ReactNode }) {
@@ -31,7 +32,7 @@ export function FormMessage({ kind, children }: { kind: "error" | "ok"; children
 
 /** Copies server field errors (problem+json `errors`) onto the form's fields where names match. */
 export function applyServerErrors(
-  errors: { field: string; message: string }[],
+  errors: readonly FieldError[],
   fields: readonly string[],
   setError: (name: never, error: { type: string; message: string }) => void,
 ): boolean {

@@ -1,5 +1,5 @@
 import { useMemo, useState } from "react";
-import type { ScheduleRow, PeriodTotals } from "@/lib/contracts/schedule";
+import type { ScheduleResponse, ScheduleSurfaceResult } from "@/lib/contracts/schedule";
 import { PRESETS } from "@/lib/glazing-presets";
 import { api, ApiError } from "@/lib/client/api";
 import { compassPoint } from "@/lib/format";
@@ -19,16 +19,6 @@ interface Site {
   longitudeDeg: number;
   timeZone: string;
   elevationM: number;
-}
-interface SurfaceResult {
-  name: string;
-  rows: ScheduleRow[];
-  diffuseTransmittance: number;
-  totals: { daily: (PeriodTotals & { date: string })[]; monthly: (PeriodTotals & { month: string })[]; period: PeriodTotals };
-}
-interface ScheduleResponse {
-  surfaces: SurfaceResult[];
-  warnings: string[];
 }
 
 type Measure = "fraction" | "transmitted" | "gain";
@@ -51,7 +41,7 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
   const [linke, setLinke] = useState<number | "">("");
   const [albedo, setAlbedo] = useState(0.2);
   const [overhang, setOverhang] = useState({ on: false, depthM: 0.6, gapAboveM: 0.2, widthM: 1.5, heightM: 1.5 });
-  const [result, setResult] = useState<{ surface: SurfaceResult; warnings: string[]; stepHours: number } | null>(null);
+  const [result, setResult] = useState<{ surface: ScheduleSurfaceResult; warnings: string[]; stepHours: number } | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const [measure, setMeasure] = useState<Measure>("fraction");

@@ -55,10 +55,14 @@ export const client = ac.newRole({
 export const roles = { owner, consultant, architect, client } as const;
 
 export type RoleName = keyof typeof roles;
-export const ROLE_NAMES = Object.keys(roles) as RoleName[];
+/** Every role, as a tuple so that schemas (`z.enum(ROLE_NAMES)`) infer `RoleName`. */
+export const ROLE_NAMES = ["owner", "consultant", "architect", "client"] as const satisfies readonly RoleName[];
+// A role added to `roles` but not to ROLE_NAMES fails to compile here.
+const _everyRoleListed: Exclude<RoleName, (typeof ROLE_NAMES)[number]> extends never ? true : never = true;
+void _everyRoleListed;
 
 /** Roles an owner may give in an invitation or a role change ("owner" included: an organisation may have several). */
-export const ASSIGNABLE_ROLES: readonly RoleName[] = ["owner", "consultant", "architect", "client"];
+export const ASSIGNABLE_ROLES = ["owner", "consultant", "architect", "client"] as const satisfies readonly RoleName[];
 
 export const ROLE_LABELS: Record<RoleName, string> = {
   owner: "Owner",
@@ -76,8 +80,30 @@ export const ROLE_SUMMARIES: Record<RoleName, string> = {
 
 export type Permission = { [K in keyof typeof statements]?: readonly (typeof statements)[K][number][] };
 
+type Statements = typeof statements;
+/** One action on one resource, written "resource:action" (e.g. "project:update"). */
+export type PermissionKey = { [K in keyof Statements]: `${K & string}:${Statements[K][number]}` }[keyof Statements];
+
+/** How refusals name each action ("Your role (client) does not allow you to edit projects"). */
+export const PERMISSION_PHRASES: Partial<Record<PermissionKey, string>> = {
+  "project:create": "create projects",
+  "project:update": "edit projects",
+  "project:delete": "delete projects",
+  "project:share": "share projects",
+  "member:update": "manage members",
+  "member:delete": "remove members",
+  "invitation:create": "invite members",
+  "invitation:cancel": "cancel invitations",
+};
+
+/** The permission object for a "resource:action" key. */
+export function permissionFor(key: PermissionKey): Permission {
+  const [resource, action] = key.split(":") as [keyof Statements, string];
+  return { [resource]: [action] } as Permission;
+}
+
 export function isRoleName(value: unknown): value is RoleName {
-  return typeof value === "string" && (ROLE_NAMES as string[]).includes(value);
+  return typeof value === "string" && (ROLE_NAMES as readonly string[]).includes(value);
 }
 
 /**

@@ -2,7 +2,7 @@
  * Turns a schedule computation (typed arrays) into the JSON body of POST /api/v1/calc/schedule.
  * Rounding at output only: angles to 0.001°, fractions to 1e-6, W/m² to 0.01, W to 0.1.
  */
-import type { ScheduleRequest, ScheduleRow } from "@/lib/contracts/schedule";
+import type { ScheduleRequest, ScheduleResponse, ScheduleRow } from "@/lib/contracts/schedule";
 import { computeSchedule, type ScheduleComputation } from "./schedule";
 import { scheduleTotals } from "./schedule-totals";
 
@@ -55,7 +55,7 @@ function rowsOf(c: ScheduleComputation, k: number, isoTimes: string[]): Schedule
   return rows;
 }
 
-export function scheduleResponse(req: ScheduleRequest, c: ScheduleComputation = computeSchedule(req)) {
+export function scheduleResponse(req: ScheduleRequest, c: ScheduleComputation = computeSchedule(req)): ScheduleResponse {
   const tl = c.site.timeline;
   const isoTimes = Array.from({ length: tl.length }, (_, i) => tl.iso(i));
   const iso = (i: number) => isoTimes[i]!;

@@ -1,8 +1,7 @@
 /** Typed fetch for islands: JSON in, JSON out, problem+json errors turned into ApiError. */
-export interface FieldError {
-  field: string;
-  message: string;
-}
+import type { FieldError, Problem } from "@/lib/contracts/problem";
+
+export type { FieldError };
 
 export class ApiError extends Error {
   constructor(
@@ -27,7 +26,7 @@ export async function api<T = unknown>(method: string, path: string, body?: unkn
     throw new ApiError(0, "Cannot reach the Paneray server; check your connection and try again.");
   }
   if (res.status === 204) return undefined as T;
-  const data = (await res.json().catch(() => null)) as (T & { detail?: string; errors?: FieldError[] }) | null;
+  const data = (await res.json().catch(() => null)) as (T & Partial<Problem>) | null;
   if (!res.ok) throw new ApiError(res.status, data?.detail ?? `Request failed (${res.status})`, data?.errors ?? []);
   return data as T;
 }

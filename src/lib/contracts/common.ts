@@ -17,13 +17,6 @@ export const optionalText = (label: string, max: number) =>
     .nullish()
     .transform((v) => (v ? v : null));
 
-/** A finite number within [min, max] (NaN, Infinity and strings refused). */
-export const finite = (label: string, min: number, max: number) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .refine(Number.isFinite, `${label} must be a finite number`)
-    .refine((v) => v >= min && v <= max, `${label} must be between ${min} and ${max}`);
-
 export const email = z
   .string({ error: "email must be text" })
   .trim()

@@ -3,22 +3,12 @@
  * Layers are listed from outdoors inwards and alternate pane, gap, pane, …; 1 to 6 panes.
  */
 import { z } from "zod";
+import { bounded, fraction } from "./numbers";
 
 export const MAX_PANES = 6;
 
-const num = (label: string, min: number, max: number, opts: { minExclusive?: boolean } = {}) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .refine(Number.isFinite, `${label} must be a finite number`)
-    .refine(
-      (v) => (opts.minExclusive ? v > min : v >= min) && v <= max,
-      `${label} must be ${opts.minExclusive ? "greater than" : "at least"} ${min} and at most ${max}`,
-    );
-
-const fraction = (label: string) => num(label, 0, 1);
-
 /** Corrected (hemispherical) emissivity of a glass surface; uncoated soda-lime glass is 0.837 (EN 673). */
-const emissivity = (label: string) => num(label, 0.01, 1).optional();
+const emissivity = (label: string) => bounded(label, 0.01, 1).optional();
 
 export const DEFAULT_EMISSIVITY = 0.837;
 
@@ -54,15 +44,15 @@ export type MeasuredValues = z.infer<typeof MeasuredValues>;
 
 const paneCommon = {
   kind: z.literal("pane"),
-  thicknessMm: num("thicknessMm", 0.5, 60),
+  thicknessMm: bounded("thicknessMm", 0.5, 60),
   emissivityFront: emissivity("emissivityFront"),
   emissivityBack: emissivity("emissivityBack"),
 };
 
 export const PhysicalPane = z.object({
   ...paneCommon,
-  refractiveIndex: num("refractiveIndex", 1, 4, { minExclusive: true }),
-  absorptionPerMm: num("absorptionPerMm", 0, 20),
+  refractiveIndex: bounded("refractiveIndex", 1, 4, { minExclusive: true }),
+  absorptionPerMm: bounded("absorptionPerMm", 0, 20),
 });
 
 export const MeasuredPane = z.object({ ...paneCommon, measured: MeasuredValues });
@@ -100,7 +90,7 @@ export type Gas = z.infer<typeof Gas>;
 
 export const Gap = z.object({
   kind: z.literal("gap"),
-  widthMm: num("widthMm", 1, 100),
+  widthMm: bounded("widthMm", 1, 100),
   gas: Gas,
 });
 export type Gap = z.infer<typeof Gap>;
@@ -111,7 +101,7 @@ export const GlazingRequest = z
   .object({
     layers: z.array(z.unknown()).min(1, "layers must contain at least one pane").max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
     anglesDeg: z
-      .array(num("anglesDeg", 0, 90))
+      .array(bounded("anglesDeg", 0, 90))
       .min(1, "anglesDeg must not be empty")
       .max(181, "at most 181 angles")
       .optional()
@@ -119,7 +109,7 @@ export const GlazingRequest = z
     /** "per-polarization" (default): the stack is solved for s and p separately, then averaged. */
     polarization: z.enum(["per-polarization", "averaged"]).optional().default("per-polarization"),
     /** Tilt of the glazing from horizontal for the gap convection of EN 673 (90 = vertical, the declared condition). */
-    tiltDeg: num("tiltDeg", 0, 90).optional().default(90),
+    tiltDeg: bounded("tiltDeg", 0, 90).optional().default(90),
   })
   .transform((req, ctx) => {
     const layers: (Pane | Gap)[] = [];

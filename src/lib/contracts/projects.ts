@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { finite, optionalText, rowId, text, timeZone } from "./common";
+import { optionalText, rowId, text, timeZone } from "./common";
+import { finite } from "./numbers";
 
 export const FacadeInput = z.object({
   id: rowId.optional(),
@@ -37,3 +38,12 @@ export const ProjectUpdateRequest = z
 export type ProjectUpdateRequest = z.infer<typeof ProjectUpdateRequest>;
 
 export const ShareRequest = z.object({ memberId: rowId });
+
+/** A member who sees only shared projects, and whether they see this one (the shares endpoints' rows). */
+export interface ShareEntry {
+  memberId: string;
+  name: string;
+  email: string;
+  role: string;
+  shared: boolean;
+}

@@ -5,23 +5,12 @@
 import { z } from "zod";
 import { isIanaTimeZone } from "./common";
 import { GlazingRequest } from "./glazing";
+import { finite, positive } from "./numbers";
 
 /** Surfaces × rows one request may ask for (a full year of hours for 6 surfaces; about 13 MB of JSON). */
 export const MAX_SCHEDULE_ROWS = 6 * 8784;
 export const MAX_SURFACES = 24;
 export const MAX_SPAN_DAYS = 366;
-
-const num = (label: string, min: number, max: number) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .refine(Number.isFinite, `${label} must be a finite number`)
-    .refine((v) => v >= min && v <= max, `${label} must be between ${min} and ${max}`);
-
-const positive = (label: string, max: number) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .refine(Number.isFinite, `${label} must be a finite number`)
-    .refine((v) => v > 0 && v <= max, `${label} must be greater than 0 and at most ${max}`);
 
 const localDate = (label: string) =>
   z
@@ -33,26 +22,26 @@ const localDate = (label: string) =>
     }, `${label} is not a real calendar date`);
 
 export const Site = z.object({
-  latitudeDeg: num("latitudeDeg", -90, 90),
-  longitudeDeg: num("longitudeDeg", -180, 180),
+  latitudeDeg: finite("latitudeDeg", -90, 90),
+  longitudeDeg: finite("longitudeDeg", -180, 180),
   timeZone: z.string({ error: "timeZone must be text" }).refine(isIanaTimeZone, "timeZone must be an IANA time-zone name such as Europe/Lisbon"),
-  elevationM: num("elevationM", -500, 9000).optional().default(0),
+  elevationM: finite("elevationM", -500, 9000).optional().default(0),
 });
 
 export const Shading = z.object({
   window: z.object({ widthM: positive("widthM", 100), heightM: positive("heightM", 100) }),
   overhang: z
     .object({
-      depthM: num("depthM", 0, 50),
-      gapAboveM: num("gapAboveM", 0, 50),
+      depthM: finite("depthM", 0, 50),
+      gapAboveM: finite("gapAboveM", 0, 50),
       /** How far the overhang runs past each side of the window; omitted = very long. */
-      extensionLeftM: num("extensionLeftM", 0, 100).optional(),
-      extensionRightM: num("extensionRightM", 0, 100).optional(),
+      extensionLeftM: finite("extensionLeftM", 0, 100).optional(),
+      extensionRightM: finite("extensionRightM", 0, 100).optional(),
     })
     .optional(),
-  fins: z.object({ depthM: num("depthM", 0, 50), gapM: num("gapM", 0, 50) }).optional(),
+  fins: z.object({ depthM: finite("depthM", 0, 50), gapM: finite("gapM", 0, 50) }).optional(),
   /** Obstructions on the horizon in front of the window (buildings, terrain), degrees above horizontal. */
-  horizonDeg: num("horizonDeg", 0, 89).optional(),
+  horizonDeg: finite("horizonDeg", 0, 89).optional(),
 });
 
 const MONTHS = 12;
@@ -63,10 +52,10 @@ export const Sky = z
     model: z.enum(["perez", "hay-davies", "isotropic"]).optional().default("perez"),
     /** Linke turbidity, one value or twelve monthly values (January first). */
     linkeTurbidity: z
-      .union([num("linkeTurbidity", 1, 10), z.array(num("linkeTurbidity", 1, 10)).length(MONTHS, "linkeTurbidity needs 12 monthly values")])
+      .union([finite("linkeTurbidity", 1, 10), z.array(finite("linkeTurbidity", 1, 10)).length(MONTHS, "linkeTurbidity needs 12 monthly values")])
       .optional(),
     /** Ground reflectance (albedo). */
-    albedo: num("albedo", 0, 1).optional().default(0.2),
+    albedo: finite("albedo", 0, 1).optional().default(0.2),
   })
   .optional()
   .transform((s) => s ?? { model: "perez" as const, albedo: 0.2, linkeTurbidity: undefined });
@@ -74,15 +63,15 @@ export const Sky = z
 export const WeatherRow = z.object({
   /** ISO-8601 instant with offset or Z: the midpoint of the hour the values stand for. */
   time: z.string().refine((t) => /[zZ]|[+-]\d{2}:?\d{2}$/.test(t) && !Number.isNaN(Date.parse(t)), "time must be an ISO-8601 instant with a UTC offset"),
-  ghi: num("ghi", 0, 1500),
-  dni: num("dni", 0, 1500),
-  dhi: num("dhi", 0, 1000),
+  ghi: finite("ghi", 0, 1500),
+  dni: finite("dni", 0, 1500),
+  dhi: finite("dhi", 0, 1000),
 });
 
 export const ScheduleSurface = z.object({
   name: z.string({ error: "name must be text" }).trim().min(1, "name is required").max(120),
-  azimuthDeg: num("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
-  tiltDeg: num("tiltDeg", 0, 180),
+  azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
+  tiltDeg: finite("tiltDeg", 0, 180),
   layers: z.array(z.unknown()),
   shading: Shading.optional(),
   /** Glazed area for the W and kWh columns; default the shading window's area, else none. */
@@ -158,4 +147,43 @@ export interface PeriodTotals {
   transmittedKWh: number | null;
   solarGainKWh: number | null;
   peak: { time: string; transmittedWm2: number; solarGainWm2: number } | null;
+}
+
+/** Daily, monthly and whole-period totals of one surface. */
+export interface ScheduleSurfaceTotals {
+  daily: (PeriodTotals & { date: string })[];
+  monthly: (PeriodTotals & { month: string })[];
+  period: PeriodTotals & { from: string; to: string };
+}
+
+/** One surface of a schedule response: its glazing's summary values, its rows and totals. */
+export interface ScheduleSurfaceResult {
+  name: string;
+  azimuthDeg: number;
+  tiltDeg: number;
+  glazedAreaM2: number | null;
+  normalTransmittance: number;
+  diffuseTransmittance: number;
+  normalGValue: number;
+  diffuseGValue: number;
+  /** Centre-of-glass U-value, W/(m²K). */
+  uValue: number;
+  rows: ScheduleRow[];
+  totals: ScheduleSurfaceTotals;
+}
+
+/** Body of a successful POST /api/v1/calc/schedule. */
+export interface ScheduleResponse {
+  site: { latitudeDeg: number; longitudeDeg: number; timeZone: string; elevationM: number };
+  from: string;
+  to: string;
+  stepMinutes: number;
+  timeZone: string;
+  rowsPerSurface: number;
+  irradiance: "weather series" | "clear sky";
+  sky: { model: "perez" | "hay-davies" | "isotropic"; albedo: number };
+  /** The models used, in words, one entry per step of the computation. */
+  methods: Record<string, string>;
+  surfaces: ScheduleSurfaceResult[];
+  warnings: string[];
 }

@@ -26,7 +26,7 @@ export const auth = betterAuth({
   trustedOrigins: env.TRUSTED_ORIGINS.split(",").map((s) => s.trim()).filter(Boolean),
   database: drizzleAdapter(db, { provider: "pg", schema }),
   telemetry: { enabled: false },
-  rateLimit: { enabled: process.env.AUTH_RATE_LIMIT !== "off" },
+  rateLimit: { enabled: env.AUTH_RATE_LIMIT !== "off" },
   advanced: { ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] } },
   emailAndPassword: {
     enabled: true,

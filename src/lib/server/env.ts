@@ -1,5 +1,6 @@
 /**
- * Server configuration, read from the process environment at run time and checked once.
+ * Server configuration, read from the process environment at run time and checked once. This is the
+ * only module in src that reads `process.env`.
  * (Read here rather than through astro:env so that scripts run outside Astro, such as the
  * demo seed, share exactly the same configuration.)
  */
@@ -14,6 +15,8 @@ const Env = z.object({
   /** smtp://host:port — where outgoing mail goes. Unset: mail is logged, not sent. */
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Paneray <no-reply@paneray.invalid>"),
+  /** "off" switches better-auth's per-client rate limits off (the browser tests sign in often); anything else keeps them. */
+  AUTH_RATE_LIMIT: z.string().default("on"),
 });
 
 export type ServerEnv = z.infer<typeof Env>;

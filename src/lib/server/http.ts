@@ -1,37 +1,44 @@
 /**
- * One error body for every endpoint (RFC 9457 problem+json) and the request-reading helpers
- * that turn bad input into a 4xx answer instead of an exception.
+ * The HTTP edge: one error body for every endpoint (RFC 9457 problem+json), the request-reading
+ * helpers that turn bad input into a 4xx answer instead of an exception, and `endpoint(…)`, the one
+ * way to write an endpoint (auth, params, body, size limit and error mapping declared up front).
  */
 import type { APIContext, APIRoute } from "astro";
 import { z, type ZodType } from "zod";
+import type { FieldError, Problem } from "@/lib/contracts/problem";
+import { permissionFor, PERMISSION_PHRASES, type PermissionKey } from "@/lib/auth/roles";
+import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError } from "@/lib/server/errors";
+import type { Membership, ProjectRow } from "@/lib/server/services/access";
 
-export interface FieldError {
-  field: string;
-  message: string;
-}
+/** The access rules, loaded on first use so that this module (and its tests) need no database. */
+const access = () => import("@/lib/server/services/access");
+
+export type { FieldError };
+
+const TITLES: Record<number, string> = {
+  400: "Bad request",
+  401: "Not signed in",
+  403: "Forbidden",
+  404: "Not found",
+  405: "Method not allowed",
+  409: "Conflict",
+  413: "Request body too large",
+  415: "Unsupported media type",
+  422: "Unprocessable request",
+  429: "Too many requests",
+  500: "Internal error",
+  503: "Service unavailable",
+};
 
 export function problem(status: number, detail: string, extra: { errors?: FieldError[]; [k: string]: unknown } = {}): Response {
-  const titles: Record<number, string> = {
-    400: "Bad request",
-    401: "Not signed in",
-    403: "Forbidden",
-    404: "Not found",
-    405: "Method not allowed",
-    409: "Conflict",
-    413: "Request body too large",
-    415: "Unsupported media type",
-    422: "Unprocessable request",
-    429: "Too many requests",
-    500: "Internal error",
-    503: "Service unavailable",
-  };
-  return new Response(JSON.stringify({ type: "about:blank", title: titles[status] ?? "Error", status, detail, ...extra }), {
+  const body: Problem = { type: "about:blank", title: TITLES[status] ?? "Error", status, detail, ...extra };
+  return new Response(JSON.stringify(body), {
     status,
     headers: { "content-type": "application/problem+json; charset=utf-8", "cache-control": "no-store" },
   });
 }
 
-/** Thrown inside a handler to answer with a problem response. */
+/** Thrown at the edge (size limits, content types) to answer with a problem response. */
 export class HttpError extends Error {
   constructor(
     readonly status: number,
@@ -43,6 +50,15 @@ export class HttpError extends Error {
   toResponse(): Response {
     return problem(this.status, this.message, this.extra);
   }
+}
+
+/** The status each domain error is answered with. */
+export function statusOfDomainError(err: DomainError): 400 | 403 | 404 | 409 | 500 {
+  if (err instanceof NotFoundError) return 404;
+  if (err instanceof ForbiddenError) return 403;
+  if (err instanceof ConflictError) return 409;
+  if (err instanceof InvalidError) return 400;
+  return 500;
 }
 
 export const fieldPath = (path: readonly PropertyKey[]) =>
@@ -102,7 +118,7 @@ async function readTextCapped(request: Request, maxBytes: number): Promise<strin
   return new TextDecoder().decode(Buffer.concat(chunks));
 }
 
-/** Validates route parameters (e.g. ids) with the same error shape as bodies. */
+/** Validates route parameters (e.g. ids) with the same error shape as bodies; a bad id is a 404. */
 export function parseParams<T>(params: unknown, schema: ZodType<T>): T {
   const parsed = schema.safeParse(params);
   if (!parsed.success) {
@@ -119,12 +135,6 @@ export function json(data: unknown, status = 200, headers: HeadersInit = {}): Re
   });
 }
 
-/** The signed-in user, or a 401. */
-export function requireUser(locals: App.Locals): NonNullable<App.Locals["user"]> {
-  if (!locals.user) throw new HttpError(401, "Sign in to use this endpoint");
-  return locals.user;
-}
-
 /** Errors raised by better-auth's server API carry a status and a message. */
 function fromAuthError(err: unknown): HttpError | null {
   if (err && typeof err === "object" && "statusCode" in err && typeof (err as { statusCode: unknown }).statusCode === "number") {
@@ -136,20 +146,131 @@ function fromAuthError(err: unknown): HttpError | null {
 }
 
 /**
- * Wraps an endpoint so that every failure becomes a problem response:
- * HttpError as given, better-auth errors with their status, anything else a logged 500.
+ * The problem answer for a failure, or null when the failure is unexpected (a bug or an outage).
+ * `engineField`: when given, a RangeError (the calculation engine refusing a combination the
+ * schema cannot see) is bad input about that field, not a failure of ours.
  */
-export function endpoint(fn: (ctx: APIContext) => Promise<Response> | Response): APIRoute {
+export function problemFor(err: unknown, engineField?: string): HttpError | null {
+  if (err instanceof HttpError) return err;
+  if (err instanceof DomainError) return new HttpError(statusOfDomainError(err), err.message, err.errors.length ? { errors: err.errors } : {});
+  if (err instanceof z.ZodError) return validationError(err);
+  if (engineField !== undefined && err instanceof RangeError) {
+    return new HttpError(400, err.message, { errors: [{ field: engineField, message: err.message }] });
+  }
+  const authErr = fromAuthError(err);
+  return authErr && authErr.status < 500 ? authErr : null;
+}
+
+/**
+ * Runs a handler so that every failure becomes a problem response: known errors with their
+ * status (see problemFor), anything else a logged 500 without internals.
+ */
+export function withProblems(fn: (ctx: APIContext) => Promise<Response> | Response, engineField?: string): APIRoute {
   return async (ctx) => {
     try {
       return await fn(ctx);
     } catch (err) {
-      if (err instanceof HttpError) return err.toResponse();
-      if (err instanceof z.ZodError) return validationError(err).toResponse();
-      const authErr = fromAuthError(err);
-      if (authErr && authErr.status < 500) return authErr.toResponse();
+      const known = problemFor(err, engineField);
+      if (known) return known.toResponse();
       console.error(`[api] ${ctx.request.method} ${ctx.url.pathname} failed:`, err);
       return problem(500, "Something went wrong on our side; nothing was changed by the failed step.");
     }
   };
+}
+
+type SignedInUser = NonNullable<App.Locals["user"]>;
+
+/** A project named by a route parameter; the caller must see it and, if given, hold `permission` on it. */
+export interface ProjectAuth {
+  project: string;
+  permission?: PermissionKey;
+  /** How a refusal names the action; defaults to the permission's phrase. */
+  action?: string;
+}
+
+/** An organisation named by a route parameter or a body field; the caller's role there must hold `permission`. */
+export interface OrgAuth {
+  org: string;
+  from?: "params" | "body";
+  permission: PermissionKey;
+  action?: string;
+}
+
+/**
+ * Who may call: "anonymous" (anyone), "user" (signed in), or a permission on a project or an
+ * organisation (signed in, and the role allows it; not visible → 404, not allowed → 403).
+ */
+export type AuthSpec = "anonymous" | "user" | ProjectAuth | OrgAuth;
+
+type AuthContext<A extends AuthSpec> = A extends "anonymous"
+  ? { user: SignedInUser | null }
+  : A extends ProjectAuth
+    ? { user: SignedInUser; project: ProjectRow; membership: Membership }
+    : A extends OrgAuth
+      ? { user: SignedInUser; membership: Membership }
+      : { user: SignedInUser };
+
+export interface EndpointSpec<A extends AuthSpec, P, B> {
+  auth: A;
+  /** Route parameters; a value that fails is answered 404 (no such resource). */
+  params?: ZodType<P>;
+  /** JSON body; failures are answered 400 naming the field. Without it the body is not read. */
+  body?: ZodType<B>;
+  /** Body size limit in bytes (413 past it); default MAX_JSON_BYTES. */
+  maxBytes?: number;
+  /** Map the engine's RangeErrors to 400 about this request field. */
+  engineErrorsField?: string;
+}
+
+export type EndpointInput<A extends AuthSpec, P, B> = {
+  context: APIContext;
+  request: Request;
+  params: P;
+  body: B;
+} & AuthContext<A>;
+
+const phrase = (auth: ProjectAuth | OrgAuth) => auth.action ?? (auth.permission && PERMISSION_PHRASES[auth.permission]) ?? "do this";
+
+function stringAt(source: unknown, key: string): string {
+  const v = source && typeof source === "object" ? (source as Record<string, unknown>)[key] : undefined;
+  if (typeof v !== "string") throw new Error(`endpoint: "${key}" is not a string in the validated input`);
+  return v;
+}
+
+/**
+ * Declares an endpoint: who may call it, its parameter and body schemas and its size limit. The
+ * handler receives validated values (and the project or membership the auth rule loaded) and
+ * returns a Response; domain errors, zod errors and the engine's RangeErrors become problem+json.
+ *
+ *   export const PATCH = endpoint(
+ *     { auth: { project: "id", permission: "project:update" }, params: z.object({ id: rowId }), body: ProjectUpdateRequest },
+ *     async ({ project, body }) => json({ project: await updateProject(project.id, body) }),
+ *   );
+ */
+export function endpoint<const A extends AuthSpec, P = Record<string, never>, B = undefined>(
+  spec: EndpointSpec<A, P, B>,
+  handler: (input: EndpointInput<A, P, B>) => Promise<Response> | Response,
+): APIRoute {
+  return withProblems(async (context) => {
+    const user = context.locals.user ?? null;
+    const auth = spec.auth as AuthSpec;
+    if (auth !== "anonymous" && !user) throw new HttpError(401, "Sign in to use this endpoint");
+    const params = (spec.params ? parseParams(context.params, spec.params) : {}) as P;
+
+    let loaded: { project?: ProjectRow; membership?: Membership } = {};
+    const authorise = async (from: "params" | "body", source: unknown) => {
+      if (typeof auth !== "object") return;
+      if ("project" in auth && from === "params") {
+        const permission = auth.permission ? permissionFor(auth.permission) : undefined;
+        loaded = await (await access()).requireProject(user!.id, stringAt(source, auth.project), permission, phrase(auth));
+      } else if ("org" in auth && (auth.from ?? "params") === from) {
+        loaded = { membership: await (await access()).requireOrgPermission(user!.id, stringAt(source, auth.org), permissionFor(auth.permission), phrase(auth)) };
+      }
+    };
+
+    await authorise("params", params);
+    const body = (spec.body ? await readJson(context.request, spec.body, spec.maxBytes ?? MAX_JSON_BYTES) : undefined) as B;
+    await authorise("body", body);
+    return handler({ context, request: context.request, params, body, user, ...loaded } as unknown as EndpointInput<A, P, B>);
+  }, spec.engineErrorsField);
 }

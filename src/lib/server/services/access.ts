@@ -5,7 +5,7 @@
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { member, organization, project, projectShare } from "@/lib/server/db/schema";
-import { HttpError } from "@/lib/server/http";
+import { ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { roleCan, type Permission, isRoleName, type RoleName } from "@/lib/auth/roles";
 
 export interface Membership {
@@ -40,12 +40,13 @@ export async function membershipIn(userId: string, organizationId: string): Prom
 
 /**
  * The caller's membership of an organisation, provided the role grants `permission`.
- * Not a member: 404 (the organisation's existence is not revealed). Member without the right: 403.
+ * Not a member: NotFoundError (the organisation's existence is not revealed). Member without the
+ * right: ForbiddenError naming the role.
  */
 export async function requireOrgPermission(userId: string, organizationId: string, permission: Permission, action: string): Promise<Membership> {
   const m = await membershipIn(userId, organizationId);
-  if (!m) throw new HttpError(404, "No such organisation, or you are not a member of it");
-  if (!roleCan(m.role, permission)) throw new HttpError(403, `Your role (${m.role}) does not allow you to ${action}`);
+  if (!m) throw new NotFoundError("No such organisation, or you are not a member of it");
+  if (!roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return m;
 }
 
@@ -64,8 +65,8 @@ export async function canSeeProject(m: Membership, p: ProjectRow): Promise<boole
 }
 
 /**
- * Loads a project for the user: 404 when it does not exist or is not visible to them,
- * 403 when visible but the role lacks `permission`.
+ * Loads a project for the user: NotFoundError when it does not exist or is not visible to them,
+ * ForbiddenError (naming the role) when visible but the role lacks `permission`.
  */
 export async function requireProject(
   userId: string,
@@ -74,28 +75,10 @@ export async function requireProject(
   action = "change this project",
 ): Promise<{ project: ProjectRow; membership: Membership }> {
   const p = (await db.select().from(project).where(eq(project.id, projectId)))[0];
-  const notFound = new HttpError(404, "No such project, or it is not shared with you");
+  const notFound = new NotFoundError("No such project, or it is not shared with you");
   if (!p) throw notFound;
   const m = await membershipIn(userId, p.organizationId);
   if (!m || !(await canSeeProject(m, p))) throw notFound;
-  if (permission && !roleCan(m.role, permission)) throw new HttpError(403, `Your role (${m.role}) does not allow you to ${action}`);
+  if (permission && !roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return { project: p, membership: m };
-}
-
-/**
- * For pages: the project and the caller's membership, or the refusal (404/403) to render instead
- * of throwing. Other errors are rethrown.
- */
-export async function projectForPage(
-  userId: string,
-  projectId: string | undefined,
-  permission?: Permission,
-  action?: string,
-): Promise<{ loaded: { project: ProjectRow; membership: Membership } | null; refusal: HttpError | null }> {
-  try {
-    return { loaded: await requireProject(userId, projectId ?? "", permission, action), refusal: null };
-  } catch (e) {
-    if (e instanceof HttpError) return { loaded: null, refusal: e };
-    throw e;
-  }
 }

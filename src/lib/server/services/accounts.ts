@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { auth } from "@/lib/server/auth";
 import { db } from "@/lib/server/db/client";
 import { organization, user } from "@/lib/server/db/schema";
-import { HttpError } from "@/lib/server/http";
+import { ConflictError, fieldError, InvalidError } from "@/lib/server/errors";
 import type { SignUpRequest } from "@/lib/contracts/auth";
 import { acceptInvitation, invitationSummary } from "./members";
 
@@ -15,6 +15,12 @@ export function slugify(name: string): string {
     .replace(/^-+|-+$/g, "")
     .slice(0, 48);
   return base || "organisation";
+}
+
+/** Whether an account with this e-mail address exists. */
+export async function accountExists(email: string): Promise<boolean> {
+  const rows = await db.select({ id: user.id }).from(user).where(eq(user.email, email.toLowerCase())).limit(1);
+  return rows.length > 0;
 }
 
 async function freeSlug(name: string): Promise<string> {
@@ -35,13 +41,13 @@ async function freeSlug(name: string): Promise<string> {
 export async function signUp(input: SignUpRequest): Promise<{ headers: Headers; userId: string; organizationId: string }> {
   if (input.invitationId) {
     const inv = await invitationSummary(input.invitationId);
-    if (!inv || inv.status !== "pending") throw new HttpError(409, "This invitation is no longer valid", { errors: [{ field: "invitationId", message: "not pending" }] });
+    if (!inv || inv.status !== "pending") throw new ConflictError("This invitation is no longer valid", [fieldError("invitationId", "not pending")]);
     if (inv.email.toLowerCase() !== input.email) {
-      throw new HttpError(400, `This invitation is for ${inv.email}; sign up with that address`, { errors: [{ field: "email", message: "does not match the invitation" }] });
+      throw new InvalidError("email", "does not match the invitation", `This invitation is for ${inv.email}; sign up with that address`);
     }
   }
   const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, input.email));
-  if (existing.length) throw new HttpError(409, "An account with this e-mail already exists; sign in instead", { errors: [{ field: "email", message: "already registered" }] });
+  if (existing.length) throw new ConflictError("An account with this e-mail already exists; sign in instead", [fieldError("email", "already registered")]);
 
   const { headers, response } = await auth.api.signUpEmail({
     body: { name: input.name, email: input.email, password: input.password },

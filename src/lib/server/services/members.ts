@@ -2,7 +2,7 @@ import { and, asc, eq, gt, ne } from "drizzle-orm";
 import { auth } from "@/lib/server/auth";
 import { db } from "@/lib/server/db/client";
 import { invitation, member, organization, user } from "@/lib/server/db/schema";
-import { HttpError } from "@/lib/server/http";
+import { ConflictError, fieldError, ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { isRoleName, type RoleName } from "@/lib/auth/roles";
 
 export interface MemberView {
@@ -55,7 +55,7 @@ export async function inviteMember(headers: Headers, organizationId: string, ema
     .from(member)
     .innerJoin(user, eq(user.id, member.userId))
     .where(and(eq(member.organizationId, organizationId), eq(user.email, email)));
-  if (already.length) throw new HttpError(409, `${email} is already a member of this organisation`, { errors: [{ field: "email", message: "already a member" }] });
+  if (already.length) throw new ConflictError(`${email} is already a member of this organisation`, [fieldError("email", "already a member")]);
   return auth.api.createInvitation({ headers, body: { email, role, organizationId, resend: true } });
 }
 
@@ -65,7 +65,7 @@ export async function cancelInvitation(organizationId: string, invitationId: str
     .set({ status: "canceled" })
     .where(and(eq(invitation.id, invitationId), eq(invitation.organizationId, organizationId), eq(invitation.status, "pending")))
     .returning({ id: invitation.id });
-  if (!res.length) throw new HttpError(404, "No such pending invitation");
+  if (!res.length) throw new NotFoundError("No such pending invitation");
 }
 
 async function ownerCount(organizationId: string, exceptMemberId?: string): Promise<number> {
@@ -84,7 +84,7 @@ async function ownerCount(organizationId: string, exceptMemberId?: string): Prom
 
 async function memberOf(organizationId: string, memberId: string) {
   const m = (await db.select().from(member).where(and(eq(member.id, memberId), eq(member.organizationId, organizationId))))[0];
-  if (!m) throw new HttpError(404, "No such member in this organisation");
+  if (!m) throw new NotFoundError("No such member in this organisation");
   return m;
 }
 
@@ -92,7 +92,7 @@ async function memberOf(organizationId: string, memberId: string) {
 export async function changeRole(organizationId: string, memberId: string, role: RoleName): Promise<void> {
   const m = await memberOf(organizationId, memberId);
   if (m.role === "owner" && role !== "owner" && (await ownerCount(organizationId, memberId)) === 0) {
-    throw new HttpError(409, "An organisation needs at least one owner: make someone else owner first", { errors: [{ field: "role", message: "last owner" }] });
+    throw new ConflictError("An organisation needs at least one owner: make someone else owner first", [fieldError("role", "last owner")]);
   }
   await db.update(member).set({ role }).where(eq(member.id, memberId));
 }
@@ -100,7 +100,7 @@ export async function changeRole(organizationId: string, memberId: string, role:
 export async function removeMember(organizationId: string, memberId: string): Promise<void> {
   const m = await memberOf(organizationId, memberId);
   if (m.role === "owner" && (await ownerCount(organizationId, memberId)) === 0) {
-    throw new HttpError(409, "The last owner cannot be removed");
+    throw new ConflictError("The last owner cannot be removed");
   }
   await db.delete(member).where(eq(member.id, memberId));
 }
@@ -148,10 +148,10 @@ export async function invitationSummary(invitationId: string): Promise<Invitatio
  */
 export async function acceptInvitation(userId: string, userEmail: string, invitationId: string): Promise<InvitationSummary> {
   const inv = await invitationSummary(invitationId);
-  if (!inv) throw new HttpError(404, "No such invitation");
-  if (inv.status !== "pending") throw new HttpError(409, `This invitation is ${inv.status}; ask the organisation's owner for a new one`);
+  if (!inv) throw new NotFoundError("No such invitation");
+  if (inv.status !== "pending") throw new ConflictError(`This invitation is ${inv.status}; ask the organisation's owner for a new one`);
   if (inv.email.toLowerCase() !== userEmail.toLowerCase()) {
-    throw new HttpError(403, `This invitation is addressed to ${inv.email}; sign in with that address to accept it`);
+    throw new ForbiddenError(`This invitation is addressed to ${inv.email}; sign in with that address to accept it`);
   }
   await db.transaction(async (tx) => {
     const existing = await tx.select({ id: member.id }).from(member).where(and(eq(member.userId, userId), eq(member.organizationId, inv.organizationId)));

@@ -1,9 +1,9 @@
-import { and, asc, desc, eq, inArray, notInArray } from "drizzle-orm";
+import { and, asc, count, desc, eq, exists, inArray, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { facade, member, project, projectShare, user } from "@/lib/server/db/schema";
-import { HttpError } from "@/lib/server/http";
-import { roleCan } from "@/lib/auth/roles";
-import type { ProjectCreateRequest, ProjectUpdateRequest } from "@/lib/contracts/projects";
+import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
+import { ROLE_NAMES, roleCan } from "@/lib/auth/roles";
+import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
 import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
 
 export type FacadeRow = typeof facade.$inferSelect;
@@ -13,33 +13,31 @@ export interface OrganizationProjects {
   projects: (ProjectRow & { facadeCount: number })[];
 }
 
-/** Every project the user may see, grouped per organisation (for the dashboard). */
+const rolesThat = (action: "readAll" | "readShared") => ROLE_NAMES.filter((r) => roleCan(r, { project: [action] }));
+
+/**
+ * Every project the user may see, grouped per organisation (for the dashboard): one query for the
+ * memberships and one grouped query for the visible projects with their façade counts.
+ */
 export async function projectsForUser(userId: string): Promise<OrganizationProjects[]> {
   const memberships = await membershipsOf(userId);
-  const out: OrganizationProjects[] = [];
-  for (const m of memberships) {
-    let rows: ProjectRow[];
-    if (roleCan(m.role, { project: ["readAll"] })) {
-      rows = await db.select().from(project).where(eq(project.organizationId, m.organizationId)).orderBy(desc(project.updatedAt));
-    } else if (roleCan(m.role, { project: ["readShared"] })) {
-      rows = (
-        await db
-          .select({ p: project })
-          .from(project)
-          .innerJoin(projectShare, eq(projectShare.projectId, project.id))
-          .where(and(eq(project.organizationId, m.organizationId), eq(projectShare.memberId, m.memberId)))
-          .orderBy(desc(project.updatedAt))
-      ).map((r) => r.p);
-    } else rows = [];
-    const counts = rows.length
-      ? await db.select({ projectId: facade.projectId }).from(facade).where(inArray(facade.projectId, rows.map((r) => r.id)))
-      : [];
-    out.push({
-      membership: m,
-      projects: rows.map((r) => ({ ...r, facadeCount: counts.filter((c) => c.projectId === r.id).length })),
-    });
-  }
-  return out;
+  if (!memberships.length) return [];
+  const sharedWithMember = db
+    .select({ one: sql`1` })
+    .from(projectShare)
+    .where(and(eq(projectShare.projectId, project.id), eq(projectShare.memberId, member.id)));
+  const rows = await db
+    .select({ project, memberId: member.id, facadeCount: count(facade.id) })
+    .from(project)
+    .innerJoin(member, and(eq(member.organizationId, project.organizationId), eq(member.userId, userId)))
+    .leftJoin(facade, eq(facade.projectId, project.id))
+    .where(or(inArray(member.role, rolesThat("readAll")), and(inArray(member.role, rolesThat("readShared")), exists(sharedWithMember))))
+    .groupBy(project.id, member.id)
+    .orderBy(desc(project.updatedAt), asc(project.id));
+  return memberships.map((m) => ({
+    membership: m,
+    projects: rows.filter((r) => r.memberId === m.memberId).map((r) => ({ ...r.project, facadeCount: r.facadeCount })),
+  }));
 }
 
 export async function facadesOf(projectId: string): Promise<FacadeRow[]> {
@@ -71,7 +69,7 @@ export async function updateProject(projectId: string, input: ProjectUpdateReque
       const existing = await tx.select({ id: facade.id }).from(facade).where(eq(facade.projectId, projectId));
       const existingIds = new Set(existing.map((f) => f.id));
       for (const f of facades) {
-        if (f.id && !existingIds.has(f.id)) throw new HttpError(400, `Façade id "${f.id}" does not belong to this project`, { errors: [{ field: "facades", message: "unknown façade id" }] });
+        if (f.id && !existingIds.has(f.id)) throw new InvalidError("facades", "unknown façade id", `Façade id "${f.id}" does not belong to this project`);
       }
       const keep = facades.flatMap((f) => (f.id ? [f.id] : []));
       await tx
@@ -90,13 +88,7 @@ export async function deleteProject(projectId: string): Promise<void> {
   await db.delete(project).where(eq(project.id, projectId));
 }
 
-export interface ShareRow {
-  memberId: string;
-  name: string;
-  email: string;
-  role: string;
-  shared: boolean;
-}
+export type ShareRow = ShareEntry;
 
 /** Members of the project's organisation who see projects only when shared, and whether they see this one. */
 export async function sharesOf(p: ProjectRow): Promise<ShareRow[]> {
@@ -116,7 +108,7 @@ export async function sharesOf(p: ProjectRow): Promise<ShareRow[]> {
 
 export async function shareProject(p: ProjectRow, memberId: string, byUserId: string): Promise<void> {
   const target = (await db.select().from(member).where(and(eq(member.id, memberId), eq(member.organizationId, p.organizationId))))[0];
-  if (!target) throw new HttpError(404, "No such member in this project's organisation", { errors: [{ field: "memberId", message: "unknown member" }] });
+  if (!target) throw new NotFoundError("No such member in this project's organisation", [fieldError("memberId", "unknown member")]);
   await db.insert(projectShare).values({ projectId: p.id, memberId, sharedById: byUserId }).onConflictDoNothing();
 }
 

@@ -1,13 +1,9 @@
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
-import { endpoint, json, readJson, requireUser } from "@/lib/server/http";
-import { requireOrgPermission } from "@/lib/server/services/access";
+import { endpoint, json } from "@/lib/server/http";
 import { createProject, projectsForUser } from "@/lib/server/services/projects";
 
-export const prerender = false;
-
 /** The caller's projects, grouped per organisation. */
-export const GET = endpoint(async ({ locals }) => {
-  const user = requireUser(locals);
+export const GET = endpoint({ auth: "user" }, async ({ user }) => {
   const groups = await projectsForUser(user.id);
   return json({
     organizations: groups.map((g) => ({
@@ -19,10 +15,10 @@ export const GET = endpoint(async ({ locals }) => {
   });
 });
 
-export const POST = endpoint(async ({ request, locals }) => {
-  const user = requireUser(locals);
-  const input = await readJson(request, ProjectCreateRequest);
-  await requireOrgPermission(user.id, input.organizationId, { project: ["create"] }, "create projects");
-  const row = await createProject(input, user.id);
-  return json({ project: row }, 201, { location: `/api/v1/projects/${row.id}` });
-});
+export const POST = endpoint(
+  { auth: { org: "organizationId", from: "body", permission: "project:create" }, body: ProjectCreateRequest },
+  async ({ user, body }) => {
+    const row = await createProject(body, user.id);
+    return json({ project: row }, 201, { location: `/api/v1/projects/${row.id}` });
+  },
+);

@@ -1,15 +1,12 @@
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
-import { endpoint, HttpError, json, parseParams } from "@/lib/server/http";
+import { endpoint, json } from "@/lib/server/http";
+import { NotFoundError } from "@/lib/server/errors";
 import { invitationSummary } from "@/lib/server/services/members";
 
-export const prerender = false;
-const Params = z.object({ id: rowId });
-
 /** What an invitation link is for (public: the id itself is the secret). */
-export const GET = endpoint(async ({ params }) => {
-  const { id } = parseParams(params, Params);
-  const inv = await invitationSummary(id);
-  if (!inv) throw new HttpError(404, "No such invitation");
+export const GET = endpoint({ auth: "anonymous", params: z.object({ id: rowId }) }, async ({ params }) => {
+  const inv = await invitationSummary(params.id);
+  if (!inv) throw new NotFoundError("No such invitation");
   return json({ invitation: inv });
 });

@@ -1,33 +1,21 @@
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
 import { ProjectUpdateRequest } from "@/lib/contracts/projects";
-import { endpoint, json, parseParams, readJson, requireUser } from "@/lib/server/http";
-import { requireProject } from "@/lib/server/services/access";
+import { endpoint, json } from "@/lib/server/http";
 import { deleteProject, facadesOf, updateProject } from "@/lib/server/services/projects";
 
-export const prerender = false;
-const Params = z.object({ id: rowId });
+const params = z.object({ id: rowId });
 
-export const GET = endpoint(async ({ params, locals }) => {
-  const user = requireUser(locals);
-  const { id } = parseParams(params, Params);
-  const { project, membership } = await requireProject(user.id, id);
-  return json({ project, facades: await facadesOf(id), role: membership.role });
-});
+export const GET = endpoint({ auth: { project: "id" }, params }, async ({ project, membership }) =>
+  json({ project, facades: await facadesOf(project.id), role: membership.role }),
+);
 
-export const PATCH = endpoint(async ({ params, request, locals }) => {
-  const user = requireUser(locals);
-  const { id } = parseParams(params, Params);
-  await requireProject(user.id, id, { project: ["update"] }, "edit projects");
-  const input = await readJson(request, ProjectUpdateRequest);
-  const project = await updateProject(id, input);
-  return json({ project, facades: await facadesOf(id) });
-});
+export const PATCH = endpoint(
+  { auth: { project: "id", permission: "project:update" }, params, body: ProjectUpdateRequest },
+  async ({ project, body }) => json({ project: await updateProject(project.id, body), facades: await facadesOf(project.id) }),
+);
 
-export const DELETE = endpoint(async ({ params, locals }) => {
-  const user = requireUser(locals);
-  const { id } = parseParams(params, Params);
-  await requireProject(user.id, id, { project: ["delete"] }, "delete projects");
-  await deleteProject(id);
+export const DELETE = endpoint({ auth: { project: "id", permission: "project:delete" }, params }, async ({ project }) => {
+  await deleteProject(project.id);
   return new Response(null, { status: 204 });
 });

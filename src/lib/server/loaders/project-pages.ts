@@ -1,0 +1,104 @@
+/** View models of the project pages (overview, edit, sun and schedules). */
+import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
+import { requireProject, type ProjectRow } from "@/lib/server/services/access";
+import { facadesOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
+
+interface PageUser {
+  id: string;
+}
+
+export interface FacadeView {
+  id: string;
+  name: string;
+  azimuthDeg: number;
+  tiltDeg: number;
+}
+
+const facadeViews = async (projectId: string): Promise<FacadeView[]> =>
+  (await facadesOf(projectId)).map((f) => ({ id: f.id, name: f.name, azimuthDeg: f.azimuthDeg, tiltDeg: f.tiltDeg }));
+
+export interface ProjectPage {
+  project: ProjectRow;
+  organizationName: string;
+  role: RoleName;
+  roleLabel: string;
+  facades: FacadeView[];
+  canEdit: boolean;
+  canDelete: boolean;
+  canShare: boolean;
+  /** Who sees the project; empty unless canShare. */
+  shares: ShareRow[];
+}
+
+/** The project overview; NotFoundError when the project is missing or not visible to the user. */
+export async function loadProjectPage(user: PageUser, projectId: string | undefined): Promise<ProjectPage> {
+  const { project, membership } = await requireProject(user.id, projectId ?? "");
+  const canShare = roleCan(membership.role, { project: ["share"] });
+  return {
+    project,
+    organizationName: membership.organizationName,
+    role: membership.role,
+    roleLabel: ROLE_LABELS[membership.role],
+    facades: await facadeViews(project.id),
+    canEdit: roleCan(membership.role, { project: ["update"] }),
+    canDelete: roleCan(membership.role, { project: ["delete"] }),
+    canShare,
+    shares: canShare ? await sharesOf(project) : [],
+  };
+}
+
+export interface ProjectEditPage {
+  organization: { id: string; name: string };
+  /** The project as the form edits it. */
+  form: {
+    id: string;
+    name: string;
+    reference: string;
+    buildingName: string;
+    siteName: string;
+    latitudeDeg: number;
+    longitudeDeg: number;
+    timeZone: string;
+    elevationM: number;
+    description: string;
+    facades: FacadeView[];
+  };
+}
+
+/** The edit form; ForbiddenError (naming the role) when the user may see but not edit the project. */
+export async function loadProjectEditPage(user: PageUser, projectId: string | undefined): Promise<ProjectEditPage> {
+  const { project: p, membership } = await requireProject(user.id, projectId ?? "", { project: ["update"] }, "edit projects");
+  return {
+    organization: { id: p.organizationId, name: membership.organizationName },
+    form: {
+      id: p.id,
+      name: p.name,
+      reference: p.reference ?? "",
+      buildingName: p.buildingName ?? "",
+      siteName: p.siteName,
+      latitudeDeg: p.latitudeDeg,
+      longitudeDeg: p.longitudeDeg,
+      timeZone: p.timeZone,
+      elevationM: p.elevationM,
+      description: p.description ?? "",
+      facades: await facadeViews(p.id),
+    },
+  };
+}
+
+export interface ProjectSunPage {
+  project: ProjectRow;
+  site: { latitudeDeg: number; longitudeDeg: number; timeZone: string; elevationM: number };
+  facades: FacadeView[];
+  year: number;
+}
+
+export async function loadProjectSunPage(user: PageUser, projectId: string | undefined, now = new Date()): Promise<ProjectSunPage> {
+  const { project: p } = await requireProject(user.id, projectId ?? "");
+  return {
+    project: p,
+    site: { latitudeDeg: p.latitudeDeg, longitudeDeg: p.longitudeDeg, timeZone: p.timeZone, elevationM: p.elevationM },
+    facades: await facadeViews(p.id),
+    year: now.getFullYear(),
+  };
+}
