@@ -22,7 +22,7 @@ import {
   profileAngleRad,
   sunlitFractionAt,
   type ShadingSpec,
-} from "@/lib/physics/external-shading";
+} from "@/lib/physics/shading";
 import { surfaceOrientationDeg } from "@/lib/physics/surface-geometry";
 import { deg, printed } from "./fixtures";
 
