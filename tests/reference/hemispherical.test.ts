@@ -83,7 +83,7 @@ describe("hemispherical glazing values", () => {
     const h = prepareGlazing([{ kind: "physical", ...pane6mm }]).hemispherical().solar;
     printed(h.T, "0.736431");
     printed(h.Rf, "0.138241");
-    printed(h.A[0]!, "0.125328");
+    printed(h.absorptanceFront[0]!, "0.125328");
   });
 
   it("4 mm low-iron pane: T_hem, R_hem, A_hem", () => {
@@ -91,7 +91,7 @@ describe("hemispherical glazing values", () => {
     const h = prepareGlazing([{ kind: "physical", ...lowIron4mm }]).hemispherical().solar;
     printed(h.T, "0.838550");
     printed(h.Rf, "0.152380");
-    printed(h.A[0]!, "0.00906953");
+    printed(h.absorptanceFront[0]!, "0.00906953");
   });
 
   it("double 6 mm + 6 mm, per polarisation: T_hem, R_hem, A1, A2", () => {
@@ -101,10 +101,10 @@ describe("hemispherical glazing values", () => {
     const h = g.hemispherical().solar;
     printed(h.T, "0.577379");
     printed(h.Rf, "0.191431");
-    printed(h.A[0]!, "0.136229");
-    printed(h.A[1]!, "0.0949614");
+    printed(h.absorptanceFront[0]!, "0.136229");
+    printed(h.absorptanceFront[1]!, "0.0949614");
     // energy balance survives the averaging (weights sum to 1)
-    expect(Math.abs(h.T + h.Rf + h.A[0]! + h.A[1]! - 1)).toBeLessThan(1e-14);
+    expect(Math.abs(h.T + h.Rf + h.absorptanceFront[0]! + h.absorptanceFront[1]! - 1)).toBeLessThan(1e-14);
     // computed once, then served from the cache
     expect(g.hemispherical()).toBe(g.hemispherical());
     // the diffuse value lies near the value at 58–60° (§5 rule of thumb; [calc F2] T(58°) = 0.739292,

@@ -72,8 +72,8 @@ describe("double glazing, two 6 mm panes", () => {
     const o = g.at(deg(60)).solar;
     printed(o.T, "0.560292");
     printed(o.Rf, "0.193315");
-    printed(o.A[0]!, "0.145683");
-    printed(o.A[1]!, "0.100710");
+    printed(o.absorptanceFront[0]!, "0.145683");
+    printed(o.absorptanceFront[1]!, "0.100710");
     const avg = prepareGlazing([spec6mm, spec6mm], { polarization: "averaged" });
     printed(avg.at(deg(60)).solar.T, "0.538000");
     expect(avg.warnings.map((w) => w.code)).toContain("averaged-polarization");
@@ -135,7 +135,7 @@ describe("triple glazing, three 6 mm panes, θ = 0", () => {
     const g = prepareGlazing([spec6mm, spec6mm, spec6mm]);
     const o = g.at(deg(0)).solar;
     printed(o.T, "0.547493");
-    printed(o.A[2]!, "0.075661");
+    printed(o.absorptanceFront[2]!, "0.075661");
     expect(g.at(deg(0)).visible).toBeNull(); // physical panes have no visible data
   });
 });

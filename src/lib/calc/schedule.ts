@@ -203,7 +203,7 @@ export function prepareGlazingTables(glazing: GlazingRequest): GlazingTables {
   const N = model.thermal.factors;
   const [tau, g] = angularTablesFromFunction((theta) => {
     const o = model.optics.at(theta).solar;
-    return [o.T, gValue(o.T, o.A, N)];
+    return [o.T, gValue(o.T, o.absorptanceFront, N)];
   }, 2);
   const h = model.optics.hemispherical().solar;
   const n0 = model.optics.at(NORMAL_INCIDENCE_RAD).solar;
@@ -211,9 +211,9 @@ export function prepareGlazingTables(glazing: GlazingRequest): GlazingTables {
     tau: tau!,
     g: g!,
     tauHem: h.T,
-    gHem: gValue(h.T, h.A, N),
+    gHem: gValue(h.T, h.absorptanceFront, N),
     tauNormal: n0.T,
-    gNormal: gValue(n0.T, n0.A, N),
+    gNormal: gValue(n0.T, n0.absorptanceFront, N),
     uValue: model.thermal.thermal.uValueWPerM2K,
     warnings: model.optics.warnings.map((w) => w.message),
   };
