@@ -23,6 +23,7 @@
  * @see ASHRAE Handbook—Fundamentals, fenestration chapter (overhang/fin shadow geometry, profile
  *   angle; from memory)
  */
+
 /**
  * Scratch buffers of the finite-device path, module-level and reused so that the hot path
  * allocates nothing. V8 boxes every double passed to or returned from a function it does not

@@ -25,7 +25,7 @@ import { computeDiffuseFactors, newBlockers, pointHorizonBand, pointViewFactors 
 
 const HALF_PI = Math.PI / 2;
 
-/** Prepared shading of one window (compute once per surface; see the module comment). */
+/** Prepared shading of one window (compute once per surface; models: beam-finite-devices.ts, diffuse-view-factors.ts). */
 export class PreparedShading {
   // Fields are `declare`d and assigned only in the constructor: with define-semantics class
   // fields they would start as `undefined`, and V8 would then keep every number boxed, which made
@@ -114,7 +114,7 @@ export class PreparedShading {
   }
 
   /**
-   * Sunlit fraction of the window for the beam, f ∈ [0, 1] (exact; method in the module comment).
+   * Sunlit fraction of the window for the beam, f ∈ [0, 1] (exact; method in beam-finite-devices.ts).
    * Hot path: no trig, no allocation, no checks (NaN input gives 0).
    * @param sn sun unit-vector component along the outward normal n (= cos θ) [-]
    * @param su component along u (the width, to the right seen from outside) [-]
