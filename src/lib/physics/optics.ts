@@ -4,7 +4,7 @@
  *
  * - Physical panes (thickness, n, α): slab model per polarisation (absorbing-pane.ts); solar only.
  * - Measured panes: uncoated ones are inverted to an equivalent slab, coated ones get the
- *   estimated angular model (measured-pane.ts); solar and, when given, visible.
+ *   estimated angular model (measured-pane/); solar and, when given, visible.
  * - Stack: net-radiation method, solved by PolarizedStackSolver (layer-stack.ts, the one solver
  *   behind glazingOpticsAt too), by default per polarisation (s and p stacks
  *   averaged at the end); "averaged" (each pane averaged first) is available as a labelled
