@@ -88,7 +88,7 @@ function maxTableError(g: PreparedGlazing): { worst: number; where: string } {
   const names = ["T", "Rf", "Rb", ...Array.from({ length: n }, (_, k) => `A${k + 1}`)];
   const pick = (th: Radians): number[] => {
     const s = g.at(th).solar;
-    return [s.T, s.Rf, s.Rb, ...s.A];
+    return [s.T, s.Rf, s.Rb, ...s.absorptanceFront];
   };
   const tables = names.map((_, j) => AngularTable.fromFunction((th) => pick(th)[j]!));
   let worst = 0;

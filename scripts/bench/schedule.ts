@@ -17,6 +17,7 @@ import {
   type SurfaceColumns,
 } from "@/lib/calc/schedule";
 import { prepareGlazingModel } from "@/lib/calc/glazing";
+import { asRadians } from "@/lib/physics/units";
 import { POST } from "@/pages/api/v1/calc/schedule";
 
 const YEAR = 2026;
@@ -118,7 +119,7 @@ export async function run(): Promise<void> {
       for (const m of models) {
         for (let i = 0; i < n; i++) {
           const c = nE * east[i]! + nN * north[i]! + nU * up[i]!;
-          floorOut[i] = up[i]! > 0 && c > 0 ? m.optics.at(Math.acos(Math.min(1, c)) as never).solar.T : 0;
+          floorOut[i] = up[i]! > 0 && c > 0 ? m.optics.at(asRadians(Math.acos(Math.min(1, c)))).solar.T : 0;
           if (up[i]! > 0 && c > 0) sunlitRows++;
         }
       }

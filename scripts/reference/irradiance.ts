@@ -86,7 +86,7 @@ export function transposition(i: TranspositionInput): Record<string, number> {
   const skyIsotropic = sky.dhi * viewSky;
   const ai = sky.dni / e0;
   const rb = Math.max(ct, 0) / Math.max(cz, 0.01745);
-  const skyHaydavies = sky.dhi * (ai * rb + (1 - ai) * viewSky);
+  const skyHayDavies = sky.dhi * (ai * rb + (1 - ai) * viewSky);
   const z = i.zenithDeg * D2R;
   const kz3 = 1.041 * z ** 3;
   const epsilon = ((sky.dhi + sky.dni) / sky.dhi + kz3) / (1 + kz3);
@@ -111,7 +111,7 @@ export function transposition(i: TranspositionInput): Record<string, number> {
     skyIsotropic,
     anisotropyIndex: ai,
     beamRatio: rb,
-    skyHaydavies,
+    skyHayDavies,
     epsilon,
     bin,
     deltaWithPrintedE0: (sky.dhi * am) / printedE0,
@@ -119,7 +119,7 @@ export function transposition(i: TranspositionInput): Record<string, number> {
     f2,
     skyPerez,
     "total-isotropic": beam + skyIsotropic + ground,
-    "total-haydavies": beam + skyHaydavies + ground,
+    "total-hay-davies": beam + skyHayDavies + ground,
     "total-perez": beam + skyPerez + ground,
   };
 }

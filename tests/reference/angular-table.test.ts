@@ -78,7 +78,7 @@ describe("accuracy against direct evaluation: ≤ 1e-5 over 0–90°, both looku
     const n = panes.length;
     const row = (t: Radians): number[] => {
       const s = g.at(t).solar;
-      return [s.T, s.Rf, s.Rb, ...s.A];
+      return [s.T, s.Rf, s.Rb, ...s.absorptanceFront];
     };
     const tables = angularTablesFromFunction(row, 3 + n);
     tables.forEach((table, j) => {

@@ -1,4 +1,4 @@
-// Reference tests for overhang/fin shading of a window (src/lib/physics/external-shading.ts).
+// Reference tests for overhang/fin shading of a window (src/lib/physics/shading/).
 //
 // Beam checks: src/lib/reference-cases/shading.ts (worked example and table), computed by
 // scripts/reference/shading.ts from the standard overhang/fin geometry [ASHRAE Handbook—Fundamentals,
@@ -22,7 +22,7 @@ import {
   profileAngleRad,
   sunlitFractionAt,
   type ShadingSpec,
-} from "@/lib/physics/external-shading";
+} from "@/lib/physics/shading";
 import { surfaceOrientationDeg } from "@/lib/physics/surface-geometry";
 import { shading as shadingCases, type ShadingInput } from "@/lib/reference-cases/shading";
 import type { ReferenceCase } from "@/lib/reference-cases/types";

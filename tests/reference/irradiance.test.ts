@@ -16,21 +16,21 @@ import {
   clearSkyAshraeTau2009,
   clearSkyIneichenPerez2002,
   DEFAULT_MONTHLY_LINKE_TURBIDITY,
-  emptyHaydaviesCoefficients,
-  emptyPerezCoefficients,
+  emptyHayDavies1980SkyCoefficients,
+  emptyPerez1990SkyCoefficients,
   extraterrestrialFactorSimple,
   extraterrestrialFactorSpencer1971,
   extraterrestrialIrradianceAshrae2009,
   extraterrestrialIrradianceSpencer1971,
   groundReflected,
   groundReflectedOnSurface,
-  haydaviesBeamRatio,
-  haydaviesSkyCoefficients,
-  haydaviesSkyDiffuse,
-  isotropicSkyDiffuse,
+  beamRatioHayDavies1980,
+  skyCoefficientsHayDavies1980,
+  skyDiffuseHayDavies1980,
+  skyDiffuseIsotropicLiuJordan1960,
   PEREZ_1990_ALL_SITES_COMPOSITE,
-  perezSkyCoefficients,
-  perezSkyDiffuse,
+  skyCoefficientsPerez1990,
+  skyDiffusePerez1990,
   prepareTranspositionSurface,
   pressureFromElevation,
   relativeAirMassKastenYoung1989,
@@ -276,35 +276,35 @@ describe("transposition: worked example (vertical south façade)", () => {
   it(isoCase.label, () => {
     expectPrinted(beamOnSurface(sky.dni, cosTheta), expectedOf(isoCase, "beam"));
     expectPrinted(groundReflected(sky.ghi, tilt, isoCase.input.albedo), expectedOf(isoCase, "ground"));
-    expectPrinted(isotropicSkyDiffuse(sky.dhi, tilt), expectedOf(isoCase, "skyIsotropic"));
+    expectPrinted(skyDiffuseIsotropicLiuJordan1960(sky.dhi, tilt), expectedOf(isoCase, "skyIsotropic"));
   });
 
   const hdCase = one<TranspositionInput>("transposition/example/hay-davies");
   it(hdCase.label, () => {
-    const hd = haydaviesSkyCoefficients(hour);
+    const hd = skyCoefficientsHayDavies1980(hour);
     expectPrinted(hd.anisotropyIndex, expectedOf(hdCase, "anisotropyIndex"));
-    expectPrinted(haydaviesBeamRatio(cosTheta, deg(hdCase.input.zenithDeg)), expectedOf(hdCase, "beamRatio"));
-    expectPrinted(haydaviesSkyDiffuse(hour, tilt, cosTheta), expectedOf(hdCase, "skyHaydavies"));
+    expectPrinted(beamRatioHayDavies1980(cosTheta, deg(hdCase.input.zenithDeg)), expectedOf(hdCase, "beamRatio"));
+    expectPrinted(skyDiffuseHayDavies1980(hour, tilt, cosTheta), expectedOf(hdCase, "skyHayDavies"));
   });
 
   const perezCase = one<TranspositionInput>("transposition/example/perez");
   it(perezCase.label, () => {
-    const p = perezSkyCoefficients(hour, am);
+    const p = skyCoefficientsPerez1990(hour, am);
     expectPrinted(p.epsilon, expectedOf(perezCase, "epsilon"));
     expect(p.bin).toBe(expectedOf(perezCase, "bin").value);
     // The printed Δ = 0.0919920 is reproduced with the printed E0 = 1321.62; the unrounded
     // E0 = 1321.6236 gives 0.0919918 (relative difference 2.7e-6 = the rounding of E0). F1, F2 and
     // the totals are insensitive to this at their printed precision.
     const delta = expectedOf(perezCase, "deltaWithPrintedE0");
-    expectPrinted(perezSkyCoefficients({ ...hour, extraterrestrialWPerM2: perezCase.input.printedExtraterrestrialWPerM2! }, am).delta, delta);
+    expectPrinted(skyCoefficientsPerez1990({ ...hour, extraterrestrialWPerM2: perezCase.input.printedExtraterrestrialWPerM2! }, am).delta, delta);
     expect(Math.abs(p.delta - delta.value) / delta.value).toBeLessThan(3e-6);
     expectPrinted(p.f1, expectedOf(perezCase, "f1"));
     expectPrinted(p.f2, expectedOf(perezCase, "f2"));
-    expectPrinted(perezSkyDiffuse(hour, am, tilt, cosTheta), expectedOf(perezCase, "skyPerez"));
+    expectPrinted(skyDiffusePerez1990(hour, am, tilt, cosTheta), expectedOf(perezCase, "skyPerez"));
   });
 
   it.each(group<TranspositionInput>("transposition/example/total-"))("$label", (c) => {
-    const model = c.expected[0]!.quantity.replace("total-", "") as "isotropic" | "haydavies" | "perez";
+    const model = c.expected[0]!.quantity.replace("total-", "") as "isotropic" | "hay-davies" | "perez";
     const r = tiltedSurfaceIrradiance({ ...hour, ghiWPerM2: sky.ghi, relativeAirMass: am, tiltRad: tilt, cosTheta, albedo: c.input.albedo, model });
     expectPrinted(r.totalWPerM2, expectedOf(c, `total-${model}`));
     expect(r.beamWPerM2 + r.skyDiffuseWPerM2 + r.groundWPerM2).toBe(r.totalWPerM2);
@@ -316,18 +316,18 @@ describe("transposition: consistency and hot path", () => {
     // sun az 150°, z 30°, south façade: cos θ = sin 30° cos 30° = 0.4330, cos z = 0.8660 → Rb = 0.5,
     // so DHI [Ai/2 + (1 − Ai)/2] = DHI/2 for every Ai (closed form). A consistency check only.
     const cosTheta = cosd(angleOfIncidenceDeg(60, 150, 180, 90));
-    expect(haydaviesBeamRatio(cosTheta, deg(30))).toBeCloseTo(0.5, 12);
+    expect(beamRatioHayDavies1980(cosTheta, deg(30))).toBeCloseTo(0.5, 12);
     fc.assert(
       fc.property(fc.double({ min: 0, max: 500, noNaN: true }), fc.double({ min: 0, max: 1000, noNaN: true }), (dhi, dni) => {
-        const hd = haydaviesSkyDiffuse({ dhiWPerM2: dhi, dniWPerM2: dni, extraterrestrialWPerM2: 1361, zenithRad: deg(30) }, deg(90), cosTheta);
-        expect(Math.abs(hd - isotropicSkyDiffuse(dhi, deg(90)))).toBeLessThan(1e-9 * (1 + dhi));
+        const hd = skyDiffuseHayDavies1980({ dhiWPerM2: dhi, dniWPerM2: dni, extraterrestrialWPerM2: 1361, zenithRad: deg(30) }, deg(90), cosTheta);
+        expect(Math.abs(hd - skyDiffuseIsotropicLiuJordan1960(dhi, deg(90)))).toBeLessThan(1e-9 * (1 + dhi));
       }),
     );
   });
 
   it("per-surface-hour forms equal the scalar forms (property, random skies and surfaces)", () => {
-    const perezOut = emptyPerezCoefficients();
-    const hdOut = emptyHaydaviesCoefficients();
+    const perezOut = emptyPerez1990SkyCoefficients();
+    const hdOut = emptyHayDavies1980SkyCoefficients();
     fc.assert(
       fc.property(
         fc.double({ min: 0, max: 89.5, noNaN: true }),
@@ -341,12 +341,12 @@ describe("transposition: consistency and hot path", () => {
           const am = relativeAirMassKastenYoung1989(zDeg);
           const surface = prepareTranspositionSurface(deg(tiltDeg), albedo);
           const tol = 1e-9 * (1 + dhi);
-          const fastP = skyDiffuseFromCoefficients(perezSkyCoefficients(hour, am, perezOut), surface, cosTheta);
-          expect(Math.abs(fastP - perezSkyDiffuse(hour, am, deg(tiltDeg), cosTheta))).toBeLessThan(tol);
-          const fastH = skyDiffuseFromCoefficients(haydaviesSkyCoefficients(hour, hdOut), surface, cosTheta);
-          expect(Math.abs(fastH - haydaviesSkyDiffuse(hour, deg(tiltDeg), cosTheta))).toBeLessThan(tol);
+          const fastP = skyDiffuseFromCoefficients(skyCoefficientsPerez1990(hour, am, perezOut), surface, cosTheta);
+          expect(Math.abs(fastP - skyDiffusePerez1990(hour, am, deg(tiltDeg), cosTheta))).toBeLessThan(tol);
+          const fastH = skyDiffuseFromCoefficients(skyCoefficientsHayDavies1980(hour, hdOut), surface, cosTheta);
+          expect(Math.abs(fastH - skyDiffuseHayDavies1980(hour, deg(tiltDeg), cosTheta))).toBeLessThan(tol);
           const iso = { isotropicWPerM2: dhi, circumsolarPerCos: 0, horizonWPerM2: 0 };
-          expect(Math.abs(skyDiffuseFromCoefficients(iso, surface, cosTheta) - isotropicSkyDiffuse(dhi, deg(tiltDeg)))).toBeLessThan(tol);
+          expect(Math.abs(skyDiffuseFromCoefficients(iso, surface, cosTheta) - skyDiffuseIsotropicLiuJordan1960(dhi, deg(tiltDeg)))).toBeLessThan(tol);
           expect(Math.abs(groundReflectedOnSurface(dhi + dni, surface) - groundReflected(dhi + dni, deg(tiltDeg), albedo))).toBeLessThan(tol);
         },
       ),
@@ -354,30 +354,30 @@ describe("transposition: consistency and hot path", () => {
   });
 
   it("the `out` records are filled in place (no allocation per hour)", () => {
-    const out = emptyPerezCoefficients();
+    const out = emptyPerez1990SkyCoefficients();
     const hour = { dhiWPerM2: 100, dniWPerM2: 600, extraterrestrialWPerM2: 1361, zenithRad: deg(40) };
-    expect(perezSkyCoefficients(hour, 1.3, out)).toBe(out);
-    const hd = emptyHaydaviesCoefficients();
-    expect(haydaviesSkyCoefficients(hour, hd)).toBe(hd);
+    expect(skyCoefficientsPerez1990(hour, 1.3, out)).toBe(out);
+    const hd = emptyHayDavies1980SkyCoefficients();
+    expect(skyCoefficientsHayDavies1980(hour, hd)).toBe(hd);
   });
 
   it("horizontal surface: every model gives DHI (closed form: cos θ = cos z, so Rb = 1, and the Perez terms reduce to DHI)", () => {
     // Perez on a horizontal plane: (1 − F1) + F1 cos z / max(cos 85°, cos z) + 0 = 1 for z ≤ 85°.
     const hour = { dhiWPerM2: 120, dniWPerM2: 700, extraterrestrialWPerM2: 1361, zenithRad: deg(35) };
-    expect(haydaviesSkyDiffuse(hour, 0, cosd(35))).toBeCloseTo(120, 10);
-    expect(perezSkyDiffuse(hour, relativeAirMassKastenYoung1989(35), 0, cosd(35))).toBeCloseTo(120, 10);
-    expect(isotropicSkyDiffuse(120, 0)).toBe(120);
+    expect(skyDiffuseHayDavies1980(hour, 0, cosd(35))).toBeCloseTo(120, 10);
+    expect(skyDiffusePerez1990(hour, relativeAirMassKastenYoung1989(35), 0, cosd(35))).toBeCloseTo(120, 10);
+    expect(skyDiffuseIsotropicLiuJordan1960(120, 0)).toBe(120);
     expect(groundReflected(800, 0)).toBe(0);
   });
 
   it("Perez: bins follow numpy.digitize on the published edges (an edge value goes to the upper bin); DHI = 0 gives 0", () => {
     // z = 0 → ε = (DHI + DNI)/DHI exactly; 106.5/100 = 1.065 (edge of bins 1|2), 6.2 edge of 7|8.
-    const at = (dni: number) => perezSkyCoefficients({ dhiWPerM2: 100, dniWPerM2: dni, extraterrestrialWPerM2: 1361, zenithRad: 0 }, 1).bin;
+    const at = (dni: number) => skyCoefficientsPerez1990({ dhiWPerM2: 100, dniWPerM2: dni, extraterrestrialWPerM2: 1361, zenithRad: 0 }, 1).bin;
     expect(at(0)).toBe(1);
     expect(at(6.5)).toBe(2);
     expect(at(520)).toBe(8);
     expect(at(519)).toBe(7);
-    const none = perezSkyCoefficients({ dhiWPerM2: 0, dniWPerM2: 800, extraterrestrialWPerM2: 1361, zenithRad: deg(30) }, 1.15);
+    const none = skyCoefficientsPerez1990({ dhiWPerM2: 0, dniWPerM2: 800, extraterrestrialWPerM2: 1361, zenithRad: deg(30) }, 1.15);
     expect([none.isotropicWPerM2, none.circumsolarPerCos, none.horizonWPerM2]).toEqual([0, 0, 0]);
   });
 
@@ -389,10 +389,10 @@ describe("transposition: consistency and hot path", () => {
 
   it("rejects bad inputs naming the quantity", () => {
     const hour = { dhiWPerM2: 100, dniWPerM2: 600, extraterrestrialWPerM2: 1361, zenithRad: deg(40) };
-    expect(() => perezSkyCoefficients({ ...hour, dhiWPerM2: -1 }, 1.3)).toThrow(/DHI/);
-    expect(() => perezSkyCoefficients(hour, 0)).toThrow(/relative air mass/);
-    expect(() => haydaviesSkyCoefficients({ ...hour, dniWPerM2: Number.NaN })).toThrow(/DNI/);
-    expect(() => haydaviesSkyCoefficients({ ...hour, zenithRad: 4 })).toThrow(/solar zenith/);
+    expect(() => skyCoefficientsPerez1990({ ...hour, dhiWPerM2: -1 }, 1.3)).toThrow(/DHI/);
+    expect(() => skyCoefficientsPerez1990(hour, 0)).toThrow(/relative air mass/);
+    expect(() => skyCoefficientsHayDavies1980({ ...hour, dniWPerM2: Number.NaN })).toThrow(/DNI/);
+    expect(() => skyCoefficientsHayDavies1980({ ...hour, zenithRad: 4 })).toThrow(/solar zenith/);
     expect(() => prepareTranspositionSurface(deg(200))).toThrow(/surface tilt/);
     expect(() => prepareTranspositionSurface(deg(90), 1.5)).toThrow(/ground albedo/);
     expect(() => tiltedSurfaceIrradiance({ ...hour, ghiWPerM2: 500, tiltRad: deg(90), cosTheta: 0.5, model: "perez" })).toThrow(/relative air mass/);

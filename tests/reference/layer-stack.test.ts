@@ -97,7 +97,7 @@ describe("double glazing, two 6 mm panes", () => {
     const g = prepareGlazing([spec6mm, spec6mm]);
     expect(g.polarization).toBe("per-polarization");
     const o = g.at(deg(60)).solar;
-    expectCase({ T: o.T, Rf: o.Rf, A1: o.A[0]!, A2: o.A[1]! }, perPol);
+    expectCase({ T: o.T, Rf: o.Rf, A1: o.absorptanceFront[0]!, A2: o.absorptanceFront[1]! }, perPol);
     const avg = prepareGlazing([spec6mm, spec6mm], { polarization: "averaged" });
     expectValue(avg.at(deg(60)).solar.T, expectedOf(averaged, "T"), averaged.id);
     expect(avg.warnings.map((w) => w.code)).toContain("averaged-polarization");
@@ -155,7 +155,7 @@ describe("triple glazing, three 6 mm panes, θ = 0", () => {
     const g = prepareGlazing([spec6mm, spec6mm, spec6mm]);
     const o = g.at(deg(0)).solar;
     expectValue(o.T, expectedOf(triple0Case, "T"), triple0Case.id);
-    expectValue(o.A[2]!, expectedOf(triple0Case, "A3"), triple0Case.id);
+    expectValue(o.absorptanceFront[2]!, expectedOf(triple0Case, "A3"), triple0Case.id);
     expect(g.at(deg(0)).visible).toBeNull(); // physical panes have no visible data
   });
 });

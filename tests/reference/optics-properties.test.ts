@@ -14,7 +14,8 @@ import { describe, expect, it } from "vitest";
 import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import { fresnelInterface } from "@/lib/physics/fresnel";
 import type { MeasuredValues } from "@/lib/physics/measured-pane";
-import { prepareGlazing, type BandOptics, type PaneSpec } from "@/lib/physics/optics";
+import type { StackOptics } from "@/lib/physics/layer-stack";
+import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
 import { asRadians, type Radians } from "@/lib/physics/units";
 import { clear6mmSpec, coated6mmSpec } from "./fixtures";
 
@@ -67,10 +68,10 @@ const turned = (p: PaneSpec): PaneSpec =>
 
 const sum = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);
 
-function expectBalanced(b: BandOptics): void {
-  expect(Math.abs(b.T + b.Rf + sum(b.A) - 1)).toBeLessThan(1e-12);
-  expect(Math.abs(b.T + b.Rb + sum(b.Aback) - 1)).toBeLessThan(1e-12);
-  for (const v of [b.T, b.Rf, b.Rb, ...b.A, ...b.Aback]) {
+function expectBalanced(b: StackOptics): void {
+  expect(Math.abs(b.T + b.Rf + sum(b.absorptanceFront) - 1)).toBeLessThan(1e-12);
+  expect(Math.abs(b.T + b.Rb + sum(b.absorptanceBack) - 1)).toBeLessThan(1e-12);
+  for (const v of [b.T, b.Rf, b.Rb, ...b.absorptanceFront, ...b.absorptanceBack]) {
     expect(Number.isFinite(v)).toBe(true);
     expect(v).toBeGreaterThanOrEqual(0);
     expect(v).toBeLessThanOrEqual(1 + 1e-15);
@@ -97,7 +98,7 @@ describe("properties of random glazings (1–6 panes, physical, uncoated measure
         expect(Math.abs(a.T - b.T)).toBeLessThan(1e-12);
         expect(Math.abs(a.Rb - b.Rf)).toBeLessThan(1e-12);
         expect(Math.abs(a.Rf - b.Rb)).toBeLessThan(1e-12);
-        a.Aback.forEach((x, k) => expect(Math.abs(x - b.A[panes.length - 1 - k]!)).toBeLessThan(1e-12));
+        a.absorptanceBack.forEach((x, k) => expect(Math.abs(x - b.absorptanceFront[panes.length - 1 - k]!)).toBeLessThan(1e-12));
       }),
       { numRuns: 200 },
     );
@@ -212,8 +213,8 @@ describe("glazing façade", () => {
   it("returns fresh arrays from at(), frozen ones from hemispherical()", () => {
     const g = prepareGlazing([clear, clear]);
     const a = g.at(asRadians(0.5));
-    (a.solar.A as number[])[0] = 99;
-    expect(g.at(asRadians(0.5)).solar.A[0]).not.toBe(99);
-    expect(Object.isFrozen(g.hemispherical().solar.A)).toBe(true);
+    (a.solar.absorptanceFront as number[])[0] = 99;
+    expect(g.at(asRadians(0.5)).solar.absorptanceFront[0]).not.toBe(99);
+    expect(Object.isFrozen(g.hemispherical().solar.absorptanceFront)).toBe(true);
   });
 });

@@ -18,7 +18,7 @@ import {
 } from "@/lib/calc/schedule";
 import { scheduleResponse } from "@/lib/calc/schedule-response";
 import { calculateGlazing } from "@/lib/calc/glazing";
-import { emptyPerezCoefficients, emptyHaydaviesCoefficients, perezSkyCoefficients, haydaviesSkyCoefficients } from "@/lib/physics/irradiance";
+import { emptyPerez1990SkyCoefficients, emptyHayDavies1980SkyCoefficients, skyCoefficientsPerez1990, skyCoefficientsHayDavies1980 } from "@/lib/physics/irradiance";
 
 const RAD = Math.PI / 180;
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;
@@ -35,8 +35,8 @@ function exampleSite(model: "isotropic" | "hay-davies" | "perez", zenithDeg = 40
     model === "isotropic"
       ? { isotropicWPerM2: dhi, circumsolarPerCos: 0, horizonWPerM2: 0 }
       : model === "perez"
-        ? perezSkyCoefficients(hour, am, emptyPerezCoefficients())
-        : haydaviesSkyCoefficients(hour, emptyHaydaviesCoefficients());
+        ? skyCoefficientsPerez1990(hour, am, emptyPerez1990SkyCoefficients())
+        : skyCoefficientsHayDavies1980(hour, emptyHayDavies1980SkyCoefficients());
   const f = (x: number) => Float64Array.of(x);
   return {
     timeline: { length: 1 } as never,

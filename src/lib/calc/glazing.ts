@@ -78,8 +78,8 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
     solarTransmittance: o.solar.T,
     solarReflectanceFront: o.solar.Rf,
     solarReflectanceBack: o.solar.Rb,
-    layerAbsorptance: [...o.solar.A],
-    gValue: gValue(o.solar.T, o.solar.A, N),
+    layerAbsorptance: [...o.solar.absorptanceFront],
+    gValue: gValue(o.solar.T, o.solar.absorptanceFront, N),
     visibleTransmittance: o.visible?.T ?? null,
     visibleReflectanceFront: o.visible?.Rf ?? null,
     visibleReflectanceBack: o.visible?.Rb ?? null,
@@ -91,7 +91,7 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
   const u = model.thermal.thermal;
 
   const warnings = model.optics.warnings.map((w) => w.message);
-  normal.solar.A.forEach((a, k) => {
+  normal.solar.absorptanceFront.forEach((a, k) => {
     if (a > THERMAL_STRESS_ABSORPTANCE) {
       warnings.push(
         `Pane ${k + 1} absorbs ${(a * 100).toFixed(0)} % of the sun at normal incidence: highly absorbing glass that is partly shaded can break from thermal stress. Have a thermal-safety assessment made (heat-strengthened or toughened glass may be needed).`,

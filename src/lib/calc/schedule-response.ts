@@ -5,8 +5,8 @@
 import type { ScheduleRequest, ScheduleResponse, ScheduleRow } from "@/lib/contracts/schedule";
 import { computeSchedule, type ScheduleComputation } from "./schedule";
 import { scheduleTotals } from "./schedule-totals";
+import { DEG_PER_RAD } from "@/lib/physics/units";
 
-const DEG = 180 / Math.PI;
 const r3 = (x: number) => Math.round(x * 1e3) / 1e3;
 const r6 = (x: number) => Math.round(x * 1e6) / 1e6;
 const r2 = (x: number) => Math.round(x * 100) / 100;
@@ -36,9 +36,9 @@ function rowsOf(c: ScheduleComputation, k: number, isoTimes: string[]): Schedule
     const cos = col.cosIncidence[i]!;
     const row: ScheduleRow = {
       time: isoTimes[i]!,
-      sunAltitudeDeg: r3(sun.altitudeRad[i]! * DEG),
-      sunAzimuthDeg: r3(sun.azimuthRad[i]! * DEG),
-      incidenceDeg: r3(Math.acos(cos > 1 ? 1 : cos < -1 ? -1 : cos) * DEG),
+      sunAltitudeDeg: r3(sun.altitudeRad[i]! * DEG_PER_RAD),
+      sunAzimuthDeg: r3(sun.azimuthRad[i]! * DEG_PER_RAD),
+      incidenceDeg: r3(Math.acos(cos > 1 ? 1 : cos < -1 ? -1 : cos) * DEG_PER_RAD),
       beamTransmittance: r6(col.beamTransmittance[i]!),
       sunlitFraction: r6(col.sunlitFraction[i]!),
       beamIncidentWm2: r2(col.beamIncidentWm2[i]!),

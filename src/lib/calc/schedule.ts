@@ -25,29 +25,26 @@ import { gValue } from "@/lib/physics/g-value";
 import { angularTablesFromFunction, type AngularTable } from "@/lib/physics/angular-table";
 import { sunTrack, type SunTrack } from "@/lib/physics/sun-position";
 import { surfaceFrame, surfaceOrientationDeg, type SurfaceFrame } from "@/lib/physics/surface-geometry";
-import { PreparedShading } from "@/lib/physics/external-shading";
+import { PreparedShading } from "@/lib/physics/shading";
 import {
   DEFAULT_MONTHLY_LINKE_TURBIDITY,
   clearSkyIneichenPerez2002,
-  emptyHaydaviesCoefficients,
-  emptyPerezCoefficients,
+  emptySkyCoefficientsWorkspace,
   extraterrestrialIrradianceSpencer1971,
-  haydaviesSkyCoefficients,
-  perezSkyCoefficients,
   pressureFromElevation,
   prepareTranspositionSurface,
   relativeAirMassKastenYoung1989,
+  skyDiffuseCoefficients,
   STANDARD_PRESSURE_PA,
+  type SkyDiffuseModel,
 } from "@/lib/physics/irradiance";
+import { DEG_PER_RAD, NORMAL_INCIDENCE_RAD, RAD_PER_DEG } from "@/lib/physics/units";
 import { localTimeline, type Timeline } from "@/lib/time/local-timeline";
 
-const RAD = Math.PI / 180;
 /** Gauss–Legendre points per window axis for the diffuse view factors of shading devices. */
 export const DIFFUSE_QUADRATURE_POINTS = 8;
 /** Kasten–Young air mass at the horizon, used for twilight rows that carry measured diffuse light. */
 const AIR_MASS_AT_HORIZON = 37.919608;
-
-export type SkyModel = "perez" | "hay-davies" | "isotropic";
 
 export interface SiteInput {
   latitudeDeg: number;
@@ -57,7 +54,7 @@ export interface SiteInput {
 }
 
 export interface SkyInput {
-  model: SkyModel;
+  model: SkyDiffuseModel;
   /** One value or 12 monthly values (January first); default a generic monthly set. */
   linkeTurbidity?: number | readonly number[];
   albedo: number;
@@ -82,7 +79,7 @@ export interface SiteSeries {
   skyCirc: Float64Array;
   skyHor: Float64Array;
   albedo: number;
-  model: SkyModel;
+  model: SkyDiffuseModel;
   source: "clear-sky" | "weather";
   warnings: string[];
 }
@@ -155,7 +152,7 @@ export function prepareSite(
       }
       const cz = sun.up[i]!;
       if (cz <= 0) continue;
-      const am = relativeAirMassKastenYoung1989(Math.min(90, sun.zenithRad[i]! / RAD));
+      const am = relativeAirMassKastenYoung1989(Math.min(90, sun.zenithRad[i]! * DEG_PER_RAD));
       const h = clearSkyIneichenPerez2002({ cosZenith: cz, airMassAbsolute: am * pressureRatio, linkeTurbidity: tl, elevationM: site.elevationM, extraterrestrialWPerM2: e0 });
       ghi[i] = h.ghi;
       dni[i] = h.dni;
@@ -166,27 +163,21 @@ export function prepareSite(
   const skyIso = new Float64Array(n);
   const skyCirc = new Float64Array(n);
   const skyHor = new Float64Array(n);
-  const perez = emptyPerezCoefficients();
-  const hay = emptyHaydaviesCoefficients();
+  const workspace = emptySkyCoefficientsWorkspace();
   let dayIdx = -1;
   let e0 = 0;
   for (let i = 0; i < n; i++) {
     const d = dhi[i]!;
     if (d <= 0) continue;
-    if (sky.model === "isotropic") {
-      skyIso[i] = d;
-      continue;
-    }
     if (timeline.dayIndex[i] !== dayIdx) {
       dayIdx = timeline.dayIndex[i]!;
       e0 = extraterrestrialIrradianceSpencer1971(timeline.days[dayIdx]!.dayOfYear);
     }
     const zenithRad = Math.min(Math.PI, Math.max(0, sun.zenithRad[i]!));
-    const hour = { dhiWPerM2: d, dniWPerM2: sun.up[i]! > 0 ? dni[i]! : 0, extraterrestrialWPerM2: e0, zenithRad };
-    const c =
-      sky.model === "perez"
-        ? perezSkyCoefficients(hour, zenithRad < Math.PI / 2 ? relativeAirMassKastenYoung1989(zenithRad / RAD) : AIR_MASS_AT_HORIZON, perez)
-        : haydaviesSkyCoefficients(hour, hay);
+    const relativeAirMass =
+      sky.model !== "perez" ? undefined : zenithRad < Math.PI / 2 ? relativeAirMassKastenYoung1989(zenithRad * DEG_PER_RAD) : AIR_MASS_AT_HORIZON;
+    const hour = { dhiWPerM2: d, dniWPerM2: sun.up[i]! > 0 ? dni[i]! : 0, extraterrestrialWPerM2: e0, zenithRad, relativeAirMass };
+    const c = skyDiffuseCoefficients(sky.model, hour, workspace);
     skyIso[i] = c.isotropicWPerM2;
     skyCirc[i] = c.circumsolarPerCos;
     skyHor[i] = c.horizonWPerM2;
@@ -212,17 +203,17 @@ export function prepareGlazingTables(glazing: GlazingRequest): GlazingTables {
   const N = model.thermal.factors;
   const [tau, g] = angularTablesFromFunction((theta) => {
     const o = model.optics.at(theta).solar;
-    return [o.T, gValue(o.T, o.A, N)];
+    return [o.T, gValue(o.T, o.absorptanceFront, N)];
   }, 2);
   const h = model.optics.hemispherical().solar;
-  const n0 = model.optics.at(0 as never).solar;
+  const n0 = model.optics.at(NORMAL_INCIDENCE_RAD).solar;
   return {
     tau: tau!,
     g: g!,
     tauHem: h.T,
-    gHem: gValue(h.T, h.A, N),
+    gHem: gValue(h.T, h.absorptanceFront, N),
     tauNormal: n0.T,
-    gNormal: gValue(n0.T, n0.A, N),
+    gNormal: gValue(n0.T, n0.absorptanceFront, N),
     uValue: model.thermal.thermal.uValueWPerM2K,
     warnings: model.optics.warnings.map((w) => w.message),
   };
@@ -276,7 +267,7 @@ export function prepareSurface(s: SurfaceGeometryInput, albedo: number, shadingC
         ? { depthM: sh.overhang.depthM, gapAboveHeadM: sh.overhang.gapAboveM, extendLeftM: sh.overhang.extensionLeftM, extendRightM: sh.overhang.extensionRightM }
         : undefined,
       fins: sh.fins ? { depthM: sh.fins.depthM, gapFromJambM: sh.fins.gapM } : undefined,
-      horizonAngleRad: (sh.horizonDeg ?? 0) * RAD,
+      horizonAngleRad: (sh.horizonDeg ?? 0) * RAD_PER_DEG,
       // 8 × 8 Gauss points over the window: within 2e-6 of 16 × 16 on our test windows, a quarter of the work.
       diffuseQuadraturePoints: DIFFUSE_QUADRATURE_POINTS,
     });

@@ -178,7 +178,12 @@ export function solveStackInto(n: number, ws: StackWorkspace, out: Float64Array,
   }
 }
 
-function toStackOptics(n: number, out: Float64Array): StackOptics {
+/**
+ * Reads a solve result (layout of {@link solveStackInto}, offset 0) into a {@link StackOptics}
+ * with fresh absorptance arrays.
+ * @param n number of layers; @param out result buffer [-]
+ */
+export function stackOpticsFromResult(n: number, out: Float64Array): StackOptics {
   const absorptanceFront: number[] = new Array<number>(n);
   const absorptanceBack: number[] = new Array<number>(n);
   for (let k = 0; k < n; k++) {
@@ -188,9 +193,17 @@ function toStackOptics(n: number, out: Float64Array): StackOptics {
   return { T: out[0]!, Rf: out[1]!, Rb: out[2]!, absorptanceFront, absorptanceBack };
 }
 
-function checkLayerCount(n: number): void {
+/**
+ * Checks a layer count: an integer in 1..{@link MAX_LAYERS}.
+ * @param n number of layers (or panes)
+ * @param counted "layers" (a stack of layers, the default) or "panes" (a glazing), for the message
+ * @throws RangeError "number of layers must be 1..6" or "a glazing has 1..6 panes"
+ */
+export function checkLayerCount(n: number, counted: "layers" | "panes" = "layers"): void {
   if (!Number.isInteger(n) || n < 1 || n > MAX_LAYERS) {
-    throw new RangeError(`number of layers must be 1..${MAX_LAYERS}; got ${n}`);
+    throw new RangeError(
+      counted === "panes" ? `a glazing has 1..${MAX_LAYERS} panes; got ${n}` : `number of layers must be 1..${MAX_LAYERS}; got ${n}`,
+    );
   }
 }
 
@@ -214,7 +227,7 @@ export function combineLayers(layers: readonly LayerOptics[]): StackOptics {
   });
   const out = new Float64Array(stackResultLength(n));
   solveStackInto(n, ws, out);
-  return toStackOptics(n, out);
+  return stackOpticsFromResult(n, out);
 }
 
 /**
@@ -229,17 +242,93 @@ export function combineLayers(layers: readonly LayerOptics[]): StackOptics {
  */
 export type PolarizationRoute = "per-polarization" | "averaged";
 
+/**
+ * Checks a polarisation route.
+ * @throws RangeError naming "polarization" for anything but "per-polarization" or "averaged"
+ */
+export function checkPolarizationRoute(route: PolarizationRoute): PolarizationRoute {
+  if (route !== "per-polarization" && route !== "averaged") {
+    throw new RangeError(`polarization must be "per-polarization" or "averaged"; got ${String(route)}`);
+  }
+  return route;
+}
+
+/**
+ * Net-radiation solve of a stack of polarised layers along one {@link PolarizationRoute}, with
+ * reusable buffers (no allocation per solve, no input checks: the caller has checked the layer
+ * count, the route and the layers). "per-polarization": the stack is solved for s and for p and
+ * the two results averaged; "averaged": each layer's s and p values are averaged first and the
+ * stack is solved once.
+ * @see EN 410:2011 §5; ISO 9050:2003 §4 (from memory); Rubin 1982
+ */
+export class PolarizedStackSolver {
+  private readonly ws = new StackWorkspace();
+  private readonly outS: Float64Array;
+  private readonly outP: Float64Array;
+
+  /**
+   * @param layerCount number of layers n, 1..6 (checked by the caller)
+   * @param route polarisation route (checked by the caller)
+   */
+  constructor(
+    readonly layerCount: number,
+    readonly route: PolarizationRoute,
+  ) {
+    this.outS = new Float64Array(stackResultLength(layerCount));
+    this.outP = new Float64Array(stackResultLength(layerCount));
+  }
+
+  /**
+   * Solves the stack.
+   * @param layers s/p optics of each layer at the angle of interest [-], outermost first, n entries
+   * @returns a buffer (reused by the next call) with the s/p average in the layout of
+   *   {@link solveStackInto}: T, Rf, Rb, A_front[0..n), A_back[0..n) [-]
+   */
+  solve(layers: readonly PolarizedLayerOptics[]): Float64Array {
+    const n = this.layerCount;
+    const { ws, outS, outP } = this;
+    if (this.route === "averaged") {
+      for (let k = 0; k < n; k++) {
+        const l = layers[k]!;
+        ws.T[k] = 0.5 * (l.s.T + l.p.T);
+        ws.Rf[k] = 0.5 * (l.s.Rf + l.p.Rf);
+        ws.Rb[k] = 0.5 * (l.s.Rb + l.p.Rb);
+      }
+      solveStackInto(n, ws, outS);
+      return outS;
+    }
+    for (let k = 0; k < n; k++) {
+      const l = layers[k]!.s;
+      ws.T[k] = l.T;
+      ws.Rf[k] = l.Rf;
+      ws.Rb[k] = l.Rb;
+    }
+    solveStackInto(n, ws, outS);
+    for (let k = 0; k < n; k++) {
+      const l = layers[k]!.p;
+      ws.T[k] = l.T;
+      ws.Rf[k] = l.Rf;
+      ws.Rb[k] = l.Rb;
+    }
+    solveStackInto(n, ws, outP);
+    for (let i = 0; i < outS.length; i++) outS[i] = 0.5 * (outS[i]! + outP[i]!);
+    return outS;
+  }
+}
+
 /** Gives a layer's s/p optics at an angle of incidence in air [rad]. */
 export type PolarizedLayerSource = (thetaRad: Radians) => PolarizedLayerOptics;
 
 /**
- * Optics of a glazing of parallel layers at one angle of incidence. Gaps are air or gas with
- * n = 1, so every layer sees the same external angle θ (angle of incidence in air on the outer face).
+ * Optics of a glazing of parallel layers at one angle of incidence (one-off evaluation; for
+ * repeated evaluation prepare the glazing with prepareGlazing in optics.ts, which uses the same
+ * {@link PolarizedStackSolver}). Gaps are air or gas with n = 1, so every layer sees the same
+ * external angle θ (angle of incidence in air on the outer face).
  * @param panes layer sources, outermost first, 1..6
  * @param thetaRad angle of incidence in air [rad], in [0, π/2]
  * @param options.polarization route, default "per-polarization" (see {@link PolarizationRoute})
  * @returns stack optics [-], averaged over s and p
- * @throws RangeError for bad angle, layer count or layer values
+ * @throws RangeError for bad angle, layer count, route or layer values
  * @see EN 410:2011 §5; ISO 9050:2003 §4 (from memory); Rubin 1982
  */
 export function glazingOpticsAt(
@@ -252,19 +341,12 @@ export function glazingOpticsAt(
   checkIncidenceAngleRad(thetaRad);
   const route = options.polarization ?? "per-polarization";
   const layers = panes.map((source) => source(thetaRad));
+  checkPolarizationRoute(route);
   if (route === "averaged") {
-    return combineLayers(
-      layers.map((l) => ({ T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) })),
-    );
+    layers.forEach((l, k) => checkLayer({ T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) }, k));
+  } else {
+    layers.forEach((l, k) => checkLayer(l.s, k));
+    layers.forEach((l, k) => checkLayer(l.p, k));
   }
-  if (route !== "per-polarization") throw new RangeError(`unknown polarization route: ${String(route)}`);
-  const s = combineLayers(layers.map((l) => l.s));
-  const p = combineLayers(layers.map((l) => l.p));
-  return {
-    T: 0.5 * (s.T + p.T),
-    Rf: 0.5 * (s.Rf + p.Rf),
-    Rb: 0.5 * (s.Rb + p.Rb),
-    absorptanceFront: s.absorptanceFront.map((a, k) => 0.5 * (a + p.absorptanceFront[k]!)),
-    absorptanceBack: s.absorptanceBack.map((a, k) => 0.5 * (a + p.absorptanceBack[k]!)),
-  };
+  return stackOpticsFromResult(n, new PolarizedStackSolver(n, route).solve(layers));
 }

@@ -4,8 +4,9 @@
  *
  * - Physical panes (thickness, n, α): slab model per polarisation (absorbing-pane.ts); solar only.
  * - Measured panes: uncoated ones are inverted to an equivalent slab, coated ones get the
- *   estimated angular model (measured-pane.ts); solar and, when given, visible.
- * - Stack: net-radiation method (layer-stack.ts), by default per polarisation (s and p stacks
+ *   estimated angular model (measured-pane/); solar and, when given, visible.
+ * - Stack: net-radiation method, solved by PolarizedStackSolver (layer-stack.ts, the one solver
+ *   behind glazingOpticsAt too), by default per polarisation (s and p stacks
  *   averaged at the end); "averaged" (each pane averaged first) is available as a labelled
  *   simplification.
  * - Hemispherical values integrate the whole stack's T, R and A over the hemisphere with the
@@ -17,12 +18,14 @@ import { absorbingPaneOpticsUnchecked, checkAbsorbingPane, type AbsorbingPaneSpe
 import { DEFAULT_HEMISPHERICAL_NODES, hemisphericalQuadrature } from "./hemispherical";
 import {
   checkLayer,
-  MAX_LAYERS,
-  solveStackInto,
+  checkLayerCount,
+  checkPolarizationRoute,
+  PolarizedStackSolver,
+  stackOpticsFromResult,
   stackResultLength,
-  StackWorkspace,
   type PolarizationRoute,
   type PolarizedLayerOptics,
+  type StackOptics,
 } from "./layer-stack";
 import {
   measuredBandAtUnchecked,
@@ -32,7 +35,7 @@ import {
   type MeasuredBandModel,
   type MeasuredValues,
 } from "./measured-pane";
-import { checkIncidenceAngleRad, type Radians } from "./units";
+import { checkIncidenceAngleRad, NORMAL_INCIDENCE_RAD, type Radians } from "./units";
 
 /** One pane of a glazing, SI units; "f" faces outdoors. */
 export type PaneSpec =
@@ -55,24 +58,11 @@ export type PaneSpec =
       readonly visible?: MeasuredValues;
     };
 
-/** Optics of the glazing in one band [-]; index 0 of the lists is the outermost pane. */
-export interface BandOptics {
-  /** transmittance */
-  readonly T: number;
-  /** reflectance for radiation from outdoors */
-  readonly Rf: number;
-  /** reflectance for radiation from indoors */
-  readonly Rb: number;
-  /** absorptance of each pane for radiation from outdoors; T + Rf + ΣA = 1 */
-  readonly A: readonly number[];
-  /** absorptance of each pane for radiation from indoors; T + Rb + ΣAback = 1 */
-  readonly Aback: readonly number[];
-}
-
 /** Glazing optics: solar always; visible only when every pane has measured visible values. */
 export interface GlazingOptics {
-  readonly solar: BandOptics;
-  readonly visible: BandOptics | null;
+  /** T, Rf, Rb and per-pane absorptances from outdoors and from indoors (index 0 = outermost pane) */
+  readonly solar: StackOptics;
+  readonly visible: StackOptics | null;
 }
 
 /** Something the user should know about how the values were obtained. */
@@ -116,7 +106,7 @@ export interface PreparedGlazing {
    * @throws RangeError for an angle out of range
    */
   at(thetaRad: Radians): GlazingOptics;
-  /** Hemispherical (diffuse, isotropic radiance) averages of T, Rf, Rb and each A; computed once. */
+  /** Hemispherical (diffuse, isotropic radiance) averages of T, Rf, Rb and each absorptance; computed once. */
   hemispherical(): GlazingOptics;
 }
 
@@ -141,69 +131,32 @@ function paneKey(spec: PaneSpec): string {
         (spec.visible ? `${spec.visible.T}|${spec.visible.Rf}|${spec.visible.Rb}` : "-");
 }
 
-/** One band of the glazing: unique layer models, pane → model map, buffers. */
+/** One band of the glazing: unique layer models, pane → model map, and the stack solver. */
 class BandSolver {
-  private readonly ws = new StackWorkspace();
-  private readonly outS: Float64Array;
-  private readonly outP: Float64Array;
   private readonly cache: PolarizedLayerOptics[];
+  private readonly layers: PolarizedLayerOptics[];
+  private readonly stack: PolarizedStackSolver;
 
   constructor(
     private readonly models: readonly LayerFn[],
     private readonly paneToModel: readonly number[],
-    private readonly route: PolarizationRoute,
+    route: PolarizationRoute,
   ) {
-    this.outS = new Float64Array(stackResultLength(paneToModel.length));
-    this.outP = new Float64Array(stackResultLength(paneToModel.length));
     this.cache = new Array<PolarizedLayerOptics>(models.length);
+    this.layers = new Array<PolarizedLayerOptics>(paneToModel.length);
+    this.stack = new PolarizedStackSolver(paneToModel.length, route);
   }
 
   /** Solves the band at θ; returns the buffer with the s/p average (layout of solveStackInto). */
   solve(thetaRad: Radians): Float64Array {
-    const n = this.paneToModel.length;
     for (let m = 0; m < this.models.length; m++) this.cache[m] = this.models[m]!(thetaRad);
-    const { ws, outS, outP } = this;
-    if (this.route === "averaged") {
-      for (let k = 0; k < n; k++) {
-        const l = this.cache[this.paneToModel[k]!]!;
-        ws.T[k] = 0.5 * (l.s.T + l.p.T);
-        ws.Rf[k] = 0.5 * (l.s.Rf + l.p.Rf);
-        ws.Rb[k] = 0.5 * (l.s.Rb + l.p.Rb);
-      }
-      solveStackInto(n, ws, outS);
-      return outS;
-    }
-    for (let k = 0; k < n; k++) {
-      const l = this.cache[this.paneToModel[k]!]!.s;
-      ws.T[k] = l.T;
-      ws.Rf[k] = l.Rf;
-      ws.Rb[k] = l.Rb;
-    }
-    solveStackInto(n, ws, outS);
-    for (let k = 0; k < n; k++) {
-      const l = this.cache[this.paneToModel[k]!]!.p;
-      ws.T[k] = l.T;
-      ws.Rf[k] = l.Rf;
-      ws.Rb[k] = l.Rb;
-    }
-    solveStackInto(n, ws, outP);
-    for (let i = 0; i < outS.length; i++) outS[i] = 0.5 * (outS[i]! + outP[i]!);
-    return outS;
+    for (let k = 0; k < this.paneToModel.length; k++) this.layers[k] = this.cache[this.paneToModel[k]!]!;
+    return this.stack.solve(this.layers);
   }
 }
 
-function toBandOptics(buf: Float64Array, n: number): BandOptics {
-  const A = new Array<number>(n);
-  const Aback = new Array<number>(n);
-  for (let k = 0; k < n; k++) {
-    A[k] = buf[3 + k]!;
-    Aback[k] = buf[3 + n + k]!;
-  }
-  return { T: buf[0]!, Rf: buf[1]!, Rb: buf[2]!, A, Aback };
-}
-
-function freezeBand(b: BandOptics): BandOptics {
-  return Object.freeze({ ...b, A: Object.freeze([...b.A]), Aback: Object.freeze([...b.Aback]) });
+function freezeBand(b: StackOptics): StackOptics {
+  return Object.freeze({ ...b, absorptanceFront: Object.freeze([...b.absorptanceFront]), absorptanceBack: Object.freeze([...b.absorptanceBack]) });
 }
 
 function fmt(x: number): string {
@@ -222,13 +175,8 @@ function fmt(x: number): string {
  */
 export function prepareGlazing(panes: readonly PaneSpec[], options: GlazingOpticsOptions = {}): PreparedGlazing {
   const n = panes.length;
-  if (!Number.isInteger(n) || n < 1 || n > MAX_LAYERS) {
-    throw new RangeError(`a glazing has 1..${MAX_LAYERS} panes; got ${n}`);
-  }
-  const route = options.polarization ?? "per-polarization";
-  if (route !== "per-polarization" && route !== "averaged") {
-    throw new RangeError(`polarization must be "per-polarization" or "averaged"; got ${String(route)}`);
-  }
+  checkLayerCount(n, "panes");
+  const route = checkPolarizationRoute(options.polarization ?? "per-polarization");
   const nodes = options.hemisphericalNodes ?? DEFAULT_HEMISPHERICAL_NODES;
   if (!Number.isInteger(nodes) || nodes < 20) {
     throw new RangeError(`hemisphericalNodes must be an integer ≥ 20; got ${nodes}`);
@@ -329,8 +277,8 @@ export function prepareGlazing(panes: readonly PaneSpec[], options: GlazingOptic
 
   const at = (thetaRad: Radians): GlazingOptics => {
     checkIncidenceAngleRad(thetaRad);
-    const s = toBandOptics(solar.solve(thetaRad), n);
-    return { solar: s, visible: visible ? toBandOptics(visible.solve(thetaRad), n) : null };
+    const s = stackOpticsFromResult(n, solar.solve(thetaRad));
+    return { solar: s, visible: visible ? stackOpticsFromResult(n, visible.solve(thetaRad)) : null };
   };
 
   let hemi: GlazingOptics | null = null;
@@ -351,8 +299,8 @@ export function prepareGlazing(panes: readonly PaneSpec[], options: GlazingOptic
       }
     }
     hemi = Object.freeze({
-      solar: freezeBand(toBandOptics(accS, n)),
-      visible: accV ? freezeBand(toBandOptics(accV, n)) : null,
+      solar: freezeBand(stackOpticsFromResult(n, accS)),
+      visible: accV ? freezeBand(stackOpticsFromResult(n, accV)) : null,
     });
     return hemi;
   };
@@ -360,7 +308,7 @@ export function prepareGlazing(panes: readonly PaneSpec[], options: GlazingOptic
   // Sanity check at normal incidence: catches a model that produces an invalid layer.
   for (const m of [...solarModels, ...visibleModels]) {
     if (!m) continue;
-    const l = m(0 as Radians);
+    const l = m(NORMAL_INCIDENCE_RAD);
     checkLayer(l.s);
     checkLayer(l.p);
   }

@@ -29,8 +29,8 @@
  * @see suncalc 2.0.2, https://github.com/mourner/suncalc (README and index.js)
  */
 import { getPosition } from "suncalc";
+import { RAD_PER_DEG } from "./units";
 
-const DEG_TO_RAD = Math.PI / 180;
 const HALF_PI = Math.PI / 2;
 const TWO_PI = 2 * Math.PI;
 
@@ -126,8 +126,8 @@ export function sunTrack(epochMs: Float64Array, latitudeDeg: number, longitudeDe
     if (!Number.isFinite(t)) throw new RangeError(`epochMs[${i}] must be a finite number of milliseconds; got ${t}`);
     date.setTime(t);
     const p = getPosition(date, latitudeDeg, longitudeDeg);
-    const h = p.altitude * DEG_TO_RAD;
-    const aRaw = wrap360(p.azimuth) * DEG_TO_RAD;
+    const h = p.altitude * RAD_PER_DEG;
+    const aRaw = wrap360(p.azimuth) * RAD_PER_DEG;
     const a = aRaw < TWO_PI ? aRaw : 0; // 359.99…° can round up to 2π
     const cosH = Math.cos(h);
     altitudeRad[i] = h;

@@ -13,6 +13,11 @@ export const asRadians = (a: number): Radians => a as Radians;
 /** Brands a number already in degrees (no conversion, no check). */
 export const asDegrees = (a: number): Degrees => a as Degrees;
 
+/** Radians per degree, π/180 (multiply an angle in degrees by it to get radians). */
+export const RAD_PER_DEG = Math.PI / 180;
+/** Degrees per radian, 180/π (multiply an angle in radians by it to get degrees). */
+export const DEG_PER_RAD = 180 / Math.PI;
+
 /** Degrees → radians: rad = deg · π/180. */
 export const toRadians = (a: Degrees): Radians => ((a * Math.PI) / 180) as Radians;
 /** Radians → degrees: deg = rad · 180/π. */
@@ -44,3 +49,35 @@ export function checkIncidenceAngleRad(thetaRad: number, quantity = "angle of in
  */
 export const cosIncidence = (thetaRad: Radians): number =>
   thetaRad === GRAZING_INCIDENCE_RAD ? 0 : Math.cos(thetaRad);
+
+// ---------------------------------------------------------------------------------------------
+// Construction-time checks (RangeError naming the quantity)
+
+/**
+ * Checks that a number is finite and within [min, max].
+ * @param x value to check
+ * @param quantity name used in the error message
+ * @param unit unit suffix of the message, e.g. " m" or " W/m²" (default none)
+ * @throws RangeError naming the quantity
+ */
+export function checkRange(x: number, quantity: string, min: number, max: number, unit = ""): void {
+  if (!Number.isFinite(x) || x < min || x > max) {
+    throw new RangeError(`${quantity} must be a finite number in [${min}, ${max}]${unit}; got ${x}`);
+  }
+}
+
+/**
+ * Checks that a number is finite and ≥ 0.
+ * @throws RangeError naming the quantity
+ */
+export function checkNonNegative(x: number, quantity: string, unit = ""): void {
+  if (!Number.isFinite(x) || x < 0) throw new RangeError(`${quantity} must be a finite number ≥ 0${unit}; got ${x}`);
+}
+
+/**
+ * Checks that a number is finite and > 0.
+ * @throws RangeError naming the quantity
+ */
+export function checkPositive(x: number, quantity: string, unit = ""): void {
+  if (!Number.isFinite(x) || x <= 0) throw new RangeError(`${quantity} must be a finite number > 0${unit}; got ${x}`);
+}

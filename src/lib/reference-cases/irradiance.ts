@@ -382,7 +382,7 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
     id: "transposition/example/hay-davies",
     label: `${exampleLabel}: Hay–Davies sky 64.1966 W/m² (Ai 0.653959, Rb 0.788496)`,
     input: example,
-    expected: [p("anisotropyIndex", "-", "0.653959"), p("beamRatio", "-", "0.788496"), p("skyHaydavies", "W/m²", "64.1966")],
+    expected: [p("anisotropyIndex", "-", "0.653959"), p("beamRatio", "-", "0.788496"), p("skyHayDavies", "W/m²", "64.1966")],
     source: hayDavies,
   },
   {
@@ -403,7 +403,7 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
   ...(
     [
       ["isotropic", "644.189"],
-      ["haydavies", "661.776"],
+      ["hay-davies", "661.776"],
       ["perez", "675.989"],
     ] as const
   ).map(([model, total]): ReferenceCase<IrradianceInput> => ({
