@@ -1,10 +1,19 @@
 #!/usr/bin/env bash
 # npm start: installs what is missing, starts PostgreSQL (unless DATABASE_URL is given) and the local
 # SMTP fake (unless SMTP_URL is given), migrates, seeds the demo, builds when stale, and serves the app.
+# npm run dev (scripts/start.sh --dev): the same set-up, then `astro dev` (reloads on change) instead
+# of the built server.
 # Ctrl-C / SIGTERM stops the server, the SMTP fake and PostgreSQL cleanly.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib.sh
+
+DEV=""
+case "${1:-}" in
+  "") ;;
+  --dev) DEV=1 ;;
+  *) echo "usage: scripts/start.sh [--dev]" >&2; exit 2 ;;
+esac
 
 DATA=${PANERAY_DATA:-$PWD/.data}
 mkdir -p "$DATA"
@@ -53,15 +62,20 @@ if [ -z "${SMTP_URL:-}" ]; then
   log "outgoing mail goes to the local SMTP fake; messages are stored in $DATA/mail"
 fi
 
-build_if_stale
-
-NODE_ENV=production node dist/server/entry.mjs &
+if [ -n "$DEV" ]; then
+  node_modules/.bin/astro dev --host "$HOST" --port "$PORT" &
+  MODE=" (development server: reloads on change)"
+else
+  build_if_stale
+  NODE_ENV=production node dist/server/entry.mjs &
+  MODE=""
+fi
 PIDS+=("$!")
 SERVER=$!
-wait_port "$PORT" 30 || { log "the server did not start"; exit 1; }
+wait_port "$PORT" 60 || { log "the server did not start"; exit 1; }
 cat >&2 <<MSG
 
-  Paneray is running at $BETTER_AUTH_URL
+  Paneray is running at $BETTER_AUTH_URL$MODE
   Demo sign-in (password: paneray-demo-2026):
     owner       ines.halden@halden-facades.example
     consultant  tomas.reis@halden-facades.example

@@ -1,7 +1,9 @@
 #!/usr/bin/env bash
 # npm test: the same set-up as npm start on a throwaway database, mail folder and ports; then type check,
-# unit and server tests (Vitest), a fresh build and the browser tests (Playwright + Debian's chromium).
-# Ends with one line "N passed, M failed" (totals of both runners); exits non-zero on any failure.
+# lint (ESLint) and format check (Prettier), unit and server tests (Vitest), a fresh build and the browser
+# tests (Playwright + Debian's chromium).
+# Ends with one line "N passed, M failed" (totals of both runners, plus lint and format as one check
+# each); exits non-zero on any failure.
 # Leaves nothing running and nothing behind.
 set -euo pipefail
 cd "$(dirname "$0")/.."
@@ -40,6 +42,15 @@ log "type check (astro check)…"
 npx astro check --minimumSeverity error >&2
 
 status=0
+checks_passed=0 checks_failed=0
+check() {   # check NAME CMD…: runs CMD and counts it as one passed or failed check
+  local name=$1; shift
+  log "$name…"
+  if "$@" >&2; then checks_passed=$((checks_passed + 1)); else log "$name failed"; checks_failed=$((checks_failed + 1)); status=1; fi
+}
+check "lint (eslint)" npx eslint .
+check "format (prettier --check)" npx prettier --check --log-level warn .
+
 log "unit and server tests (vitest)…"
 npx vitest run --reporter=default --reporter=json --outputFile.json="$TMP/vitest.json" || status=1
 
@@ -52,13 +63,13 @@ CI_REPORT_JSON="$TMP/playwright.json" npx playwright test || status=1
 node -e '
   const fs = require("fs");
   const read = (f) => { try { return JSON.parse(fs.readFileSync(f, "utf8")); } catch { return null; } };
-  const v = read(process.argv[1]), p = read(process.argv[2]);
-  let passed = 0, failed = 0, skipped = 0;
+  const v = read(process.argv[1]), p = read(process.argv[2]);   // argv 3, 4: lint and format checks passed, failed
+  let passed = Number(process.argv[3]), failed = Number(process.argv[4]), skipped = 0;
   if (v) { passed += v.numPassedTests; failed += v.numFailedTests; skipped += v.numPendingTests + (v.numTodoTests || 0); }
   else failed += 1;   // the runner produced no report: count it as a failure
   if (p) { passed += p.stats.expected + p.stats.flaky; failed += p.stats.unexpected; skipped += p.stats.skipped; }
   else failed += 1;
   console.log(`${passed} passed, ${failed} failed` + (skipped ? `, ${skipped} skipped` : ""));
   if (failed) process.exitCode = 1;
-' "$TMP/vitest.json" "$TMP/playwright.json" || status=1
+' "$TMP/vitest.json" "$TMP/playwright.json" "$checks_passed" "$checks_failed" || status=1
 exit $status
