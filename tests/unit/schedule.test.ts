@@ -12,7 +12,6 @@ import {
   allocateColumns,
   computeSurfaceSeries,
   prepareGlazingTables,
-  prepareSite,
   prepareSurface,
   type SiteSeries,
 } from "@/lib/calc/schedule";
