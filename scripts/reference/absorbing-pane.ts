@@ -21,7 +21,7 @@ import {
   type PaneMm,
 } from "@/lib/reference-cases/absorbing-pane";
 import { interfaceAt } from "./fresnel";
-import { compareDomain, isMain, printComparison, type Recomputed } from "./optics-compare";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
 const DEG = Math.PI / 180;
 
@@ -92,7 +92,8 @@ export function recomputeAbsorbingPane(input: AbsorbingPaneCaseInput): Recompute
   };
 }
 
+/** Every case of the domain this script answers for, next to its recomputation. */
 export const absorbingPaneComparison = () =>
-  compareDomain(absorbingPaneDomain, ABSORBING_PANE_SCRIPT, recomputeAbsorbingPane);
+  compareDomain(absorbingPaneDomain, ABSORBING_PANE_SCRIPT, (c) => recomputeAbsorbingPane(c.input), { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) printComparison(absorbingPaneDomain.title, absorbingPaneComparison());
+runWhenMain(import.meta.url, [[absorbingPaneDomain.title, absorbingPaneComparison]]);

@@ -29,7 +29,7 @@
  */
 import { gValueDomain, type GValueCase, type GValueCaseInput, type GValueOptics, type GValueOpticalPane } from '@/lib/reference-cases/g-value';
 import type { ReferenceCase } from '@/lib/reference-cases/types';
-import { compareCases, isMainModule, printComparison, type ComparisonRow } from './thermal-compare';
+import { compareCases, compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
 import { EXTERNAL_COEFFICIENT, GLASS_CONDUCTIVITY, internalCoefficient, uValueUnit } from './u-value';
 
 // ---------------------------------------------------------------------------------------------------------
@@ -236,7 +236,7 @@ export function gValue(t: number, absorptances: readonly number[], factors: read
 // Comparisons
 
 /** The values this script computes for a case (g from the printed optical inputs). */
-export function recomputeGValueCase(c: GValueCase): Record<string, number> {
+export function recomputeGValueCase(c: GValueCase): Recomputed {
   const net = network(c.input.unit, c.input.glassConduction);
   const out: Record<string, number> = {};
   net.factors.forEach((n, k) => (out[`factors[${k}]`] = n));
@@ -251,8 +251,11 @@ export function recomputeGValueCase(c: GValueCase): Record<string, number> {
   return out;
 }
 
+const SCRIPT = 'scripts/reference/g-value.ts';
+
+/** Every case of the domain this script answers for, next to its recomputation. */
 export function gValueComparison(): ComparisonRow[] {
-  return compareCases(gValueDomain.cases, recomputeGValueCase);
+  return compareDomain(gValueDomain, SCRIPT, recomputeGValueCase, { rule: EXACT_BOUND, closedForm: true });
 }
 
 /** Pseudo-cases: each printed optical input of a g case next to its rounding, for the comparison table. */
@@ -278,7 +281,7 @@ export function opticalInputComparison(): ComparisonRow[] {
     const out: Record<string, number> = { solarTransmittance: r.solarTransmittance, solarReflectanceFront: r.solarReflectanceFront };
     r.absorptances.forEach((a, k) => (out[`absorptances[${k}]`] = a));
     return out;
-  });
+  }, EXACT_BOUND);
 }
 
 /** g of the g cases from the recomputed, unrounded optics against the printed g. */
@@ -290,12 +293,12 @@ export function gFromRecomputedOpticsComparison(): ComparisonRow[] {
       const { qi, g } = gValue(r.solarTransmittance, r.absorptances, network(c.input.unit, c.input.glassConduction).factors);
       return { secondaryHeatTransfer: qi, gValue: g };
     },
+    EXACT_BOUND,
   );
 }
 
-if (isMainModule(import.meta.url)) {
-  let outside = printComparison('EN 410:2011 g and N_k (g from the printed optical inputs)', gValueComparison());
-  outside += printComparison('Printed optical inputs, recomputed from the named panes', opticalInputComparison());
-  outside += printComparison('g from the recomputed (unrounded) optics', gFromRecomputedOpticsComparison());
-  process.exitCode = outside === 0 ? 0 : 1;
-}
+runWhenMain(import.meta.url, [
+  ['EN 410:2011 g and N_k (g from the printed optical inputs)', gValueComparison],
+  ['Printed optical inputs, recomputed from the named panes', opticalInputComparison],
+  ['g from the recomputed (unrounded) optics', gFromRecomputedOpticsComparison],
+]);

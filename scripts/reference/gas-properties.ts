@@ -11,7 +11,9 @@
  * Run: npx tsx scripts/reference/gas-properties.ts
  */
 import { gasPropertiesDomain, type GasFillData, type GasNameData, type GasPropertiesCase } from '@/lib/reference-cases/gas-properties';
-import { compareCases, isMainModule, printComparison, type ComparisonRow } from './thermal-compare';
+import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
+
+const SCRIPT = 'scripts/reference/gas-properties.ts';
 
 export interface GasData {
   readonly densityKgPerM3: number;
@@ -61,18 +63,15 @@ export function prandtl(g: GasData): number {
   return (g.dynamicViscosityPaS * g.specificHeatJPerKgK) / g.conductivityWPerMK;
 }
 
-/** The values this script computes for a case; undefined for the tabulated (published) cases. */
-export function recomputeGasPropertiesCase(c: GasPropertiesCase): Record<string, number> | undefined {
-  if (c.source.kind === 'published') return undefined;
+/** The values this script computes for a case (the tabulated, published cases are its data, not its results). */
+export function recomputeGasPropertiesCase(c: GasPropertiesCase): Recomputed {
   const g = gasProperties(c.input.gas);
   return { ...g, prandtl: prandtl(g) };
 }
 
+/** Every case of the domain this script answers for, next to its recomputation. */
 export function gasPropertiesComparison(): ComparisonRow[] {
-  return compareCases(gasPropertiesDomain.cases, recomputeGasPropertiesCase);
+  return compareDomain(gasPropertiesDomain, SCRIPT, recomputeGasPropertiesCase, { rule: EXACT_BOUND, closedForm: true });
 }
 
-if (isMainModule(import.meta.url)) {
-  const outside = printComparison('Gas properties at 10 °C (EN 673:2011)', gasPropertiesComparison());
-  process.exitCode = outside === 0 ? 0 : 1;
-}
+runWhenMain(import.meta.url, [['Gas properties at 10 °C (EN 673:2011)', gasPropertiesComparison]]);
