@@ -11,6 +11,7 @@
  * Run: npx tsx scripts/reference/gas-properties.ts
  */
 import { gasPropertiesDomain, type GasFillData, type GasNameData, type GasPropertiesCase } from '@/lib/reference-cases/gas-properties';
+import { caseById, expectedOf } from '@/lib/reference-cases/read';
 import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
 
 const SCRIPT = 'scripts/reference/gas-properties.ts';
@@ -29,13 +30,8 @@ const KEYS = ['densityKgPerM3', 'dynamicViscosityPaS', 'conductivityWPerMK', 'sp
 export function en673GasTable(): Readonly<Record<GasNameData, GasData>> {
   const table = {} as Record<GasNameData, GasData>;
   for (const gas of GASES) {
-    const c = gasPropertiesDomain.cases.find((x) => x.id === `gas-properties/${gas}/10C`);
-    if (!c) throw new Error(`no tabulated case for ${gas}`);
-    const get = (q: string) => {
-      const e = c.expected.find((x) => x.quantity === q);
-      if (!e) throw new Error(`${c.id}: no ${q}`);
-      return e.value;
-    };
+    const c = caseById(gasPropertiesDomain.cases, `gas-properties/${gas}/10C`);
+    const get = (q: string) => expectedOf(c, q).value;
     table[gas] = {
       densityKgPerM3: get('densityKgPerM3'),
       dynamicViscosityPaS: get('dynamicViscosityPaS'),

@@ -5,21 +5,9 @@ import { asDegrees, toRadians, type Radians } from "@/lib/physics/units";
 import type { PaneSpec } from "@/lib/physics/optics";
 import type { ExpectedValue, ReferenceCase } from "@/lib/reference-cases/types";
 
+export { caseById, expectedOf } from "@/lib/reference-cases/read";
+
 export const deg = (d: number): Radians => toRadians(asDegrees(d));
-
-/** The case with the given id (a test that reads a value from another case fails loudly if it is gone). */
-export function caseById<I>(cases: readonly ReferenceCase<I>[], id: string): ReferenceCase<I> {
-  const c = cases.find((x) => x.id === id);
-  if (!c) throw new Error(`no reference case ${id}`);
-  return c;
-}
-
-/** The expected value of `quantity` in a case (throws if the case does not list it). */
-export function expectedOf(c: ReferenceCase, quantity: string): ExpectedValue {
-  const e = c.expected.find((x) => x.quantity === quantity);
-  if (!e) throw new Error(`case ${c.id} has no expected ${quantity}`);
-  return e;
-}
 
 /**
  * |actual − expected| ≤ the expected value's tolerance, the rule for values printed to a number of decimals
