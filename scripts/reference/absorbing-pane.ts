@@ -14,12 +14,8 @@
  *
  * Run: npx tsx scripts/reference/absorbing-pane.ts
  */
-import {
-  ABSORBING_PANE_SCRIPT,
-  absorbingPaneDomain,
-  type AbsorbingPaneCaseInput,
-  type PaneMm,
-} from "@/lib/reference-cases/absorbing-pane";
+import { ABSORBING_PANE_SCRIPT, absorbingPaneDomain, type AbsorbingPaneCaseInput } from "@/lib/reference-cases/absorbing-pane";
+import type { PaneMm } from "@/lib/reference-cases/panes";
 import { interfaceAt } from "./fresnel";
 import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 

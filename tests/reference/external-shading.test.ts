@@ -393,7 +393,7 @@ describe("diffuse: view factors with overhangs and fins", () => {
   // Perpendicular rectangles with a common edge of length X; i is X × Y, j is X × Z:
   // F_ij = (1/(πW)) [W atan(1/W) + H atan(1/H) − √(H² + W²) atan(1/√(H² + W²))
   //        + ¼ ln{ (1+W²)(1+H²)/(1+W²+H²) · [W²(1+W²+H²)/((1+W²)(W²+H²))]^(W²) · [H²(1+H²+W²)/((1+H²)(H²+W²))]^(H²) }]
-  // with H = Z/X, W = Y/X [pub: Incropera & DeWitt, Table 13.2; from memory].
+  // with H = Z/X, W = Y/X (F. P. Incropera & D. P. DeWitt, Fundamentals of Heat and Mass Transfer, Table 13.2; from memory).
   const perpendicular = (x: number, y: number, z: number): number => {
     const Hh = z / x;
     const Ww = y / x;
@@ -476,8 +476,8 @@ describe("diffuse: view factors with overhangs and fins", () => {
   };
 
   it.each([90, 30, 120])("point view factors with overhang and fins overlapping, tilt %i°: against brute-force ray casting", (tiltDeg) => {
-    // 400 × 800 rays; the indicator's discretisation error is ≤ 4e-4 here (it was ≤ 1.6e-4 with
-    // 800 × 1600 in our study), hence 1e-3.
+    // 400 × 800 rays; the indicator's discretisation error is ≤ 4e-4 here (≤ 1.6e-4 with
+    // 800 × 1600 rays), hence 1e-3.
     const sh = prepareShading(combined(tiltDeg));
     const cb = Math.cos(deg(tiltDeg));
     const sb = Math.sin(deg(tiltDeg));
