@@ -69,7 +69,7 @@ function expectReproduced(rows: readonly ComparisonRow[], slack: number): void {
   }
 }
 
-describe.each(entries)("scripts/reference/$script.ts reproduces its cases", ({ script, domain, rows: comparison, slack, closedForm }) => {
+describe.each(entries.map((e) => [`scripts/reference/${e.script}.ts`, e] as const))("%s reproduces its cases", (_path, { script, domain, rows: comparison, slack, closedForm }) => {
   const rows = comparison();
   const due = domain.cases.filter((c) => c.source.kind === "computed" || (closedForm && c.source.kind === "closed-form"));
 
@@ -112,8 +112,12 @@ describe("the scripts and case modules are independent of the product's code", (
   const scriptDir = join(process.cwd(), "scripts", "reference");
   const caseDir = join(process.cwd(), "src", "lib", "reference-cases");
   const tsFiles = (dir: string) => readdirSync(dir).filter((f) => f.endsWith(".ts")).sort();
-  const importsOf = (path: string) =>
-    [...readFileSync(path, "utf8").matchAll(/^\s*(?:import|export)\b[^;]*?from\s+['"]([^'"]+)['"]/gm)].map((m) => m[1]!);
+  /** Every module a file loads: `import … from`, `export … from`, `import "…"` and `import("…")`. */
+  const importsOf = (path: string) => {
+    const text = readFileSync(path, "utf8");
+    const forms = [/^\s*(?:import|export)\b[^;]*?from\s+['"]([^'"]+)['"]/gm, /^\s*import\s+['"]([^'"]+)['"]/gm, /\bimport\(\s*['"]([^'"]+)['"]/g];
+    return forms.flatMap((re) => [...text.matchAll(re)].map((m) => m[1]!));
+  };
   /** npm packages the scripts may use: general-purpose libraries, not the product. */
   const LIBRARIES = ["complex.js"];
 
