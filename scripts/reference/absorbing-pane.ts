@@ -14,14 +14,10 @@
  *
  * Run: npx tsx scripts/reference/absorbing-pane.ts
  */
-import {
-  ABSORBING_PANE_SCRIPT,
-  absorbingPaneDomain,
-  type AbsorbingPaneCaseInput,
-  type PaneMm,
-} from "@/lib/reference-cases/absorbing-pane";
+import { ABSORBING_PANE_SCRIPT, absorbingPaneDomain, type AbsorbingPaneCaseInput } from "@/lib/reference-cases/absorbing-pane";
+import type { PaneMm } from "@/lib/reference-cases/panes";
 import { interfaceAt } from "./fresnel";
-import { compareDomain, isMain, printComparison, type Recomputed } from "./optics-compare";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
 const DEG = Math.PI / 180;
 
@@ -92,7 +88,8 @@ export function recomputeAbsorbingPane(input: AbsorbingPaneCaseInput): Recompute
   };
 }
 
+/** Every case of the domain this script answers for, next to its recomputation. */
 export const absorbingPaneComparison = () =>
-  compareDomain(absorbingPaneDomain, ABSORBING_PANE_SCRIPT, recomputeAbsorbingPane);
+  compareDomain(absorbingPaneDomain, ABSORBING_PANE_SCRIPT, (c) => recomputeAbsorbingPane(c.input), { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) printComparison(absorbingPaneDomain.title, absorbingPaneComparison());
+runWhenMain(import.meta.url, [[absorbingPaneDomain.title, absorbingPaneComparison]]);

@@ -16,7 +16,7 @@
  */
 import Complex from "complex.js";
 import { FRESNEL_SCRIPT, fresnelDomain, type FresnelCaseInput } from "@/lib/reference-cases/fresnel";
-import { compareDomain, isMain, printComparison, type Recomputed } from "./optics-compare";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
 const DEG = Math.PI / 180;
 
@@ -81,7 +81,8 @@ export function recomputeFresnel(input: FresnelCaseInput): Recomputed {
   }
 }
 
-/** The comparison of every computed Fresnel case with this script. */
-export const fresnelComparison = () => compareDomain(fresnelDomain, FRESNEL_SCRIPT, recomputeFresnel);
+/** Every case of the domain this script answers for, next to its recomputation. */
+export const fresnelComparison = () =>
+  compareDomain(fresnelDomain, FRESNEL_SCRIPT, (c) => recomputeFresnel(c.input), { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) printComparison(fresnelDomain.title, fresnelComparison());
+runWhenMain(import.meta.url, [[fresnelDomain.title, fresnelComparison]]);

@@ -11,7 +11,10 @@
  * Run: npx tsx scripts/reference/gas-properties.ts
  */
 import { gasPropertiesDomain, type GasFillData, type GasNameData, type GasPropertiesCase } from '@/lib/reference-cases/gas-properties';
-import { compareCases, isMainModule, printComparison, type ComparisonRow } from './thermal-compare';
+import { caseById, expectedOf } from '@/lib/reference-cases/read';
+import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
+
+const SCRIPT = 'scripts/reference/gas-properties.ts';
 
 export interface GasData {
   readonly densityKgPerM3: number;
@@ -27,13 +30,8 @@ const KEYS = ['densityKgPerM3', 'dynamicViscosityPaS', 'conductivityWPerMK', 'sp
 export function en673GasTable(): Readonly<Record<GasNameData, GasData>> {
   const table = {} as Record<GasNameData, GasData>;
   for (const gas of GASES) {
-    const c = gasPropertiesDomain.cases.find((x) => x.id === `gas-properties/${gas}/10C`);
-    if (!c) throw new Error(`no tabulated case for ${gas}`);
-    const get = (q: string) => {
-      const e = c.expected.find((x) => x.quantity === q);
-      if (!e) throw new Error(`${c.id}: no ${q}`);
-      return e.value;
-    };
+    const c = caseById(gasPropertiesDomain.cases, `gas-properties/${gas}/10C`);
+    const get = (q: string) => expectedOf(c, q).value;
     table[gas] = {
       densityKgPerM3: get('densityKgPerM3'),
       dynamicViscosityPaS: get('dynamicViscosityPaS'),
@@ -61,18 +59,15 @@ export function prandtl(g: GasData): number {
   return (g.dynamicViscosityPaS * g.specificHeatJPerKgK) / g.conductivityWPerMK;
 }
 
-/** The values this script computes for a case; undefined for the tabulated (published) cases. */
-export function recomputeGasPropertiesCase(c: GasPropertiesCase): Record<string, number> | undefined {
-  if (c.source.kind === 'published') return undefined;
+/** The values this script computes for a case (the tabulated, published cases are its data, not its results). */
+export function recomputeGasPropertiesCase(c: GasPropertiesCase): Recomputed {
   const g = gasProperties(c.input.gas);
   return { ...g, prandtl: prandtl(g) };
 }
 
+/** Every case of the domain this script answers for, next to its recomputation. */
 export function gasPropertiesComparison(): ComparisonRow[] {
-  return compareCases(gasPropertiesDomain.cases, recomputeGasPropertiesCase);
+  return compareDomain(gasPropertiesDomain, SCRIPT, recomputeGasPropertiesCase, { rule: EXACT_BOUND, closedForm: true });
 }
 
-if (isMainModule(import.meta.url)) {
-  const outside = printComparison('Gas properties at 10 °C (EN 673:2011)', gasPropertiesComparison());
-  process.exitCode = outside === 0 ? 0 : 1;
-}
+runWhenMain(import.meta.url, [['Gas properties at 10 °C (EN 673:2011)', gasPropertiesComparison]]);

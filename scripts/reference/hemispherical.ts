@@ -19,7 +19,7 @@ import {
   type HemisphericalCaseInput,
 } from "@/lib/reference-cases/hemispherical";
 import { stackAt, stackQuantities, type StackResult } from "./layer-stack";
-import { compareDomain, isMain, printComparison, type Recomputed } from "./optics-compare";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
 /** Gauss–Legendre nodes x and weights w on [−1, 1]. */
 export function gaussLegendreRule(n: number): { x: number[]; w: number[] } {
@@ -70,7 +70,8 @@ export function recomputeHemispherical(input: HemisphericalCaseInput): Recompute
   return stackQuantities({ T: h[0]!, Rf: h[1]!, Rb: h[2]!, A: h.slice(3) });
 }
 
+/** Every case of the domain this script answers for, next to its recomputation. */
 export const hemisphericalComparison = () =>
-  compareDomain(hemisphericalDomain, HEMISPHERICAL_SCRIPT, recomputeHemispherical);
+  compareDomain(hemisphericalDomain, HEMISPHERICAL_SCRIPT, (c) => recomputeHemispherical(c.input), { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) printComparison(hemisphericalDomain.title, hemisphericalComparison());
+runWhenMain(import.meta.url, [[hemisphericalDomain.title, hemisphericalComparison]]);

@@ -9,8 +9,9 @@
 // Run: npx tsx scripts/reference/incidence.ts
 import { incidence, type IncidenceInput } from "@/lib/reference-cases/incidence";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { compareCases, isMain, printReport, type Recomputed } from "./report";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
+const SCRIPT = "scripts/reference/incidence.ts";
 const D2R = Math.PI / 180;
 
 /** cos θ of the beam on a surface, from the formula above (all angles in degrees). */
@@ -32,8 +33,7 @@ export function computeIncidence(c: ReferenceCase<IncidenceInput>): Recomputed {
   };
 }
 
-export const incidenceReport = () => compareCases(incidence.cases, computeIncidence);
+/** Every case of the domain this script answers for, next to its recomputation. */
+export const incidenceComparison = () => compareDomain(incidence, SCRIPT, computeIncidence, { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) {
-  if (!printReport(incidence.title, incidenceReport())) process.exitCode = 1;
-}
+runWhenMain(import.meta.url, [[incidence.title, incidenceComparison]]);

@@ -32,8 +32,9 @@
 // Run: npx tsx scripts/reference/irradiance.ts
 import { irradiance, type IrradianceInput, type TranspositionInput } from "@/lib/reference-cases/irradiance";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { compareCases, isMain, printReport, type Recomputed } from "./report";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
+const SCRIPT = "scripts/reference/irradiance.ts";
 const D2R = Math.PI / 180;
 const cosd = (d: number) => Math.cos(d * D2R);
 const sind = (d: number) => Math.sin(d * D2R);
@@ -167,8 +168,7 @@ export function computeIrradiance(c: ReferenceCase<IrradianceInput>): Recomputed
   }
 }
 
-export const irradianceReport = () => compareCases(irradiance.cases, computeIrradiance);
+/** Every case of the domain this script answers for, next to its recomputation. */
+export const irradianceComparison = () => compareDomain(irradiance, SCRIPT, computeIrradiance, { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) {
-  if (!printReport(irradiance.title, irradianceReport())) process.exitCode = 1;
-}
+runWhenMain(import.meta.url, [[irradiance.title, irradianceComparison]]);

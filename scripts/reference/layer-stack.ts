@@ -20,7 +20,7 @@ import {
   type StackLayer,
 } from "@/lib/reference-cases/layer-stack";
 import { paneAt } from "./absorbing-pane";
-import { compareDomain, isMain, printComparison, type Recomputed } from "./optics-compare";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
 const DEG = Math.PI / 180;
 
@@ -138,6 +138,8 @@ export function recomputeLayerStack(input: LayerStackCaseInput): Recomputed {
   return stackQuantities(stackAt(input.layers, input.thetaDeg * DEG, input.route));
 }
 
-export const layerStackComparison = () => compareDomain(layerStackDomain, LAYER_STACK_SCRIPT, recomputeLayerStack);
+/** Every case of the domain this script answers for, next to its recomputation. */
+export const layerStackComparison = () =>
+  compareDomain(layerStackDomain, LAYER_STACK_SCRIPT, (c) => recomputeLayerStack(c.input), { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) printComparison(layerStackDomain.title, layerStackComparison());
+runWhenMain(import.meta.url, [[layerStackDomain.title, layerStackComparison]]);

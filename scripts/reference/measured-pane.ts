@@ -23,7 +23,7 @@ import {
   type MeasuredPaneCaseInput,
 } from "@/lib/reference-cases/measured-pane";
 import { paneAt } from "./absorbing-pane";
-import { compareDomain, isMain, printComparison, type Recomputed } from "./optics-compare";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
 const DEG = Math.PI / 180;
 
@@ -81,6 +81,8 @@ export function recomputeMeasuredPane(input: MeasuredPaneCaseInput): Recomputed 
   }
 }
 
-export const measuredPaneComparison = () => compareDomain(measuredPaneDomain, MEASURED_PANE_SCRIPT, recomputeMeasuredPane);
+/** Every case of the domain this script answers for, next to its recomputation. */
+export const measuredPaneComparison = () =>
+  compareDomain(measuredPaneDomain, MEASURED_PANE_SCRIPT, (c) => recomputeMeasuredPane(c.input), { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) printComparison(measuredPaneDomain.title, measuredPaneComparison());
+runWhenMain(import.meta.url, [[measuredPaneDomain.title, measuredPaneComparison]]);

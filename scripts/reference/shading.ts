@@ -10,8 +10,9 @@
 // Run: npx tsx scripts/reference/shading.ts
 import { shading, type ShadingInput } from "@/lib/reference-cases/shading";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { compareCases, isMain, printReport, type Recomputed } from "./report";
+import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
+const SCRIPT = "scripts/reference/shading.ts";
 const D2R = Math.PI / 180;
 const clamp = (x: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, x));
 
@@ -43,8 +44,7 @@ export function shadowGeometry(i: ShadingInput): Record<string, number> {
 
 export const computeShading = (c: ReferenceCase<ShadingInput>): Recomputed => shadowGeometry(c.input);
 
-export const shadingReport = () => compareCases(shading.cases, computeShading);
+/** Every case of the domain this script answers for, next to its recomputation. */
+export const shadingComparison = () => compareDomain(shading, SCRIPT, computeShading, { rule: PRINTED_DIGITS, closedForm: false });
 
-if (isMain(import.meta.url)) {
-  if (!printReport(shading.title, shadingReport())) process.exitCode = 1;
-}
+runWhenMain(import.meta.url, [[shading.title, shadingComparison]]);

@@ -21,7 +21,9 @@
  */
 import { uValueDomain, type UValueCase, type UValueGapData, type UValuePaneData } from '@/lib/reference-cases/u-value';
 import { gasProperties, prandtl } from './gas-properties';
-import { compareCases, isMainModule, printComparison, type ComparisonRow } from './thermal-compare';
+import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
+
+const SCRIPT = 'scripts/reference/u-value.ts';
 
 export const SIGMA = 5.67e-8;
 export const GRAVITY = 9.81;
@@ -135,9 +137,8 @@ function sameInEveryGap(gaps: readonly GapResult[], key: keyof GapResult): numbe
   return first;
 }
 
-/** The values this script computes for a case; undefined for values printed in the standard. */
-export function recomputeUValueCase(c: UValueCase): Record<string, number> | undefined {
-  if (c.source.kind === 'published' || c.source.kind === 'common-practice' || c.source.kind === 'library') return undefined;
+/** The values this script computes for a case (its computed and closed-form cases). */
+export function recomputeUValueCase(c: UValueCase): Recomputed {
   const input = c.input;
   switch (input.kind) {
     case 'unit': {
@@ -162,15 +163,13 @@ export function recomputeUValueCase(c: UValueCase): Record<string, number> | und
       // the unclamped correlation, to show how close the printed threshold comes to Nu = 1
       return { nusselt: constantsAt(input.tiltDeg).a * input.grashofPrandtl ** constantsAt(input.tiltDeg).n };
     case 'convection-constants':
-      return undefined;
+      throw new Error(`${c.id}: the convection constants are printed in the standard, not computed`);
   }
 }
 
+/** Every case of the domain this script answers for, next to its recomputation. */
 export function uValueComparison(): ComparisonRow[] {
-  return compareCases(uValueDomain.cases, recomputeUValueCase);
+  return compareDomain(uValueDomain, SCRIPT, recomputeUValueCase, { rule: EXACT_BOUND, closedForm: true });
 }
 
-if (isMainModule(import.meta.url)) {
-  const outside = printComparison('Centre-of-glass U value (EN 673:2011)', uValueComparison());
-  process.exitCode = outside === 0 ? 0 : 1;
-}
+runWhenMain(import.meta.url, [['Centre-of-glass U value (EN 673:2011)', uValueComparison]]);

@@ -26,8 +26,7 @@ import {
 import { surfaceOrientationDeg } from "@/lib/physics/surface-geometry";
 import { shading as shadingCases, type ShadingInput } from "@/lib/reference-cases/shading";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { expectBelow, expectedOf, expectPrinted } from "./case-check";
-import { deg } from "./fixtures";
+import { deg, expectBelow, expectedOf, expectValue } from "./fixtures";
 
 const RAD = 180 / Math.PI;
 const southVertical = surfaceOrientationDeg(180, 90);
@@ -57,27 +56,27 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
   const angles = caseById("shading/example/angles");
   it(angles.label, () => {
     expectBelow(gamma * RAD, expectedOf(angles, "horizontalShadowAngleDeg"));
-    expectPrinted(Math.tan(omega), expectedOf(angles, "tanProfileAngle"));
-    expectPrinted(omega * RAD, expectedOf(angles, "profileAngleDeg"));
-    expectPrinted(P * Math.tan(omega), expectedOf(angles, "shadowDropM"));
+    expectValue(Math.tan(omega), expectedOf(angles, "tanProfileAngle"));
+    expectValue(omega * RAD, expectedOf(angles, "profileAngleDeg"));
+    expectValue(P * Math.tan(omega), expectedOf(angles, "shadowDropM"));
   });
 
   const band = caseById("shading/example/shaded-band-and-strip");
   it(band.label, () => {
     const i = band.input;
-    expectPrinted(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, omega), expectedOf(band, "overhangShadedHeightM"));
-    expectPrinted(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, gamma), expectedOf(band, "finShadedWidthM"));
+    expectValue(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, omega), expectedOf(band, "overhangShadedHeightM"));
+    expectValue(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, gamma), expectedOf(band, "finShadedWidthM"));
   });
 
   const fractions = caseById("shading/example/sunlit-fractions");
   it(`${fractions.label}, on the hot path`, () => {
     const i = fractions.input;
     const at = (spec: ShadingSpec) => sunlitFractionAt(prepareShading(spec), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg));
-    expectPrinted(at(example), expectedOf(fractions, "sunlitFraction"));
+    expectValue(at(example), expectedOf(fractions, "sunlitFraction"));
     const { fins: _f, ...overhangOnly } = example;
-    expectPrinted(at(overhangOnly), expectedOf(fractions, "sunlitFractionOverhangOnly"));
+    expectValue(at(overhangOnly), expectedOf(fractions, "sunlitFractionOverhangOnly"));
     const { overhang: _o, ...finsOnly } = example;
-    expectPrinted(at(finsOnly), expectedOf(fractions, "sunlitFractionFinsOnly"));
+    expectValue(at(finsOnly), expectedOf(fractions, "sunlitFractionFinsOnly"));
   });
 
   const rows = shadingCases.cases.filter((c) => c.id.startsWith("shading/example-window/"));
@@ -85,10 +84,10 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
     const i = c.input;
     const g = horizontalShadowAngleRad(deg(i.sunAzimuthDeg), deg(i.surfaceAzimuthDeg));
     const o = profileAngleRad(deg(i.sunAltitudeDeg), g);
-    expectPrinted(o * RAD, expectedOf(c, "profileAngleDeg"));
-    expectPrinted(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, o), expectedOf(c, "overhangShadedHeightM"));
-    expectPrinted(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, g), expectedOf(c, "finShadedWidthM"));
-    expectPrinted(sunlitFractionAt(prepareShading(specOfCase(i)), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg)), expectedOf(c, "sunlitFraction"));
+    expectValue(o * RAD, expectedOf(c, "profileAngleDeg"));
+    expectValue(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, o), expectedOf(c, "overhangShadedHeightM"));
+    expectValue(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, g), expectedOf(c, "finShadedWidthM"));
+    expectValue(sunlitFractionAt(prepareShading(specOfCase(i)), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg)), expectedOf(c, "sunlitFraction"));
   });
 
   it("the hot path equals the rectangle product of the overhang/fin formulas (property, random geometry and sun)", () => {
@@ -394,7 +393,7 @@ describe("diffuse: view factors with overhangs and fins", () => {
   // Perpendicular rectangles with a common edge of length X; i is X × Y, j is X × Z:
   // F_ij = (1/(πW)) [W atan(1/W) + H atan(1/H) − √(H² + W²) atan(1/√(H² + W²))
   //        + ¼ ln{ (1+W²)(1+H²)/(1+W²+H²) · [W²(1+W²+H²)/((1+W²)(W²+H²))]^(W²) · [H²(1+H²+W²)/((1+H²)(H²+W²))]^(H²) }]
-  // with H = Z/X, W = Y/X [pub: Incropera & DeWitt, Table 13.2; from memory].
+  // with H = Z/X, W = Y/X (F. P. Incropera & D. P. DeWitt, Fundamentals of Heat and Mass Transfer, Table 13.2; from memory).
   const perpendicular = (x: number, y: number, z: number): number => {
     const Hh = z / x;
     const Ww = y / x;
@@ -477,8 +476,8 @@ describe("diffuse: view factors with overhangs and fins", () => {
   };
 
   it.each([90, 30, 120])("point view factors with overhang and fins overlapping, tilt %i°: against brute-force ray casting", (tiltDeg) => {
-    // 400 × 800 rays; the indicator's discretisation error is ≤ 4e-4 here (it was ≤ 1.6e-4 with
-    // 800 × 1600 in our study), hence 1e-3.
+    // 400 × 800 rays; the indicator's discretisation error is ≤ 4e-4 here (≤ 1.6e-4 with
+    // 800 × 1600 rays), hence 1e-3.
     const sh = prepareShading(combined(tiltDeg));
     const cb = Math.cos(deg(tiltDeg));
     const sb = Math.sin(deg(tiltDeg));

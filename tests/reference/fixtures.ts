@@ -1,25 +1,18 @@
-// Shared by the reference tests: the model panes, the comparison rule for printed values and the
-// check of a reference case's expected values.
+// Shared by the reference tests: reading a reference case (by id, by quantity), comparing with its expected
+// values at the case's own tolerance, and the model panes of the optics cases.
 import { expect } from "vitest";
 import { asDegrees, toRadians, type Radians } from "@/lib/physics/units";
 import type { PaneSpec } from "@/lib/physics/optics";
 import type { ExpectedValue, ReferenceCase } from "@/lib/reference-cases/types";
 
+export { caseById, expectedOf } from "@/lib/reference-cases/read";
+
 export const deg = (d: number): Radians => toRadians(asDegrees(d));
 
 /**
- * Compares with a value printed to a given number of decimals. Our tolerance rule for printed values:
- * half a unit in the last printed digit (two correct float64 evaluations agree far more closely).
- */
-export function printed(actual: number, value: string): void {
-  const decimals = value.includes(".") ? value.split(".")[1]!.length : 0;
-  const tol = 0.5 * 10 ** -decimals * (1 + 1e-9);
-  expect(Math.abs(actual - Number(value)), `expected ${value}, got ${actual}`).toBeLessThanOrEqual(tol);
-}
-
-/**
- * |actual − expected| ≤ the expected value's tolerance. The relative slack of 1e-9 on the tolerance only
- * absorbs the binary representation of tolerances such as 5e-7 (the same rule as `printed`).
+ * |actual − expected| ≤ the expected value's tolerance, the rule for values printed to a number of decimals
+ * (half a unit in the last printed digit). The relative slack of 1e-9 on the tolerance only absorbs the binary
+ * representation of tolerances such as 5e-7.
  */
 export function expectValue(actual: number | undefined, e: ExpectedValue, where = ""): void {
   const what = `${where}${where ? " " : ""}${e.quantity}`;
@@ -27,6 +20,16 @@ export function expectValue(actual: number | undefined, e: ExpectedValue, where 
   expect(Math.abs(actual! - e.value), `${what}: expected ${e.value} ± ${e.tolerance.abs}, got ${actual}`).toBeLessThanOrEqual(
     e.tolerance.abs * (1 + 1e-9),
   );
+}
+
+/** |actual − expected| ≤ tolerance exactly, for a bound stated as "half a unit" of a recorded value. */
+export function expectAtMost(actual: number, e: ExpectedValue): void {
+  expect(Math.abs(actual - e.value), `${e.quantity}: expected ${e.value}, got ${actual}`).toBeLessThanOrEqual(e.tolerance.abs);
+}
+
+/** |actual − expected| < tolerance (strict), for tolerances that are an error budget rather than a printed digit. */
+export function expectBelow(actual: number, e: ExpectedValue): void {
+  expect(Math.abs(actual - e.value), `${e.quantity}: expected ${e.value}, got ${actual}`).toBeLessThan(e.tolerance.abs);
 }
 
 /** Checks every expected value of a case against the computed quantities, by quantity name. */
@@ -56,17 +59,3 @@ export const paneFromMm = (p: { readonly thicknessMm: number; readonly refractiv
   refractiveIndex: p.refractiveIndex,
   absorptionPerM: p.absorptionPerMm * 1000,
 });
-
-/** The case with the given id (a test that reads a value from another case fails loudly if it is gone). */
-export function caseById<I>(cases: readonly ReferenceCase<I>[], id: string): ReferenceCase<I> {
-  const c = cases.find((x) => x.id === id);
-  if (!c) throw new Error(`no reference case ${id}`);
-  return c;
-}
-
-/** The expected value of a quantity in a case. */
-export function expectedOf(c: ReferenceCase, quantity: string): ExpectedValue {
-  const e = c.expected.find((x) => x.quantity === quantity);
-  if (!e) throw new Error(`case ${c.id} has no expected ${quantity}`);
-  return e;
-}

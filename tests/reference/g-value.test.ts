@@ -21,17 +21,9 @@ import {
 } from '@/lib/physics/g-value';
 import { uValueEn673, type GlazingThermalInput } from '@/lib/physics/u-value';
 import { gValueDomain, type GValueCase, type GValueCaseInput } from '@/lib/reference-cases/g-value';
+import { caseById, expectedOf } from './fixtures';
 
-const caseById = (id: string): GValueCase => {
-  const c = gValueDomain.cases.find((x) => x.id === id);
-  if (!c) throw new Error(`unknown case ${id}`);
-  return c;
-};
-const expectedOf = (c: GValueCase, quantity: string) => {
-  const e = c.expected.find((x) => x.quantity === quantity);
-  if (!e) throw new Error(`${c.id}: no expected ${quantity}`);
-  return e;
-};
+const gValueCase = (id: string): GValueCase => caseById(gValueDomain.cases, id);
 const opticsOf = (c: GValueCase) => {
   if (!c.input.optics) throw new Error(`${c.id} has no optical input`);
   return c.input.optics;
@@ -61,7 +53,7 @@ const double6Air16: GlazingThermalInput = {
 
 describe('single pane', () => {
   // EN 410 single glazing (from memory): q_i = α_e h_i/(h_e + h_i) → N = 8/31 = 0.258065.
-  const factor = caseById('g-value/single-6/factor');
+  const factor = gValueCase('g-value/single-6/factor');
   it('N = h_i / (h_e + h_i) = 8/31', () => {
     const r = secondaryHeatTransferFactorsEn410(toUnit(factor.input.unit));
     const n = expectedOf(factor, 'factors[0]');
@@ -101,7 +93,7 @@ describe('single pane', () => {
 });
 
 describe('double glazing 6 / 16 air / 6, uncoated', () => {
-  const network = caseById('g-value/double-6-16air-6/network');
+  const network = gValueCase('g-value/double-6-16air-6/network');
   const r = secondaryHeatTransferFactorsEn410(toUnit(network.input.unit));
   const hs = expectedOf(network, 'gaps[0].conductanceWPerM2K');
   const lambda = expectedOf(network, 'conductancesBetweenPanesWPerM2K[0]');
@@ -127,7 +119,7 @@ describe('double glazing 6 / 16 air / 6, uncoated', () => {
   // with the printed Λ = 4.99470 must equal Σ N_k α_k (closed-form identity; the printed Λ carries
   // 5e-6 → < 1e-7 in q_i for α ≤ 0.2).
   it('Σ N_k α_k equals the EN 410 double-glazing formula', () => {
-    const [a1, a2] = opticsOf(caseById('g-value/double-6-16air-6/0deg')).absorptances as [number, number];
+    const [a1, a2] = opticsOf(gValueCase('g-value/double-6-16air-6/0deg')).absorptances as [number, number];
     const l = lambda.value;
     const en410 = ((a1 + a2) / 23 + a2 / l) / (1 / 23 + 1 / 8 + 1 / l);
     expect(Math.abs(secondaryHeatTransfer([a1, a2], r.factors) - en410)).toBeLessThan(1e-7);
@@ -148,9 +140,9 @@ describe('double glazing 6 / 16 air / 6, uncoated', () => {
 
   // "If Λ = h_s (gap only), g(0) = 0.740801": the glass-conduction choice moves g by ~0.0006.
   it('Λ = h_s only: the glass-conduction choice moves g(0) by more than 4e-4', () => {
-    const gapOnly = caseById('g-value/double-6-16air-6/0deg/gap-only');
+    const gapOnly = gValueCase('g-value/double-6-16air-6/0deg/gap-only');
     expect(gapOnly.input.glassConduction).toBe('none');
-    const withGlass = caseById('g-value/double-6-16air-6/0deg');
+    const withGlass = gValueCase('g-value/double-6-16air-6/0deg');
     const noGlass = secondaryHeatTransferFactorsEn410(toUnit(gapOnly.input.unit), { glassConduction: 'none' });
     expect(noGlass.conductancesBetweenPanesWPerM2K[0]).toBeCloseTo(noGlass.thermal.gaps[0]!.conductanceWPerM2K, 12);
     const o = opticsOf(gapOnly);

@@ -17,25 +17,17 @@ import {
   type GasProperties,
 } from '@/lib/physics/gas-properties';
 import { gasPropertiesDomain, type GasPropertiesCase } from '@/lib/reference-cases/gas-properties';
+import { caseById, expectedOf } from './fixtures';
 
-const caseById = (id: string): GasPropertiesCase => {
-  const c = gasPropertiesDomain.cases.find((x) => x.id === id);
-  if (!c) throw new Error(`unknown case ${id}`);
-  return c;
-};
-const expectedValue = (c: GasPropertiesCase, quantity: string) => {
-  const e = c.expected.find((x) => x.quantity === quantity);
-  if (!e) throw new Error(`${c.id}: no expected ${quantity}`);
-  return e;
-};
+const gasCase = (id: string): GasPropertiesCase => caseById(gasPropertiesDomain.cases, id);
 
 const KEYS = ['densityKgPerM3', 'dynamicViscosityPaS', 'conductivityWPerMK', 'specificHeatJPerKgK'] as const;
 
 /** ρ [kg/m³], μ [kg/(m·s)], λ [W/(mK)], c [J/(kg·K)] at 10 °C: EN 673:2011 clause 6 table (from memory). */
 const en673Table10C = Object.fromEntries(
   (['air', 'argon', 'krypton'] as const).map((name) => {
-    const c = caseById(`gas-properties/${name}/10C`);
-    return [name, Object.fromEntries(KEYS.map((k) => [k, expectedValue(c, k).value])) as unknown as GasProperties];
+    const c = gasCase(`gas-properties/${name}/10C`);
+    return [name, Object.fromEntries(KEYS.map((k) => [k, expectedOf(c, k).value])) as unknown as GasProperties];
   }),
 ) as Record<GasName, GasProperties>;
 
@@ -61,9 +53,9 @@ describe('EN 673 gas table at 10 °C', () => {
 
   // Pr = μc/λ printed to 6 decimals → tolerance 5e-7 (scripts/reference/gas-properties.ts).
   for (const id of ['gas-properties/air/prandtl', 'gas-properties/argon/prandtl']) {
-    const c = caseById(id);
+    const c = gasCase(id);
     it(c.label, () => {
-      const e = expectedValue(c, 'prandtl');
+      const e = expectedOf(c, 'prandtl');
       expect(Math.abs(pr(gasPropertiesEn673(c.input.gas)) - e.value)).toBeLessThan(e.tolerance.abs);
     });
   }
@@ -72,22 +64,22 @@ describe('EN 673 gas table at 10 °C', () => {
 describe('mixtures (EN 673: properties linear in volume fraction)', () => {
   // Closed form P_mix = Σ F_i P_i with the EN 673 table: ρ, c to float64 rounding; μ and λ as the ratio
   // to the expected value, to 12 decimals.
-  const mixed = caseById('gas-properties/argon90-air10/mixed');
+  const mixed = gasCase('gas-properties/argon90-air10/mixed');
   it(mixed.label, () => {
     const m = gasPropertiesEn673(mixed.input.gas);
-    expect(m.densityKgPerM3).toBeCloseTo(expectedValue(mixed, 'densityKgPerM3').value, 12);
-    expect(m.dynamicViscosityPaS / expectedValue(mixed, 'dynamicViscosityPaS').value).toBeCloseTo(1, 12);
-    expect(m.conductivityWPerMK / expectedValue(mixed, 'conductivityWPerMK').value).toBeCloseTo(1, 12);
-    expect(m.specificHeatJPerKgK).toBeCloseTo(expectedValue(mixed, 'specificHeatJPerKgK').value, 9);
+    expect(m.densityKgPerM3).toBeCloseTo(expectedOf(mixed, 'densityKgPerM3').value, 12);
+    expect(m.dynamicViscosityPaS / expectedOf(mixed, 'dynamicViscosityPaS').value).toBeCloseTo(1, 12);
+    expect(m.conductivityWPerMK / expectedOf(mixed, 'conductivityWPerMK').value).toBeCloseTo(1, 12);
+    expect(m.specificHeatJPerKgK).toBeCloseTo(expectedOf(mixed, 'specificHeatJPerKgK').value, 9);
   });
 
   // Pr of the mixture from the mixed properties (6 decimals → 5e-7). The 90 % Ar U values of
   // u-value.test.ts confirm that all four properties mix linearly.
-  const mixedPr = caseById('gas-properties/argon90-air10/prandtl');
+  const mixedPr = gasCase('gas-properties/argon90-air10/prandtl');
   it('mixes μ, c and λ separately (Pr of the mixture is not the mixed Pr)', () => {
     const m = gasPropertiesEn673(mixedPr.input.gas);
     const prMix = pr(m);
-    const e = expectedValue(mixedPr, 'prandtl');
+    const e = expectedOf(mixedPr, 'prandtl');
     expect(Math.abs(prMix - e.value)).toBeLessThan(e.tolerance.abs);
     // A naive mixing of Pr itself would give 0.9·0.666933 + 0.1·0.711173 = 0.671357.
     expect(Math.abs(prMix - 0.671357)).toBeGreaterThan(0.01);

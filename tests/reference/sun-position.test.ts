@@ -14,7 +14,7 @@ import { describe, expect, it } from "vitest";
 import { sunPositionSuncalc, sunTrack } from "@/lib/physics/sun-position";
 import { sunPosition, type SunInstantInput, type SunPositionInput, type SunTransitInput, type SunYearInput } from "@/lib/reference-cases/sun-position";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { expectAtMost, expectBelow, expectedOf } from "./case-check";
+import { expectAtMost, expectBelow, expectedOf } from "./fixtures";
 
 const RAD = 180 / Math.PI;
 

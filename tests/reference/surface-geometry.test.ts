@@ -24,8 +24,7 @@ import {
 } from "@/lib/physics/surface-geometry";
 import { incidence, type IncidenceInput } from "@/lib/reference-cases/incidence";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { expectBelow, expectedOf, expectPrinted } from "./case-check";
-import { deg } from "./fixtures";
+import { deg, expectBelow, expectedOf, expectValue } from "./fixtures";
 
 const south = surfaceFrame(surfaceOrientationDeg(180, 90));
 const cosOnSouth = (alt: number, az: number): number => {
@@ -45,9 +44,9 @@ describe("angle of incidence: vertical south façade (β = 90°, az_surf = 180°
   it.each(rows)("$label", (c) => {
     const { sunAzimuthDeg: az } = c.input;
     const alt = altitudeOf(c.input);
-    expectPrinted(cosOnSouth(alt, az), expectedOf(c, "cosTheta"));
-    expectPrinted(cosIncidenceFromAngles(deg(alt), deg(az), south.orientation), expectedOf(c, "cosTheta"));
-    expectPrinted(angleOfIncidenceDeg(alt, az, c.input.surfaceAzimuthDeg, c.input.surfaceTiltDeg), expectedOf(c, "thetaDeg"));
+    expectValue(cosOnSouth(alt, az), expectedOf(c, "cosTheta"));
+    expectValue(cosIncidenceFromAngles(deg(alt), deg(az), south.orientation), expectedOf(c, "cosTheta"));
+    expectValue(angleOfIncidenceDeg(alt, az, c.input.surfaceAzimuthDeg, c.input.surfaceTiltDeg), expectedOf(c, "thetaDeg"));
     expect(beamReachesSurface(Math.sin(deg(alt)), cosOnSouth(alt, az)) ? 1 : 0).toBe(expectedOf(c, "beamReachesSurface").value);
   });
 
@@ -65,7 +64,7 @@ describe("angle of incidence: vertical south façade (β = 90°, az_surf = 180°
   it(behind.label, () => {
     const { sunAzimuthDeg: az, surfaceAzimuthDeg, surfaceTiltDeg } = behind.input;
     const alt = altitudeOf(behind.input);
-    expectPrinted(cosOnSouth(alt, az), expectedOf(behind, "cosTheta"));
+    expectValue(cosOnSouth(alt, az), expectedOf(behind, "cosTheta"));
     expectBelow(angleOfIncidenceDeg(alt, az, surfaceAzimuthDeg, surfaceTiltDeg), expectedOf(behind, "thetaDeg"));
     expect(beamReachesSurface(Math.sin(deg(alt)), cosOnSouth(alt, az)) ? 1 : 0).toBe(expectedOf(behind, "beamReachesSurface").value);
   });
@@ -75,7 +74,7 @@ describe("angle of incidence: other surfaces", () => {
   const others = ["incidence/east-facade/alt30-az120", "incidence/roof-30/alt50-az160"].map(caseById);
   it.each(others)("$label", (c) => {
     const i = c.input;
-    expectPrinted(angleOfIncidenceDeg(altitudeOf(i), i.sunAzimuthDeg, i.surfaceAzimuthDeg, i.surfaceTiltDeg), expectedOf(c, "thetaDeg"));
+    expectValue(angleOfIncidenceDeg(altitudeOf(i), i.sunAzimuthDeg, i.surfaceAzimuthDeg, i.surfaceTiltDeg), expectedOf(c, "thetaDeg"));
   });
 
   it("horizontal surface: θ = zenith for any sun azimuth and any surface azimuth (closed form)", () => {
@@ -95,7 +94,7 @@ describe("angle of incidence: other surfaces", () => {
     const theta = angleOfIncidenceDeg(altitudeOf(i), i.sunAzimuthDeg, i.surfaceAzimuthDeg, i.surfaceTiltDeg);
     const e = expectedOf(c, "thetaDeg");
     if (c.source.kind === "published") expectBelow(theta, e);
-    else expectPrinted(theta, e);
+    else expectValue(theta, e);
   });
 });
 

@@ -24,6 +24,7 @@ import {
 } from '@/lib/physics/u-value';
 import type { GasFill } from '@/lib/physics/gas-properties';
 import { uValueDomain, type UValueCase, type UValueCaseInput } from '@/lib/reference-cases/u-value';
+import { caseById, expectedOf } from './fixtures';
 
 const MM = 1e-3;
 const AR90: GasFill = { argon: 0.9, air: 0.1 };
@@ -40,16 +41,7 @@ const double = (gapMm: number, gas: GasFill, e = 0.837): GlazingThermalInput => 
   gaps: [{ widthM: gapMm * MM, gas }],
 });
 type UnitInput = Extract<UValueCaseInput, { kind: 'unit' }>;
-const caseById = (id: string): UValueCase => {
-  const c = uValueDomain.cases.find((x) => x.id === id);
-  if (!c) throw new Error(`unknown case ${id}`);
-  return c;
-};
-const expectedOf = (c: UValueCase, quantity: string) => {
-  const e = c.expected.find((x) => x.quantity === quantity);
-  if (!e) throw new Error(`${c.id}: no expected ${quantity}`);
-  return e;
-};
+const uValueCase = (id: string): UValueCase => caseById(uValueDomain.cases, id);
 const unitInput = (c: UValueCase): UnitInput => {
   if (c.input.kind !== 'unit') throw new Error(`${c.id} is not a unit case`);
   return c.input;
@@ -90,7 +82,7 @@ describe('EN 673 check table (every row)', () => {
   });
 
   for (const row of tableCases) {
-    const he25 = caseById(`${row.id}/he25`);
+    const he25 = uValueCase(`${row.id}/he25`);
     const published = uValueDomain.cases.find((c) => c.id === `${row.id}/published-rounded`);
     const u = expectedOf(row, 'uValueWPerM2K');
     const rounded = expectedOf(row, 'uValueRoundedToTenth');
@@ -139,13 +131,13 @@ describe('EN 673 check table (every row)', () => {
 
   // The 4/12 air row has Nu = 1, the triples have ΔT 7.5 K per gap and Nu = 1.
   it('4/12 air only conducts; the argon triple splits ΔT 7.5 / 7.5 K with Nu = 1', () => {
-    const conducts = caseById('u-value/4-12air-4/conduction-only');
+    const conducts = uValueCase('u-value/4-12air-4/conduction-only');
     const d = uValueEn673(toUnit(unitInput(conducts)));
     expect(d.gaps[0]!.convective).toBe(false);
     // Nu = 1 exactly; closed form h_g = λ/s = 0.02496 / 0.012 = 2.08 W/m²K when Nu = 1 (12 decimals).
     expect(d.gaps[0]!.nusselt).toBe(expectedOf(conducts, 'gap.nusselt').value);
     expect(d.gaps[0]!.gasConductanceWPerM2K).toBeCloseTo(expectedOf(conducts, 'gap.gasConductanceWPerM2K').value, 12);
-    const split = caseById('u-value/4-16ar-4-16ar-4-e0.03/split');
+    const split = uValueCase('u-value/4-16ar-4-16ar-4-e0.03/split');
     const t = uValueEn673(toUnit(unitInput(split)));
     for (const g of t.gaps) {
       expect(g.temperatureDifferenceK).toBeCloseTo(expectedOf(split, 'gap.temperatureDifferenceK').value, 9);
@@ -167,7 +159,7 @@ describe('single glazing', () => {
 
 describe('intermediate values', () => {
   // 4/16 air/4 uncoated: h_r, Gr, Pr, Gr·Pr, Nu, h_g. Tolerances: half a printed unit.
-  const air = caseById('u-value/4-16air-4/intermediate');
+  const air = uValueCase('u-value/4-16air-4/intermediate');
   it(air.label, () => {
     const gaps = uValueEn673(toUnit(unitInput(air))).gaps;
     expectGapValues(air, gaps);
@@ -179,7 +171,7 @@ describe('intermediate values', () => {
   });
 
   // argon, 16 mm, ΔT 15 K: Gr, Pr, Nu.
-  const argon = caseById('u-value/4-16ar-4/intermediate');
+  const argon = uValueCase('u-value/4-16ar-4/intermediate');
   it(argon.label, () => {
     expectGapValues(argon, uValueEn673(toUnit(unitInput(argon))).gaps);
   });
@@ -199,10 +191,10 @@ describe('intermediate values', () => {
   const internal = uValueDomain.cases.filter((c) => c.input.kind === 'internal-coefficient');
   it('h_i for room-side ε 0.837 / 0.2 / 0.1', () => {
     expect(internal).toHaveLength(3);
-    const uncoated = expectedOf(caseById('u-value/internal/0.837'), 'internalCoefficientWPerM2K');
+    const uncoated = expectedOf(uValueCase('u-value/internal/0.837'), 'internalCoefficientWPerM2K');
     expect(internalHeatTransferCoefficientEn673(0.837)).toBeCloseTo(uncoated.value, 12);
     for (const id of ['u-value/internal/0.2', 'u-value/internal/0.1']) {
-      const c = caseById(id);
+      const c = uValueCase(id);
       if (c.input.kind !== 'internal-coefficient') throw new Error('unreachable');
       const e = expectedOf(c, 'internalCoefficientWPerM2K');
       expect(Math.abs(internalHeatTransferCoefficientEn673(c.input.roomSideEmissivity) - e.value), id).toBeLessThan(e.tolerance.abs);
@@ -210,7 +202,7 @@ describe('intermediate values', () => {
   });
 
   it('h_i follows the innermost (room-side) surface only', () => {
-    const lowE = expectedOf(caseById('u-value/internal/0.2'), 'internalCoefficientWPerM2K');
+    const lowE = expectedOf(uValueCase('u-value/internal/0.2'), 'internalCoefficientWPerM2K');
     const coatedInside = uValueEn673({ panes: [pane(4), pane(4, 0.837, 0.2)], gaps: [{ widthM: 0.016, gas: 'air' }] });
     expect(coatedInside.roomSideEmissivity).toBe(0.2);
     expect(Math.abs(coatedInside.internalCoefficientWPerM2K - lowE.value)).toBeLessThan(lowE.tolerance.abs);
@@ -223,7 +215,7 @@ describe('intermediate values', () => {
 
 describe('onset of convection', () => {
   // ΔT 15 K: Nu reaches 1 at Gr·Pr = 6782.66; widths printed to 0.01 mm → 0.005 mm.
-  const threshold = caseById('u-value/onset/threshold');
+  const threshold = uValueCase('u-value/onset/threshold');
   if (threshold.input.kind !== 'nusselt') throw new Error('threshold case must be a nusselt case');
   const thresholdGrPr = threshold.input.grashofPrandtl;
   const onsets = uValueDomain.cases.filter((c) => c.input.kind === 'convection-onset');
@@ -277,8 +269,8 @@ describe('tilt (EN 673 convection constants, from memory)', () => {
   // Nu(0°) = 0.16·7413.30^0.28 (Gr·Pr does not depend on tilt in EN 673). Tolerance: the
   // printed Gr·Pr carries ±0.005, i.e. a relative 7e-7 → ~3e-7 relative in Nu; we allow 1e-6.
   it('4/16 air at 45° and horizontal', () => {
-    const c45 = caseById('u-value/4-16air-4/tilt-45deg');
-    const c0 = caseById('u-value/4-16air-4/tilt-0deg');
+    const c45 = uValueCase('u-value/4-16air-4/tilt-45deg');
+    const c0 = uValueCase('u-value/4-16air-4/tilt-0deg');
     const g45 = uValueEn673(toUnit(unitInput(c45)), toOptions(unitInput(c45)));
     const g0 = uValueEn673(toUnit(unitInput(c0)), toOptions(unitInput(c0)));
     expect(unitInput(c45).tiltDeg).toBe(45);

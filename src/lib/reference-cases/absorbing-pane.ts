@@ -6,14 +6,9 @@
  * face reflectance ρ of each polarisation. Values are printed to about 6 digits; each tolerance is half a unit in
  * the last printed digit unless its reason says otherwise.
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
-
-/** An uncoated pane in the units printed with the cases: millimetres, α per millimetre (natural log, intensity). */
-export interface PaneMm {
-  readonly thicknessMm: number;
-  readonly refractiveIndex: number;
-  readonly absorptionPerMm: number;
-}
+import { ev } from "./build";
+import { LOSSLESS_6MM, LOW_IRON_4MM, PANE_6MM, type PaneMm } from "./panes";
+import type { CaseSource, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
 
 /**
  * One pane in air at an angle of incidence in degrees. Quantities: thetaTDeg, tau (internal transmittance along
@@ -27,13 +22,6 @@ export interface AbsorbingPaneCaseInput {
 
 export const ABSORBING_PANE_SCRIPT = "scripts/reference/absorbing-pane.ts";
 
-/** The model pane: 6 mm, n = 1.52, α = 0.02 /mm (one broadband α: a test fixture, not a real glass). */
-export const PANE_6MM: PaneMm = { thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
-/** Low-iron model pane: 4 mm, n = 1.52, α = 0.002 /mm. */
-export const LOW_IRON_4MM: PaneMm = { thicknessMm: 4, refractiveIndex: 1.52, absorptionPerMm: 0.002 };
-/** The 6 mm pane without absorption. */
-export const LOSSLESS_6MM: PaneMm = { thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0 };
-
 const computed: CaseSource = {
   kind: "computed",
   formula:
@@ -44,20 +32,12 @@ const computed: CaseSource = {
   fromMemory: true,
 };
 
-const P6: Tolerance = { abs: 5e-7, reason: "half a unit in the 6th printed decimal" };
 const THETA_T: Tolerance = {
   abs: 1e-4,
   reason:
     "one unit in the 4th printed decimal: the printed 40.3835 at 80° is mis-rounded (asin(sin 80°/1.52) = " +
     "40.38344514° in a 30-digit evaluation), so this column allows a full unit",
 };
-
-const ev = (quantity: string, value: number, tolerance: Tolerance = P6, unit = "-"): ExpectedValue => ({
-  quantity,
-  unit,
-  value,
-  tolerance,
-});
 
 /** 6 mm pane: θ, θt, τ, T_s, R_s, A_s, T_p, R_p, A_p, T, R, A. */
 const rows6mm: readonly (readonly number[])[] = [

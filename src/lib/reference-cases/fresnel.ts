@@ -5,7 +5,8 @@
  * scripts/reference/fresnel.ts, with the sign convention r_p(0) = r_s(0) = (n1 − n2)/(n1 + n2).
  * Values are printed to about 6 digits; each tolerance is half a unit in the last printed digit.
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
+import { ev, half } from "./build";
+import type { CaseSource, ReferenceCase, ReferenceDomain } from "./types";
 
 /** One interface: incident medium n1 (real), transmitting medium n2 (real), angle of incidence in degrees. */
 export type FresnelCaseInput =
@@ -32,19 +33,8 @@ const computed: CaseSource = {
   fromMemory: true,
 };
 
-const half = (decimals: number): Tolerance => ({
-  abs: [0.5, 0.05, 0.005, 5e-4, 5e-5, 5e-6, 5e-7, 5e-8][decimals]!,
-  reason: decimals === 0 ? "printed as an integer: half a unit" : `half a unit in the ${decimals}${["th", "st", "nd", "rd"][decimals] ?? "th"} printed decimal`,
-});
 const P6 = half(6);
 const P4 = half(4);
-
-const ev = (quantity: string, value: number, tolerance: Tolerance, unit = "-"): ExpectedValue => ({
-  quantity,
-  unit,
-  value,
-  tolerance,
-});
 
 /** Air → glass: θ [deg], n2, R_s, R_p, R, θt [deg] (θt printed as "0" at normal incidence). */
 const airGlassRows: readonly [number, number, number, number, number, number][] = [

@@ -14,6 +14,8 @@
  * ≤ 9e-7 (double glazing, Σ N_k = 0.78); the printed g itself carries 5e-7 → 1.5e-6 in total. N_k and Λ are
  * computed from unrounded EN 673 values: half a printed unit (5e-7 for N, 5e-6 for Λ and h_s).
  */
+import { half } from './build';
+import { LOW_IRON_4MM, PANE_6MM, type PaneMm } from './panes';
 import type { CaseSource, ReferenceCase, ReferenceDomain, Tolerance } from './types';
 
 /** A pane for the thermal network: thickness in mm, corrected emissivities of its two faces. */
@@ -28,18 +30,10 @@ export interface GValueThermalGap {
   readonly gas: 'air' | 'argon' | 'krypton';
 }
 
-/** An uncoated pane described by its glass: broadband refractive index and absorption coefficient. */
-export interface GValueOpticalPane {
-  readonly thicknessMm: number;
-  readonly refractiveIndex: number;
-  /** Natural-log (Beer–Lambert) absorption coefficient for intensity [1/mm]. */
-  readonly absorptionPerMm: number;
-}
-
 /** The printed optics of a stack of uncoated panes in air, at one angle of incidence or hemispherical. */
 export interface GValueOptics {
   /** The panes, outdoor first, each separated by a gas gap (no optical effect). */
-  readonly panes: readonly GValueOpticalPane[];
+  readonly panes: readonly PaneMm[];
   /** Angle of incidence from the normal, or the hemispherical (cosine-weighted, diffuse) average. */
   readonly incidence: { readonly thetaDeg: number } | 'hemispherical';
   readonly solarTransmittance: number;
@@ -74,11 +68,9 @@ const single6 = { panes: [thermalPane(6)], gaps: [] };
 const single4 = { panes: [thermalPane(4)], gaps: [] };
 const double6Air16 = { panes: [thermalPane(6), thermalPane(6)], gaps: [{ widthMm: 16, gas: 'air' as const }] };
 
-const clear6: GValueOpticalPane = { thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
-const lowIron4: GValueOpticalPane = { thicknessMm: 4, refractiveIndex: 1.52, absorptionPerMm: 0.002 };
 
-const HALF_6TH: Tolerance = { abs: 5e-7, reason: 'half a unit in the 6th printed decimal' };
-const HALF_7TH: Tolerance = { abs: 5e-8, reason: 'half a unit in the 7th printed decimal' };
+const HALF_6TH = half(6);
+const HALF_7TH = half(7);
 const G_TOL: Tolerance = {
   abs: 1.5e-6,
   reason: 'printed optical inputs carry ≤ 5e-7 each (≤ 9e-7 in g), the printed g another 5e-7',
@@ -94,7 +86,7 @@ const ORIGIN_HEMISPHERICAL =
   'Duffie & Beckman ch. 5, from memory), by 400-node Gauss–Legendre quadrature';
 
 const optics = (
-  panes: readonly GValueOpticalPane[],
+  panes: readonly PaneMm[],
   incidence: GValueOptics['incidence'],
   solarTransmittance: number,
   solarReflectanceFront: number | undefined,
@@ -152,13 +144,13 @@ export const gValueCases: readonly GValueCase[] = [
     expected: [{ quantity: 'factors[0]', unit: '-', value: 0.258065, tolerance: HALF_6TH }],
     source: EN410,
   },
-  gCase('g-value/single-6/0deg', '6 mm pane (n 1.52, α 0.02/mm) at 0°: g = 0.843195', single6, optics([clear6], { thetaDeg: 0 }, 0.814159, 0.073327, [0.112514]), 0.843195, 0.029036),
-  gCase('g-value/single-6/30deg', '6 mm pane (n 1.52, α 0.02/mm) at 30°: g = 0.836884', single6, optics([clear6], { thetaDeg: 30 }, 0.806259, 0.075069, [0.118671]), 0.836884, 0.030625),
-  gCase('g-value/single-6/60deg', '6 mm pane (n 1.52, α 0.02/mm) at 60°: g = 0.760809', single6, optics([clear6], { thetaDeg: 60 }, 0.726272, 0.139896, [0.133832]), 0.760809, 0.034537),
-  gCase('g-value/single-6/80deg', '6 mm pane (n 1.52, α 0.02/mm) at 80°: g = 0.406516', single6, optics([clear6], { thetaDeg: 80 }, 0.372519, 0.495741, [0.13174]), 0.406516, 0.033997),
+  gCase('g-value/single-6/0deg', '6 mm pane (n 1.52, α 0.02/mm) at 0°: g = 0.843195', single6, optics([PANE_6MM], { thetaDeg: 0 }, 0.814159, 0.073327, [0.112514]), 0.843195, 0.029036),
+  gCase('g-value/single-6/30deg', '6 mm pane (n 1.52, α 0.02/mm) at 30°: g = 0.836884', single6, optics([PANE_6MM], { thetaDeg: 30 }, 0.806259, 0.075069, [0.118671]), 0.836884, 0.030625),
+  gCase('g-value/single-6/60deg', '6 mm pane (n 1.52, α 0.02/mm) at 60°: g = 0.760809', single6, optics([PANE_6MM], { thetaDeg: 60 }, 0.726272, 0.139896, [0.133832]), 0.760809, 0.034537),
+  gCase('g-value/single-6/80deg', '6 mm pane (n 1.52, α 0.02/mm) at 80°: g = 0.406516', single6, optics([PANE_6MM], { thetaDeg: 80 }, 0.372519, 0.495741, [0.13174]), 0.406516, 0.033997),
   // g is linear in T and A, so hemispherical T and A give the hemispherical g.
-  gCase('g-value/single-6/hemispherical', 'hemispherical g of the 6 mm pane = 0.768774', single6, optics([clear6], 'hemispherical', 0.736431, 0.138241, [0.125328]), 0.768774, null),
-  gCase('g-value/low-iron-4/0deg', 'low-iron 4 mm pane (n 1.52, α 0.002/mm) at 0°: g = 0.913030', single4, optics([lowIron4], { thetaDeg: 0 }, 0.910975, 0.08106, [0.007965]), 0.91303, null),
+  gCase('g-value/single-6/hemispherical', 'hemispherical g of the 6 mm pane = 0.768774', single6, optics([PANE_6MM], 'hemispherical', 0.736431, 0.138241, [0.125328]), 0.768774, null),
+  gCase('g-value/low-iron-4/0deg', 'low-iron 4 mm pane (n 1.52, α 0.002/mm) at 0°: g = 0.913030', single4, optics([LOW_IRON_4MM], { thetaDeg: 0 }, 0.910975, 0.08106, [0.007965]), 0.91303, null),
 
   // Double glazing 6 / 16 air / 6, uncoated.
   {
@@ -166,23 +158,23 @@ export const gValueCases: readonly GValueCase[] = [
     label: 'double 6/16 air/6: h_s = 5.31315, Λ = 4.99470 W/m²K, N1 = 0.117926, N2 = 0.660962',
     input: { kind: 'factors', unit: double6Air16 },
     expected: [
-      { quantity: 'gaps[0].conductanceWPerM2K', unit: 'W/(m²K)', value: 5.31315, tolerance: { abs: 5e-6, reason: 'half a unit in the 5th printed decimal' } },
-      { quantity: 'conductancesBetweenPanesWPerM2K[0]', unit: 'W/(m²K)', value: 4.9947, tolerance: { abs: 5e-6, reason: 'half a unit in the 5th printed decimal' } },
+      { quantity: 'gaps[0].conductanceWPerM2K', unit: 'W/(m²K)', value: 5.31315, tolerance: half(5) },
+      { quantity: 'conductancesBetweenPanesWPerM2K[0]', unit: 'W/(m²K)', value: 4.9947, tolerance: half(5) },
       { quantity: 'factors[0]', unit: '-', value: 0.117926, tolerance: HALF_6TH },
       { quantity: 'factors[1]', unit: '-', value: 0.660962, tolerance: HALF_6TH },
     ],
     source: EN410,
   },
-  gCase('g-value/double-6-16air-6/0deg', 'double 6/16 air/6 at 0°: q_i = 0.074939, g = 0.741378', double6Air16, optics([clear6, clear6], { thetaDeg: 0 }, 0.666439, 0.122195, [0.119267, 0.092099]), 0.741378, 0.074939),
-  gCase('g-value/double-6-16air-6/30deg', 'double 6/16 air/6 at 30°: q_i = 0.078482, g = 0.733340', double6Air16, optics([clear6, clear6], { thetaDeg: 30 }, 0.654858, undefined, [0.125812, 0.096293]), 0.73334, 0.078482),
-  gCase('g-value/double-6-16air-6/60deg', 'double 6/16 air/6 at 60°: q_i = 0.083745, g = 0.644037', double6Air16, optics([clear6, clear6], { thetaDeg: 60 }, 0.560292, 0.193315, [0.145683, 0.10071]), 0.644037, 0.083745),
-  gCase('g-value/double-6-16air-6/80deg', 'double 6/16 air/6 at 80°: q_i = 0.062157, g = 0.259083', double6Air16, optics([clear6, clear6], { thetaDeg: 80 }, 0.196926, undefined, [0.161459, 0.065233]), 0.259083, 0.062157),
+  gCase('g-value/double-6-16air-6/0deg', 'double 6/16 air/6 at 0°: q_i = 0.074939, g = 0.741378', double6Air16, optics([PANE_6MM, PANE_6MM], { thetaDeg: 0 }, 0.666439, 0.122195, [0.119267, 0.092099]), 0.741378, 0.074939),
+  gCase('g-value/double-6-16air-6/30deg', 'double 6/16 air/6 at 30°: q_i = 0.078482, g = 0.733340', double6Air16, optics([PANE_6MM, PANE_6MM], { thetaDeg: 30 }, 0.654858, undefined, [0.125812, 0.096293]), 0.73334, 0.078482),
+  gCase('g-value/double-6-16air-6/60deg', 'double 6/16 air/6 at 60°: q_i = 0.083745, g = 0.644037', double6Air16, optics([PANE_6MM, PANE_6MM], { thetaDeg: 60 }, 0.560292, 0.193315, [0.145683, 0.10071]), 0.644037, 0.083745),
+  gCase('g-value/double-6-16air-6/80deg', 'double 6/16 air/6 at 80°: q_i = 0.062157, g = 0.259083', double6Air16, optics([PANE_6MM, PANE_6MM], { thetaDeg: 80 }, 0.196926, undefined, [0.161459, 0.065233]), 0.259083, 0.062157),
   // The glass-conduction choice moves g by ~0.0006.
   gCase(
     'g-value/double-6-16air-6/0deg/gap-only',
     'double 6/16 air/6 at 0° with Λ = h_s (gap only, glass left out): g = 0.740801',
     double6Air16,
-    optics([clear6, clear6], { thetaDeg: 0 }, 0.666439, 0.122195, [0.119267, 0.092099]),
+    optics([PANE_6MM, PANE_6MM], { thetaDeg: 0 }, 0.666439, 0.122195, [0.119267, 0.092099]),
     0.740801,
     null,
     { glassConduction: 'none' },
@@ -193,7 +185,7 @@ export const gValueCases: readonly GValueCase[] = [
     'g-value/double-6-16air-6/hemispherical',
     'hemispherical g of the double 6/16 air/6 = 0.656210',
     double6Air16,
-    optics([clear6, clear6], 'hemispherical', 0.577379, 0.191431, [0.136229, 0.0949614], [HALF_6TH, HALF_7TH]),
+    optics([PANE_6MM, PANE_6MM], 'hemispherical', 0.577379, 0.191431, [0.136229, 0.0949614], [HALF_6TH, HALF_7TH]),
     0.65621,
     null,
   ),

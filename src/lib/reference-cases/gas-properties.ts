@@ -6,6 +6,7 @@
  * (kg/m³, kg/(m·s), W/(m·K), J/(kg·K)). The computed values are reproduced by
  * `npx tsx scripts/reference/gas-properties.ts`.
  */
+import { half } from './build';
 import type { CaseSource, ReferenceCase, ReferenceDomain } from './types';
 
 /** A pure gas as EN 673 tabulates it. */
@@ -64,7 +65,7 @@ const tabulated = (
   source: EN673_GAS_TABLE,
 });
 
-const HALF_6TH_DECIMAL = { abs: 5e-7, reason: 'half a unit in the 6th printed decimal' } as const;
+const HALF_6TH_DECIMAL = half(6);
 
 export const gasPropertiesCases: readonly GasPropertiesCase[] = [
   tabulated('air', 1.232, 1.761e-5, 2.496e-2, 1008),

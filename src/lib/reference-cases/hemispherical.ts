@@ -6,21 +6,16 @@
  * 400-node Gauss–Legendre rule (or with the node count a quadrature case names). Each tolerance is half a unit in
  * the last printed digit.
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
-
-/** An uncoated pane in millimetres, α per millimetre (natural log, intensity). */
-export interface HemisphericalPaneMm {
-  readonly thicknessMm: number;
-  readonly refractiveIndex: number;
-  readonly absorptionPerMm: number;
-}
+import { ev, half } from "./build";
+import { LOW_IRON_4MM, PANE_6MM, type PaneMm } from "./panes";
+import type { CaseSource, ReferenceCase, ReferenceDomain } from "./types";
 
 /**
  * Uncoated panes from outdoors inwards. `nodes`: a quadrature-accuracy case, the integral evaluated with that many
  * Gauss–Legendre nodes; without it, the converged integral. Quantities: T, Rf and the front absorptances A1, A2, …
  */
 export interface HemisphericalCaseInput {
-  readonly panes: readonly HemisphericalPaneMm[];
+  readonly panes: readonly PaneMm[];
   readonly nodes?: number;
 }
 
@@ -37,20 +32,6 @@ const computed: CaseSource = {
   fromMemory: true,
 };
 
-const half = (decimals: number): Tolerance => ({
-  abs: [0.5, 0.05, 0.005, 5e-4, 5e-5, 5e-6, 5e-7, 5e-8, 5e-9][decimals]!,
-  reason: `half a unit in the ${decimals}${["th", "st", "nd", "rd"][decimals] ?? "th"} printed decimal`,
-});
-const P6 = half(6);
-const ev = (quantity: string, value: number, tolerance: Tolerance = P6): ExpectedValue => ({
-  quantity,
-  unit: "-",
-  value,
-  tolerance,
-});
-
-const PANE_6MM: HemisphericalPaneMm = { thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
-const LOW_IRON_4MM: HemisphericalPaneMm = { thicknessMm: 4, refractiveIndex: 1.52, absorptionPerMm: 0.002 };
 
 export const single6mmCase: ReferenceCase<HemisphericalCaseInput> = {
   id: "hemispherical/6mm",

@@ -4,6 +4,7 @@
  * Inputs in degrees: sun altitude (or zenith) and azimuth clockwise from north; surface azimuth of the outward
  * normal's horizontal projection (south = 180) and tilt from horizontal (0 = facing up, 90 = vertical façade).
  */
+import { half } from "./build";
 import type { CaseSource, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
 
 export interface IncidenceInput {
@@ -30,8 +31,8 @@ const spaReport =
   "I. Reda & A. Andreas, Solar Position Algorithm for Solar Radiation Applications, NREL/TP-560-34302, 2004 (rev. 2008), " +
   "worked example: incidence on a surface of slope 30°, azimuth rotation −10° (table number not checked)";
 
-const half6: Tolerance = { abs: 0.5 * 10 ** -6, reason: "half a unit in the 6th printed decimal" };
-const half4: Tolerance = { abs: 0.5 * 10 ** -4, reason: "half a unit in the 4th printed decimal" };
+const half6 = half(6);
+const half4 = half(4);
 const yesNo: Tolerance = { abs: 0, reason: "yes (1) or no (0): exact" };
 
 const cos = (value: number, tolerance: Tolerance = half6) => ({ quantity: "cosTheta", unit: "-", value, tolerance });

@@ -4,7 +4,8 @@
  *
  * Inputs as the sources print them: day of year, angles in degrees, elevation in metres, irradiance in W/m².
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
+import { printed as p } from "./build";
+import type { CaseSource, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
 
 /** Extraterrestrial normal irradiance on a day of the year. */
 export interface ExtraterrestrialInput {
@@ -173,19 +174,7 @@ const totals: CaseSource = {
   script,
 };
 
-/** Half a unit in the last printed decimal. */
-const half = (decimals: number): Tolerance => ({
-  abs: 0.5 * 10 ** -decimals,
-  reason: `half a unit in the ${decimals === 1 ? "1st" : decimals === 2 ? "2nd" : decimals === 3 ? "3rd" : `${decimals}th`} printed decimal`,
-});
 const exact: Tolerance = { abs: 0, reason: "an exact table entry or bin number" };
-/** An expected value printed to as many decimals as `printed` shows. */
-const p = (quantity: string, unit: string, printed: string): ExpectedValue => ({
-  quantity,
-  unit,
-  value: Number(printed),
-  tolerance: half(printed.includes(".") ? printed.split(".")[1]!.length : 0),
-});
 
 const spencerRows: [number, string, string][] = [
   [1, "1.035050", "1413.98"],

@@ -5,18 +5,13 @@
  * Every expected value is computed independently, in float64, by scripts/reference/layer-stack.ts. Values are
  * printed to 6 decimals; each tolerance is half a unit in the 6th decimal.
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
-
-/** An uncoated pane in millimetres, α per millimetre (natural log, intensity). */
-export interface StackPaneMm {
-  readonly thicknessMm: number;
-  readonly refractiveIndex: number;
-  readonly absorptionPerMm: number;
-}
+import { ev } from "./build";
+import { PANE_6MM, type PaneMm } from "./panes";
+import type { CaseSource, ReferenceCase, ReferenceDomain } from "./types";
 
 /** A layer: an uncoated pane (slab per polarisation), or a layer given by its own (T, Rf, Rb), the same for s and p. */
 export type StackLayer =
-  | { readonly kind: "pane"; readonly pane: StackPaneMm }
+  | { readonly kind: "pane"; readonly pane: PaneMm }
   | { readonly kind: "given"; readonly T: number; readonly Rf: number; readonly Rb: number };
 
 /**
@@ -43,11 +38,8 @@ const computed: CaseSource = {
   fromMemory: true,
 };
 
-const P6: Tolerance = { abs: 5e-7, reason: "half a unit in the 6th printed decimal" };
-const ev = (quantity: string, value: number): ExpectedValue => ({ quantity, unit: "-", value, tolerance: P6 });
-
 /** The 6 mm model pane: n = 1.52, α = 0.02 /mm. */
-const pane6: StackLayer = { kind: "pane", pane: { thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } };
+const pane6: StackLayer = { kind: "pane", pane: PANE_6MM };
 
 export const double0Case: ReferenceCase<LayerStackCaseInput> = {
   id: "layer-stack/double-6-6/0deg",

@@ -6,7 +6,8 @@
  * Every expected value is computed independently, in float64, by scripts/reference/measured-pane.ts. Values are
  * printed to about 6 digits; each tolerance is half a unit in the last printed digit unless its reason says otherwise.
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
+import { ev, half } from "./build";
+import type { CaseSource, ReferenceCase, ReferenceDomain } from "./types";
 
 export type MeasuredPaneCaseInput =
   /**
@@ -47,18 +48,7 @@ const karlssonRoos: CaseSource = {
   fromMemory: true,
 };
 
-const half = (decimals: number): Tolerance => ({
-  abs: [0.5, 0.05, 0.005, 5e-4, 5e-5, 5e-6, 5e-7, 5e-8][decimals]!,
-  reason: decimals === 0 ? "printed as an integer: half a unit" : `half a unit in the ${decimals}${["th", "st", "nd", "rd"][decimals] ?? "th"} printed decimal`,
-});
 const P6 = half(6);
-
-const ev = (quantity: string, value: number, tolerance: Tolerance = P6, unit = "-"): ExpectedValue => ({
-  quantity,
-  unit,
-  value,
-  tolerance,
-});
 
 export const workedInversionCase: ReferenceCase<MeasuredPaneCaseInput> = {
   id: "measured-pane/inversion/T0.830-R0.075-6mm",

@@ -6,7 +6,8 @@
  * head; fins of depth F set back E from the jambs; façade azimuth (south = 180) and the sun's altitude and
  * azimuth (clockwise from north).
  */
-import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain, Tolerance } from "./types";
+import { printed as p } from "./build";
+import type { CaseSource, ReferenceCase, ReferenceDomain } from "./types";
 
 export interface ShadingInput {
   readonly windowWidthM: number;
@@ -28,17 +29,6 @@ const geometry: CaseSource = {
   script: "scripts/reference/shading.ts",
   fromMemory: true,
 };
-
-const half = (decimals: number): Tolerance => ({
-  abs: 0.5 * 10 ** -decimals,
-  reason: decimals === 0 ? "half a unit (the value is printed without decimals)" : `half a unit in printed decimal ${decimals}`,
-});
-const p = (quantity: string, unit: string, printed: string): ExpectedValue => ({
-  quantity,
-  unit,
-  value: Number(printed),
-  tolerance: half(printed.includes(".") ? printed.split(".")[1]!.length : 0),
-});
 
 /** The worked-example window: W = 1.5, H = 1.2, P = 0.6, G = 0.3, F = 0.4, E = 0, on a south façade. */
 const window = {

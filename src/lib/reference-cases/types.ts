@@ -2,7 +2,8 @@
  * Shapes shared by the reference-case modules: the check values the tests run and the validation report shows.
  *
  * A case module (`src/lib/reference-cases/<domain>.ts`) is pure data: inputs, expected values, tolerances and the
- * origin of every expected value. It imports nothing but these types, so tests, scripts and pages can all read it.
+ * origin of every expected value. It imports nothing outside this folder (these types, the builders of build.ts,
+ * the model panes of panes.ts), so tests, scripts and pages can all read it; read.ts finds a case and a value.
  */
 
 /** Where an expected value comes from. Every case names one; a reader of the repository can open or look it up. */

@@ -11,6 +11,7 @@
  * printed to 2 decimals → 0.005. Two float64 implementations of the same formulae agree to ~1e-12, so
  * anything outside half a printed unit is a real disagreement.
  */
+import { half } from './build';
 import type { CaseSource, ExpectedValue, ReferenceCase, ReferenceDomain } from './types';
 
 /** A cavity fill: a pure gas or volume fractions summing to 1, e.g. `{ argon: 0.9, air: 0.1 }`. */
@@ -92,9 +93,9 @@ const COMMON_PUBLISHED: CaseSource = {
   note: 'common published rounded U value (or range) for this build-up, from memory; no single source',
 };
 
-const U_TOL = { abs: 5e-6, reason: 'half a unit in the 5th printed decimal' } as const;
-const HALF_6TH = { abs: 5e-7, reason: 'half a unit in the 6th printed decimal' } as const;
-const HALF_2ND = { abs: 0.005, reason: 'half a unit in the 2nd printed decimal' } as const;
+const U_TOL = half(5);
+const HALF_6TH = half(6);
+const HALF_2ND = half(2);
 
 interface Row {
   readonly slug: string;
@@ -182,7 +183,7 @@ export const uValueCases: readonly UValueCase[] = [
       { quantity: 'gap.grashof', unit: '-', value: 10424.05, tolerance: HALF_2ND },
       { quantity: 'gap.prandtl', unit: '-', value: 0.711173, tolerance: HALF_6TH },
       { quantity: 'gap.grashofPrandtl', unit: '-', value: 7413.3, tolerance: HALF_2ND },
-      { quantity: 'gap.nusselt', unit: '-', value: 1.03436, tolerance: { abs: 5e-6, reason: 'half a unit in the 5th printed decimal' } },
+      { quantity: 'gap.nusselt', unit: '-', value: 1.03436, tolerance: half(5) },
       { quantity: 'gap.gasConductanceWPerM2K', unit: 'W/(m²K)', value: 1.613605, tolerance: HALF_6TH },
     ],
     source: EN673,
@@ -194,7 +195,7 @@ export const uValueCases: readonly UValueCase[] = [
     expected: [
       { quantity: 'gap.grashof', unit: '-', value: 13128.23, tolerance: HALF_2ND },
       { quantity: 'gap.prandtl', unit: '-', value: 0.666933, tolerance: HALF_6TH },
-      { quantity: 'gap.nusselt', unit: '-', value: 1.10189, tolerance: { abs: 5e-6, reason: 'half a unit in the 5th printed decimal' } },
+      { quantity: 'gap.nusselt', unit: '-', value: 1.10189, tolerance: half(5) },
     ],
     source: EN673,
   },
