@@ -30,7 +30,6 @@ import { localTimeline as timelineCases, type LocalTimelineCase } from "@/lib/re
 const H = 3_600_000;
 const MIN = 60_000;
 
-const isoRows = (tl: Timeline): string[] => Array.from({ length: tl.length }, (_, i) => tl.iso(i));
 
 /** Day of month of the n-th (1-based) Sunday of a month, or of the last one for n = −1 (JS Date). */
 function sunday(year: number, month1: number, n: number): number {
