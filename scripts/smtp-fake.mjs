@@ -14,7 +14,10 @@ const decodeWords = (s) =>
   s.replace(/=\?([^?]+)\?([QqBb])\?([^?]*)\?=\s*/g, (_, _cs, enc, data) =>
     enc.toUpperCase() === "B"
       ? Buffer.from(data, "base64").toString("utf8")
-      : Buffer.from(data.replace(/_/g, " ").replace(/=([0-9A-F]{2})/gi, (_m, h) => String.fromCharCode(parseInt(h, 16))), "latin1").toString("utf8"),
+      : Buffer.from(
+          data.replace(/_/g, " ").replace(/=([0-9A-F]{2})/gi, (_m, h) => String.fromCharCode(parseInt(h, 16))),
+          "latin1",
+        ).toString("utf8"),
   );
 
 const server = new SMTPServer({

@@ -8,7 +8,14 @@ const coated = {
   kind: "pane",
   thicknessMm: 4,
   emissivityBack: 0.03,
-  measured: { solarTransmittance: 0.55, solarReflectanceFront: 0.22, solarReflectanceBack: 0.27, visibleTransmittance: 0.8, visibleReflectanceFront: 0.05, visibleReflectanceBack: 0.05 },
+  measured: {
+    solarTransmittance: 0.55,
+    solarReflectanceFront: 0.22,
+    solarReflectanceBack: 0.27,
+    visibleTransmittance: 0.8,
+    visibleReflectanceFront: 0.05,
+    visibleReflectanceBack: 0.05,
+  },
 } as const;
 const gap = { kind: "gap", widthMm: 12, gas: "krypton" } as const;
 const angles = Array.from({ length: 91 }, (_, i) => i);

@@ -120,27 +120,29 @@ export async function run(): Promise<void> {
       `${t1.toFixed(3)} ms   target ≤ 0.5 ms   ${verdict(t1 <= 0.5)}`,
   );
   const t1c = timeMs(() => tableAndHemispherical(tripleCoated), 50);
-  console.log(
-    `(1b) same with the outer pane coated (measured T/Rf/Rb): ${t1c.toFixed(3)} ms   target ≤ 0.5 ms   ${verdict(t1c <= 0.5)}`,
-  );
+  console.log(`(1b) same with the outer pane coated (measured T/Rf/Rb): ${t1c.toFixed(3)} ms   target ≤ 0.5 ms   ${verdict(t1c <= 0.5)}`);
 
   // (2) direct evaluation per pane per angle.
   const angles = Array.from({ length: 1000 }, (_, i) => asRadians(((i + 0.5) / 1000) * (Math.PI / 2)));
   const pane = checkAbsorbingPane({ thicknessM: 0.004, refractiveIndex: 1.52, absorptionPerM: 20 });
-  const perPaneChecked = timeMs(() => {
-    for (const th of angles) sink += absorbingPaneOptics(pane, th).T;
-  }, 50) / angles.length;
-  const perPane = timeMs(() => {
-    for (const th of angles) sink += absorbingPaneOpticsUnchecked(pane, th).T;
-  }, 50) / angles.length;
+  const perPaneChecked =
+    timeMs(() => {
+      for (const th of angles) sink += absorbingPaneOptics(pane, th).T;
+    }, 50) / angles.length;
+  const perPane =
+    timeMs(() => {
+      for (const th of angles) sink += absorbingPaneOpticsUnchecked(pane, th).T;
+    }, 50) / angles.length;
   const coatedBand = prepareMeasuredPane({ thicknessM: 0.004, solar: { T: 0.52, Rf: 0.3, Rb: 0.22 } }).solar;
-  const perCoated = timeMs(() => {
-    for (const th of angles) sink += measuredBandAtUnchecked(coatedBand, th).s.T;
-  }, 50) / angles.length;
+  const perCoated =
+    timeMs(() => {
+      for (const th of angles) sink += measuredBandAtUnchecked(coatedBand, th).s.T;
+    }, 50) / angles.length;
   const triple = prepareGlazing(tripleClear);
-  const perTripleAngle = timeMs(() => {
-    for (const th of angles) sink += triple.at(th).solar.T;
-  }, 20) / angles.length;
+  const perTripleAngle =
+    timeMs(() => {
+      for (const th of angles) sink += triple.at(th).solar.T;
+    }, 20) / angles.length;
   const ns = (ms: number): string => `${(ms * 1e6).toFixed(0)} ns`;
   console.log(
     `(2a) uncoated pane, s+p slab, one angle: ${ns(perPane)} (with input checks ${ns(perPaneChecked)})   ` +
@@ -158,13 +160,8 @@ export async function run(): Promise<void> {
   const thetas = cosines.map((u) => Math.acos(u));
   const lpsCos = lookupsPerSecond(table, cosines, false);
   const lpsAngle = lookupsPerSecond(table, thetas, true);
-  console.log(
-    `(3a) table lookups by cos θ: ${(lpsCos / 1e6).toFixed(0)} million/s   target ≥ 50 million/s   ${verdict(lpsCos >= 50e6)}`,
-  );
-  console.log(
-    `(3b) table lookups by θ [rad]: ${(lpsAngle / 1e6).toFixed(0)} million/s   ` +
-      `target ≥ 50 million/s   ${verdict(lpsAngle >= 50e6)}`,
-  );
+  console.log(`(3a) table lookups by cos θ: ${(lpsCos / 1e6).toFixed(0)} million/s   target ≥ 50 million/s   ${verdict(lpsCos >= 50e6)}`);
+  console.log(`(3b) table lookups by θ [rad]: ${(lpsAngle / 1e6).toFixed(0)} million/s   ` + `target ≥ 50 million/s   ${verdict(lpsAngle >= 50e6)}`);
   const tBuild = timeMs(() => {
     sink += AngularTable.fromFunction((th) => triple.at(th).solar.T).cosGridValues[7]!;
   }, 3);

@@ -15,7 +15,10 @@ export async function run(): Promise<void> {
     body: JSON.stringify({ email: demoUser("consultant").email, password: DEMO_PASSWORD }),
   });
   if (signIn.status !== 200) throw new Error(`demo sign-in failed: ${signIn.status}`);
-  const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const cookie = signIn.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
   const pane = { kind: "pane", thicknessMm: 4, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
   const year = new Date().getFullYear();
   const body = JSON.stringify({
@@ -28,7 +31,11 @@ export async function run(): Promise<void> {
   let bytes = 0;
   for (let k = 0; k < 15; k++) {
     const t0 = performance.now();
-    const res = await fetch(`${base}/api/v1/calc/schedule`, { method: "POST", headers: { "content-type": "application/json", cookie, origin: base }, body });
+    const res = await fetch(`${base}/api/v1/calc/schedule`, {
+      method: "POST",
+      headers: { "content-type": "application/json", cookie, origin: base },
+      body,
+    });
     const text = await res.text();
     if (res.status !== 200) throw new Error(`endpoint answered ${res.status}: ${text.slice(0, 200)}`);
     bytes = text.length;

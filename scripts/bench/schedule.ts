@@ -128,15 +128,29 @@ export async function run(): Promise<void> {
   const tDirect = time(direct, 3);
 
   const rows = 72 * siteSeries.timeline.length;
-  console.log(`72 series × ${siteSeries.timeline.length} rows = ${rows.toLocaleString("en")} rows, Perez sky, overhang + fins on every window (medians)`);
+  console.log(
+    `72 series × ${siteSeries.timeline.length} rows = ${rows.toLocaleString("en")} rows, Perez sky, overhang + fins on every window (medians)`,
+  );
   console.log(`  shared per site: timeline + sun + clear sky + Perez coefficients  ${tSite.toFixed(1)} ms`);
   console.log(`  per glazing option (3): angular tables τ(θ), g(θ), hemispherical   ${tTables.toFixed(1)} ms`);
-  console.log(`  per surface (24, one window type): frames, shading, diffuse view factors ${tSurfaces.toFixed(1)} ms (${tSurfacesUncached.toFixed(1)} ms if every window differed)`);
-  console.log(`  hot loops, 72 series, every column                                ${tLoops.toFixed(1)} ms (${((tLoops * 1e6) / rows).toFixed(1)} ns/row)`);
-  console.log(`  whole computation                                                 ${tAll.toFixed(1)} ms   target ≤ 100 ms: ${tAll <= 100 ? "PASS" : "MISS"}`);
-  console.log(`  floor (incidence + τ lookup only)                                 ${tFloor.toFixed(1)} ms (${((tFloor * 1e6) / rows).toFixed(1)} ns/row)`);
-  console.log(`  ratio hot loops / floor ${(tLoops / tFloor).toFixed(2)}×   target ≤ 5×: ${tLoops / tFloor <= 5 ? "PASS" : "MISS"};  whole computation / floor ${(tAll / tFloor).toFixed(2)}×`);
-  console.log(`  direct Fresnel stack at every sunlit hour (${sunlitRows.toLocaleString("en")} evaluations, τ only) ${tDirect.toFixed(0)} ms = ${(tDirect / tLoops).toFixed(1)}× the hot loops`);
+  console.log(
+    `  per surface (24, one window type): frames, shading, diffuse view factors ${tSurfaces.toFixed(1)} ms (${tSurfacesUncached.toFixed(1)} ms if every window differed)`,
+  );
+  console.log(
+    `  hot loops, 72 series, every column                                ${tLoops.toFixed(1)} ms (${((tLoops * 1e6) / rows).toFixed(1)} ns/row)`,
+  );
+  console.log(
+    `  whole computation                                                 ${tAll.toFixed(1)} ms   target ≤ 100 ms: ${tAll <= 100 ? "PASS" : "MISS"}`,
+  );
+  console.log(
+    `  floor (incidence + τ lookup only)                                 ${tFloor.toFixed(1)} ms (${((tFloor * 1e6) / rows).toFixed(1)} ns/row)`,
+  );
+  console.log(
+    `  ratio hot loops / floor ${(tLoops / tFloor).toFixed(2)}×   target ≤ 5×: ${tLoops / tFloor <= 5 ? "PASS" : "MISS"};  whole computation / floor ${(tAll / tFloor).toFixed(2)}×`,
+  );
+  console.log(
+    `  direct Fresnel stack at every sunlit hour (${sunlitRows.toLocaleString("en")} evaluations, τ only) ${tDirect.toFixed(0)} ms = ${(tDirect / tLoops).toFixed(1)}× the hot loops`,
+  );
 
   // Through the endpoint handler: one surface, a full year, validation + compute + JSON text.
   const one = JSON.stringify({ ...body, surfaces: [{ ...first, name: "South", azimuthDeg: 180 }] });
@@ -157,5 +171,7 @@ export async function run(): Promise<void> {
     if (k >= 2) apiTimes.push(performance.now() - t0);
   }
   const tApi = median(apiTimes);
-  console.log(`  endpoint, one surface × 8,760 rows (validation + compute + JSON ${(bytes / 1e6).toFixed(1)} MB, in process) ${tApi.toFixed(0)} ms   target ≤ 200 ms: ${tApi <= 200 ? "PASS" : "MISS"}`);
+  console.log(
+    `  endpoint, one surface × 8,760 rows (validation + compute + JSON ${(bytes / 1e6).toFixed(1)} MB, in process) ${tApi.toFixed(0)} ms   target ≤ 200 ms: ${tApi <= 200 ? "PASS" : "MISS"}`,
+  );
 }

@@ -51,9 +51,7 @@ export interface ScriptScope {
 
 /** The cases a script answers for: every computed case of the domain naming the script, and the closed-form cases if `closedForm`. */
 export function casesOfScript<I>(domain: ReferenceDomain<I>, script: string, closedForm: boolean): readonly ReferenceCase<I>[] {
-  return domain.cases.filter(
-    (c) => (c.source.kind === "computed" && c.source.script === script) || (closedForm && c.source.kind === "closed-form"),
-  );
+  return domain.cases.filter((c) => (c.source.kind === "computed" && c.source.script === script) || (closedForm && c.source.kind === "closed-form"));
 }
 
 /**
@@ -109,7 +107,11 @@ export function printComparison(title: string, rows: readonly ComparisonRow[]): 
     r.within ? "ok" : "OUTSIDE",
   ]);
   const widths = head.map((h, i) => Math.max(h.length, ...body.map((b) => b[i]!.length)));
-  const line = (cells: readonly string[]) => cells.map((cell, i) => cell.padEnd(widths[i]!)).join("  ").trimEnd();
+  const line = (cells: readonly string[]) =>
+    cells
+      .map((cell, i) => cell.padEnd(widths[i]!))
+      .join("  ")
+      .trimEnd();
   console.log(`\n${title}`);
   console.log(line(head));
   console.log(line(widths.map((w) => "-".repeat(w))));

@@ -26,13 +26,13 @@
  *
  * Run: npx tsx scripts/reference/g-value.ts
  */
-import { gValueDomain, type GValueCase, type GValueCaseInput, type GValueOptics } from '@/lib/reference-cases/g-value';
-import type { PaneMm } from '@/lib/reference-cases/panes';
-import type { ReferenceCase } from '@/lib/reference-cases/types';
-import { compareCases, compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
-import { hemispherical } from './hemispherical';
-import { stackAt, type StackResult } from './layer-stack';
-import { EXTERNAL_COEFFICIENT, GLASS_CONDUCTIVITY, internalCoefficient, uValueUnit } from './u-value';
+import { gValueDomain, type GValueCase, type GValueCaseInput, type GValueOptics } from "@/lib/reference-cases/g-value";
+import type { PaneMm } from "@/lib/reference-cases/panes";
+import type { ReferenceCase } from "@/lib/reference-cases/types";
+import { compareCases, compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from "./compare";
+import { hemispherical } from "./hemispherical";
+import { stackAt, type StackResult } from "./layer-stack";
+import { EXTERNAL_COEFFICIENT, GLASS_CONDUCTIVITY, internalCoefficient, uValueUnit } from "./u-value";
 
 // ---------------------------------------------------------------------------------------------------------
 // Optics of uncoated panes: the layer-stack and hemispherical scripts
@@ -43,22 +43,22 @@ export interface StackOptics {
   readonly absorptances: readonly number[];
 }
 
-const asLayers = (panes: readonly PaneMm[]) => panes.map((pane) => ({ kind: 'pane' as const, pane }));
+const asLayers = (panes: readonly PaneMm[]) => panes.map((pane) => ({ kind: "pane" as const, pane }));
 const asOptics = (r: StackResult): StackOptics => ({ solarTransmittance: r.T, solarReflectanceFront: r.Rf, absorptances: r.A });
 
 /**
  * T, R and A_k of uncoated panes in air at angle θ. `polarization: 'per-stack'` solves the whole stack for s
  * and for p and averages the results; 'averaged' averages each pane's s and p first.
  */
-export function stackOptics(panes: readonly PaneMm[], thetaRad: number, polarization: 'per-stack' | 'averaged' = 'per-stack'): StackOptics {
-  return asOptics(stackAt(asLayers(panes), thetaRad, polarization === 'averaged' ? 'averaged' : 'per-polarization'));
+export function stackOptics(panes: readonly PaneMm[], thetaRad: number, polarization: "per-stack" | "averaged" = "per-stack"): StackOptics {
+  return asOptics(stackAt(asLayers(panes), thetaRad, polarization === "averaged" ? "averaged" : "per-polarization"));
 }
 
 /** Hemispherical (cosine-weighted) average ∫_0^{π/2} X(θ) sin 2θ dθ by 400-node Gauss–Legendre, per polarisation. */
 export function hemisphericalOptics(panes: readonly PaneMm[]): StackOptics {
   const layers = asLayers(panes);
   const h = hemispherical((theta) => {
-    const r = stackAt(layers, theta, 'per-polarization');
+    const r = stackAt(layers, theta, "per-polarization");
     return [r.T, r.Rf, ...r.A];
   }, 400);
   return { solarTransmittance: h[0]!, solarReflectanceFront: h[1]!, absorptances: h.slice(2) };
@@ -66,7 +66,7 @@ export function hemisphericalOptics(panes: readonly PaneMm[]): StackOptics {
 
 /** The optics of a case's panes at its incidence, recomputed. */
 export function recomputeOptics(o: GValueOptics): StackOptics {
-  return o.incidence === 'hemispherical' ? hemisphericalOptics(o.panes) : stackOptics(o.panes, (o.incidence.thetaDeg * Math.PI) / 180);
+  return o.incidence === "hemispherical" ? hemisphericalOptics(o.panes) : stackOptics(o.panes, (o.incidence.thetaDeg * Math.PI) / 180);
 }
 
 // ---------------------------------------------------------------------------------------------------------
@@ -78,11 +78,11 @@ export interface Network {
   readonly factors: readonly number[];
 }
 
-export function network(unit: GValueCaseInput['unit'], glassConduction: 'surfaces' | 'none' = 'surfaces'): Network {
+export function network(unit: GValueCaseInput["unit"], glassConduction: "surfaces" | "none" = "surfaces"): Network {
   const u = uValueUnit(unit);
   const last = unit.panes.length - 1;
   const glass = (k: number) => (unit.panes[k]!.thicknessMm / 1000 / GLASS_CONDUCTIVITY) * (k === 0 || k === last ? 1 : 0.5);
-  const resistances = u.gaps.map((g, k) => 1 / g.conductanceWPerM2K + (glassConduction === 'surfaces' ? glass(k) + glass(k + 1) : 0));
+  const resistances = u.gaps.map((g, k) => 1 / g.conductanceWPerM2K + (glassConduction === "surfaces" ? glass(k) + glass(k + 1) : 0));
   const re = 1 / EXTERNAL_COEFFICIENT;
   const ri = 1 / internalCoefficient(unit.panes[last]!.emissivityBack);
   const total = re + resistances.reduce((s, x) => s + x, 0) + ri;
@@ -115,7 +115,7 @@ export function recomputeGValueCase(c: GValueCase): Recomputed {
   return out;
 }
 
-const SCRIPT = 'scripts/reference/g-value.ts';
+const SCRIPT = "scripts/reference/g-value.ts";
 
 /** Every case of the domain this script answers for, next to its recomputation. */
 export function gValueComparison(): ComparisonRow[] {
@@ -129,9 +129,16 @@ function opticalInputCases(): ReferenceCase<GValueOptics>[] {
     const o = c.input.optics;
     if (!o) continue;
     const expected = [
-      { quantity: 'solarTransmittance', unit: '-', value: o.solarTransmittance, tolerance: o.printedRounding },
-      ...(o.solarReflectanceFront === undefined ? [] : [{ quantity: 'solarReflectanceFront', unit: '-', value: o.solarReflectanceFront, tolerance: o.printedRounding }]),
-      ...o.absorptances.map((a, k) => ({ quantity: `absorptances[${k}]`, unit: '-', value: a, tolerance: o.absorptancesRounding?.[k] ?? o.printedRounding })),
+      { quantity: "solarTransmittance", unit: "-", value: o.solarTransmittance, tolerance: o.printedRounding },
+      ...(o.solarReflectanceFront === undefined
+        ? []
+        : [{ quantity: "solarReflectanceFront", unit: "-", value: o.solarReflectanceFront, tolerance: o.printedRounding }]),
+      ...o.absorptances.map((a, k) => ({
+        quantity: `absorptances[${k}]`,
+        unit: "-",
+        value: a,
+        tolerance: o.absorptancesRounding?.[k] ?? o.printedRounding,
+      })),
     ];
     out.push({ id: `${c.id} (optical input)`, label: c.label, input: o, expected, source: c.source });
   }
@@ -140,12 +147,16 @@ function opticalInputCases(): ReferenceCase<GValueOptics>[] {
 
 /** The printed optical inputs of the g cases against the optics recomputed from the named panes. */
 export function opticalInputComparison(): ComparisonRow[] {
-  return compareCases(opticalInputCases(), (c) => {
-    const r = recomputeOptics(c.input);
-    const out: Record<string, number> = { solarTransmittance: r.solarTransmittance, solarReflectanceFront: r.solarReflectanceFront };
-    r.absorptances.forEach((a, k) => (out[`absorptances[${k}]`] = a));
-    return out;
-  }, EXACT_BOUND);
+  return compareCases(
+    opticalInputCases(),
+    (c) => {
+      const r = recomputeOptics(c.input);
+      const out: Record<string, number> = { solarTransmittance: r.solarTransmittance, solarReflectanceFront: r.solarReflectanceFront };
+      r.absorptances.forEach((a, k) => (out[`absorptances[${k}]`] = a));
+      return out;
+    },
+    EXACT_BOUND,
+  );
 }
 
 /** g of the g cases from the recomputed, unrounded optics against the printed g. */
@@ -162,7 +173,7 @@ export function gFromRecomputedOpticsComparison(): ComparisonRow[] {
 }
 
 runWhenMain(import.meta.url, [
-  ['EN 410:2011 g and N_k (g from the printed optical inputs)', gValueComparison],
-  ['Printed optical inputs, recomputed from the named panes', opticalInputComparison],
-  ['g from the recomputed (unrounded) optics', gFromRecomputedOpticsComparison],
+  ["EN 410:2011 g and N_k (g from the printed optical inputs)", gValueComparison],
+  ["Printed optical inputs, recomputed from the named panes", opticalInputComparison],
+  ["g from the recomputed (unrounded) optics", gFromRecomputedOpticsComparison],
 ]);

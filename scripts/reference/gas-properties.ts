@@ -10,11 +10,11 @@
  *
  * Run: npx tsx scripts/reference/gas-properties.ts
  */
-import { gasPropertiesDomain, type GasFillData, type GasNameData, type GasPropertiesCase } from '@/lib/reference-cases/gas-properties';
-import { caseById, expectedOf } from '@/lib/reference-cases/read';
-import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
+import { gasPropertiesDomain, type GasFillData, type GasNameData, type GasPropertiesCase } from "@/lib/reference-cases/gas-properties";
+import { caseById, expectedOf } from "@/lib/reference-cases/read";
+import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from "./compare";
 
-const SCRIPT = 'scripts/reference/gas-properties.ts';
+const SCRIPT = "scripts/reference/gas-properties.ts";
 
 export interface GasData {
   readonly densityKgPerM3: number;
@@ -23,8 +23,8 @@ export interface GasData {
   readonly specificHeatJPerKgK: number;
 }
 
-const GASES: readonly GasNameData[] = ['air', 'argon', 'krypton'];
-const KEYS = ['densityKgPerM3', 'dynamicViscosityPaS', 'conductivityWPerMK', 'specificHeatJPerKgK'] as const;
+const GASES: readonly GasNameData[] = ["air", "argon", "krypton"];
+const KEYS = ["densityKgPerM3", "dynamicViscosityPaS", "conductivityWPerMK", "specificHeatJPerKgK"] as const;
 
 /** The EN 673 table at 10 °C, taken from the published (tabulated) cases of the case module. */
 export function en673GasTable(): Readonly<Record<GasNameData, GasData>> {
@@ -33,10 +33,10 @@ export function en673GasTable(): Readonly<Record<GasNameData, GasData>> {
     const c = caseById(gasPropertiesDomain.cases, `gas-properties/${gas}/10C`);
     const get = (q: string) => expectedOf(c, q).value;
     table[gas] = {
-      densityKgPerM3: get('densityKgPerM3'),
-      dynamicViscosityPaS: get('dynamicViscosityPaS'),
-      conductivityWPerMK: get('conductivityWPerMK'),
-      specificHeatJPerKgK: get('specificHeatJPerKgK'),
+      densityKgPerM3: get("densityKgPerM3"),
+      dynamicViscosityPaS: get("dynamicViscosityPaS"),
+      conductivityWPerMK: get("conductivityWPerMK"),
+      specificHeatJPerKgK: get("specificHeatJPerKgK"),
     };
   }
   return table;
@@ -45,7 +45,7 @@ export function en673GasTable(): Readonly<Record<GasNameData, GasData>> {
 /** Properties of a fill: the pure gas, or every property mixed linearly by volume fraction. */
 export function gasProperties(fill: GasFillData): GasData {
   const table = en673GasTable();
-  if (typeof fill === 'string') return table[fill];
+  if (typeof fill === "string") return table[fill];
   const out = { densityKgPerM3: 0, dynamicViscosityPaS: 0, conductivityWPerMK: 0, specificHeatJPerKgK: 0 };
   for (const gas of GASES) {
     const f = fill[gas] ?? 0;
@@ -70,4 +70,4 @@ export function gasPropertiesComparison(): ComparisonRow[] {
   return compareDomain(gasPropertiesDomain, SCRIPT, recomputeGasPropertiesCase, { rule: EXACT_BOUND, closedForm: true });
 }
 
-runWhenMain(import.meta.url, [['Gas properties at 10 °C (EN 673:2011)', gasPropertiesComparison]]);
+runWhenMain(import.meta.url, [["Gas properties at 10 °C (EN 673:2011)", gasPropertiesComparison]]);

@@ -13,11 +13,7 @@
  *
  * Run: npx tsx scripts/reference/hemispherical.ts
  */
-import {
-  HEMISPHERICAL_SCRIPT,
-  hemisphericalDomain,
-  type HemisphericalCaseInput,
-} from "@/lib/reference-cases/hemispherical";
+import { HEMISPHERICAL_SCRIPT, hemisphericalDomain, type HemisphericalCaseInput } from "@/lib/reference-cases/hemispherical";
 import { stackAt, stackQuantities, type StackResult } from "./layer-stack";
 import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 

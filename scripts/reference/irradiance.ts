@@ -82,7 +82,7 @@ export function transposition(i: TranspositionInput): Record<string, number> {
   const cz = cosd(i.zenithDeg);
   const ct = cz * cosd(i.surfaceTiltDeg) + sind(i.zenithDeg) * sind(i.surfaceTiltDeg) * cosd(i.sunAzimuthDeg - i.surfaceAzimuthDeg);
   const beam = sky.dni * Math.max(ct, 0);
-  const ground = sky.ghi * i.albedo * (1 - cosd(i.surfaceTiltDeg)) / 2;
+  const ground = (sky.ghi * i.albedo * (1 - cosd(i.surfaceTiltDeg))) / 2;
   const viewSky = (1 + cosd(i.surfaceTiltDeg)) / 2;
   const skyIsotropic = sky.dhi * viewSky;
   const ai = sky.dni / e0;
@@ -139,7 +139,8 @@ export function computeIrradiance(c: ReferenceCase<IrradianceInput>): Recomputed
       return { pressurePa: stationPressure(i.elevationM) };
     case "ineichen-perez": {
       const am = kastenYoung(i.zenithDeg);
-      const amAbs = i.airMassScaleHeightM !== undefined ? am * Math.exp(-i.elevationM / i.airMassScaleHeightM) : (am * (i.pressurePa ?? 101325)) / 101325;
+      const amAbs =
+        i.airMassScaleHeightM !== undefined ? am * Math.exp(-i.elevationM / i.airMassScaleHeightM) : (am * (i.pressurePa ?? 101325)) / 101325;
       const r = ineichenPerez(i.zenithDeg, amAbs, i.linkeTurbidity, i.elevationM, i.extraterrestrialWPerM2);
       const given = ineichenPerez(i.zenithDeg, i.printedAirMassAbsolute ?? amAbs, i.linkeTurbidity, i.elevationM, i.extraterrestrialWPerM2);
       return { airMassAbsolute: amAbs, ...r, ghiFromPrintedAirMass: given.ghi, dniFromPrintedAirMass: given.dni };

@@ -13,12 +13,7 @@
  *
  * Run: npx tsx scripts/reference/layer-stack.ts
  */
-import {
-  LAYER_STACK_SCRIPT,
-  layerStackDomain,
-  type LayerStackCaseInput,
-  type StackLayer,
-} from "@/lib/reference-cases/layer-stack";
+import { LAYER_STACK_SCRIPT, layerStackDomain, type LayerStackCaseInput, type StackLayer } from "@/lib/reference-cases/layer-stack";
 import { paneAt } from "./absorbing-pane";
 import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 
@@ -118,10 +113,7 @@ export function stackAt(layers: readonly StackLayer[], theta: number, route: Lay
     case "p":
       return stack(sp.map((l) => l.p));
     case "per-polarization":
-      return mean(
-        stack(sp.map((l) => l.s)),
-        stack(sp.map((l) => l.p)),
-      );
+      return mean(stack(sp.map((l) => l.s)), stack(sp.map((l) => l.p)));
     case "averaged":
       return stack(sp.map((l) => ({ T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) })));
   }

@@ -17,11 +17,7 @@
  *
  * Run: npx tsx scripts/reference/measured-pane.ts
  */
-import {
-  MEASURED_PANE_SCRIPT,
-  measuredPaneDomain,
-  type MeasuredPaneCaseInput,
-} from "@/lib/reference-cases/measured-pane";
+import { MEASURED_PANE_SCRIPT, measuredPaneDomain, type MeasuredPaneCaseInput } from "@/lib/reference-cases/measured-pane";
 import { paneAt } from "./absorbing-pane";
 import { compareDomain, PRINTED_DIGITS, runWhenMain, type Recomputed } from "./compare";
 

@@ -19,11 +19,11 @@
  *
  * Run: npx tsx scripts/reference/u-value.ts
  */
-import { uValueDomain, type UValueCase, type UValueGapData, type UValuePaneData } from '@/lib/reference-cases/u-value';
-import { gasProperties, prandtl } from './gas-properties';
-import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from './compare';
+import { uValueDomain, type UValueCase, type UValueGapData, type UValuePaneData } from "@/lib/reference-cases/u-value";
+import { gasProperties, prandtl } from "./gas-properties";
+import { compareDomain, EXACT_BOUND, runWhenMain, type ComparisonRow, type Recomputed } from "./compare";
 
-const SCRIPT = 'scripts/reference/u-value.ts';
+const SCRIPT = "scripts/reference/u-value.ts";
 
 export const SIGMA = 5.67e-8;
 export const GRAVITY = 9.81;
@@ -122,11 +122,12 @@ export function uValueUnit(unit: {
 }
 
 /** Gap width [mm] at which Nu reaches 1: Gr·Pr(s) = A^(−1/n), vertical, ΔT 15 K, T_m 283 K. */
-export function convectionOnsetWidthMm(gas: 'air' | 'argon' | 'krypton', tiltDeg = 90): number {
+export function convectionOnsetWidthMm(gas: "air" | "argon" | "krypton", tiltDeg = 90): number {
   const { a, n } = constantsAt(tiltDeg);
   const threshold = a ** (-1 / n);
   const p = gasProperties(gas);
-  const s3 = (threshold * MEAN_TEMPERATURE_K * p.dynamicViscosityPaS ** 2) / (GRAVITY * TEMPERATURE_DIFFERENCE_K * p.densityKgPerM3 ** 2 * prandtl(p));
+  const s3 =
+    (threshold * MEAN_TEMPERATURE_K * p.dynamicViscosityPaS ** 2) / (GRAVITY * TEMPERATURE_DIFFERENCE_K * p.densityKgPerM3 ** 2 * prandtl(p));
   return Math.cbrt(s3) * 1000;
 }
 
@@ -141,7 +142,7 @@ function sameInEveryGap(gaps: readonly GapResult[], key: keyof GapResult): numbe
 export function recomputeUValueCase(c: UValueCase): Recomputed {
   const input = c.input;
   switch (input.kind) {
-    case 'unit': {
+    case "unit": {
       const r = uValueUnit(input);
       const out: Record<string, number> = {
         uValueWPerM2K: r.uValueWPerM2K,
@@ -153,16 +154,16 @@ export function recomputeUValueCase(c: UValueCase): Recomputed {
       }
       return out;
     }
-    case 'radiative-conductance':
+    case "radiative-conductance":
       return { radiativeConductanceWPerM2K: radiativeConductance(input.emissivity1, input.emissivity2) };
-    case 'internal-coefficient':
+    case "internal-coefficient":
       return { internalCoefficientWPerM2K: internalCoefficient(input.roomSideEmissivity) };
-    case 'convection-onset':
+    case "convection-onset":
       return { convectionOnsetWidthMm: convectionOnsetWidthMm(input.gas) };
-    case 'nusselt':
+    case "nusselt":
       // the unclamped correlation, to show how close the printed threshold comes to Nu = 1
       return { nusselt: constantsAt(input.tiltDeg).a * input.grashofPrandtl ** constantsAt(input.tiltDeg).n };
-    case 'convection-constants':
+    case "convection-constants":
       throw new Error(`${c.id}: the convection constants are printed in the standard, not computed`);
   }
 }
@@ -172,4 +173,4 @@ export function uValueComparison(): ComparisonRow[] {
   return compareDomain(uValueDomain, SCRIPT, recomputeUValueCase, { rule: EXACT_BOUND, closedForm: true });
 }
 
-runWhenMain(import.meta.url, [['Centre-of-glass U value (EN 673:2011)', uValueComparison]]);
+runWhenMain(import.meta.url, [["Centre-of-glass U value (EN 673:2011)", uValueComparison]]);

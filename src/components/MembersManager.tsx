@@ -65,7 +65,9 @@ export default function MembersManager({ organizationId, currentUserId, initialM
           <Field label="Role" htmlFor="invite-role" error={formState.errors.role}>
             <select id="invite-role" {...register("role")}>
               {ASSIGNABLE_ROLES.map((r) => (
-                <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                <option key={r} value={r}>
+                  {ROLE_LABELS[r]}
+                </option>
               ))}
             </select>
           </Field>
@@ -79,12 +81,21 @@ export default function MembersManager({ organizationId, currentUserId, initialM
         <h2 className="mb-3">People</h2>
         <table className="w-full text-sm" data-testid="members-table">
           <thead className="text-left text-slate">
-            <tr><th className="py-1">Name</th><th>E-mail</th><th>Role</th><th>Joined</th><th /></tr>
+            <tr>
+              <th className="py-1">Name</th>
+              <th>E-mail</th>
+              <th>Role</th>
+              <th>Joined</th>
+              <th />
+            </tr>
           </thead>
           <tbody>
             {members.map((m) => (
               <tr key={m.memberId} className="border-t border-line" data-testid="member-row">
-                <td className="py-2">{m.name}{m.userId === currentUserId && <span className="text-slate"> (you)</span>}</td>
+                <td className="py-2">
+                  {m.name}
+                  {m.userId === currentUserId && <span className="text-slate"> (you)</span>}
+                </td>
                 <td>{m.email}</td>
                 <td>
                   <select
@@ -100,7 +111,9 @@ export default function MembersManager({ organizationId, currentUserId, initialM
                     }
                   >
                     {ASSIGNABLE_ROLES.map((r) => (
-                      <option key={r} value={r}>{ROLE_LABELS[r]}</option>
+                      <option key={r} value={r}>
+                        {ROLE_LABELS[r]}
+                      </option>
                     ))}
                   </select>
                 </td>
@@ -138,7 +151,10 @@ export default function MembersManager({ organizationId, currentUserId, initialM
               <li key={i.id} className="flex items-center gap-3 py-2">
                 <span className="font-bold">{i.email}</span>
                 <span className="badge">{label(i.role)}</span>
-                <span className="text-slate">expires {date(i.expiresAt)}{i.inviterName && ` · invited by ${i.inviterName}`}</span>
+                <span className="text-slate">
+                  expires {date(i.expiresAt)}
+                  {i.inviterName && ` · invited by ${i.inviterName}`}
+                </span>
                 <button
                   type="button"
                   className="btn-quiet ml-auto"

@@ -75,7 +75,9 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
           <Field label="Organisation" htmlFor="organizationId" error={errors.organizationId}>
             <select id="organizationId" {...register("organizationId")}>
               {organizations.map((o) => (
-                <option key={o.id} value={o.id}>{o.name}</option>
+                <option key={o.id} value={o.id}>
+                  {o.name}
+                </option>
               ))}
             </select>
           </Field>
@@ -113,7 +115,12 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
           <input id="elevationM" type="number" step="any" {...register("elevationM", { valueAsNumber: true })} />
         </Field>
         <div className="md:col-span-3">
-          <Field label="Time zone" htmlFor="timeZone" error={errors.timeZone} hint="IANA name, e.g. Europe/Lisbon: fixes local clock time and daylight saving.">
+          <Field
+            label="Time zone"
+            htmlFor="timeZone"
+            error={errors.timeZone}
+            hint="IANA name, e.g. Europe/Lisbon: fixes local clock time and daylight saving."
+          >
             <input id="timeZone" list="tz-list" {...register("timeZone")} />
           </Field>
           <datalist id="tz-list">
@@ -126,7 +133,9 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
 
       <fieldset className="card space-y-3">
         <legend className="px-1 font-bold">Façades</legend>
-        <p className="text-xs text-slate">Azimuth of the outward normal in degrees clockwise from north (south = 180). Tilt from horizontal: 90 for a wall, less for sloped glazing.</p>
+        <p className="text-xs text-slate">
+          Azimuth of the outward normal in degrees clockwise from north (south = 180). Tilt from horizontal: 90 for a wall, less for sloped glazing.
+        </p>
         {errors.facades?.message && <p className="field-error">{errors.facades.message}</p>}
         <ul className="space-y-2">
           {facades.fields.map((f, i) => (
@@ -162,7 +171,9 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
         <button type="submit" className="btn" disabled={!hydrated || formState.isSubmitting}>
           {formState.isSubmitting ? "Saving…" : project ? "Save changes" : "Create project"}
         </button>
-        <a className="btn-quiet" href={project ? `/projects/${project.id}` : "/dashboard"}>Cancel</a>
+        <a className="btn-quiet" href={project ? `/projects/${project.id}` : "/dashboard"}>
+          Cancel
+        </a>
       </div>
     </form>
   );

@@ -10,7 +10,8 @@ export default function ShareManager({ projectId, initial }: { projectId: string
   const [shares, setShares] = useState(initial);
   const [busy, setBusy] = useState<string | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
-  if (shares.length === 0) return <p className="text-sm text-slate">There are no client members in this organisation yet. Invite them from the Members page.</p>;
+  if (shares.length === 0)
+    return <p className="text-sm text-slate">There are no client members in this organisation yet. Invite them from the Members page.</p>;
   return (
     <div className="space-y-2">
       {failure && <FormMessage kind="error">{failure}</FormMessage>}

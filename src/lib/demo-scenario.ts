@@ -28,8 +28,7 @@ export const DEMO_PROJECTS = [
     longitudeDeg: -9.1721,
     timeZone: "Europe/Lisbon",
     elevationM: 12,
-    description:
-      "Conversion of a former rope factory into offices: new glazing to the four street façades and a sawtooth roof light.",
+    description: "Conversion of a former rope factory into offices: new glazing to the four street façades and a sawtooth roof light.",
     sharedWithClient: true,
     facades: [
       { name: "Quay front (south-east)", azimuthDeg: 135, tiltDeg: 90 },

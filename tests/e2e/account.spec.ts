@@ -46,7 +46,11 @@ test("sign-up creates an organisation with the new user as owner, who creates a 
 
 test("password reset by e-mail", async ({ page, request }) => {
   const email = uniqueEmail("forgetful");
-  expect((await request.post("/api/v1/signup", { data: { name: "Pim Forde", email, password: "old password 1", organizationName: "Forde Glass" } })).status()).toBe(201);
+  expect(
+    (
+      await request.post("/api/v1/signup", { data: { name: "Pim Forde", email, password: "old password 1", organizationName: "Forde Glass" } })
+    ).status(),
+  ).toBe(201);
 
   await page.goto("/signin");
   await page.getByRole("link", { name: "Forgot your password?" }).click();

@@ -46,7 +46,9 @@ test("a double glazing answers the contract with the reference values", async ({
   const body = await res.json();
   expect(body.angles.map((a: { angleDeg: number }) => a.angleDeg)).toEqual([0, 10, 20, 30, 40, 50, 60, 70, 80, 90]);
   const n = body.angles[0];
-  expect(Object.keys(n)).toEqual(expect.arrayContaining(["angleDeg", "solarTransmittance", "solarReflectanceFront", "solarReflectanceBack", "layerAbsorptance", "gValue"]));
+  expect(Object.keys(n)).toEqual(
+    expect.arrayContaining(["angleDeg", "solarTransmittance", "solarReflectanceFront", "solarReflectanceBack", "layerAbsorptance", "gValue"]),
+  );
   // T at 0°: the layer-stack case of two 6 mm panes, within its tolerance
   expectWithin(n.solarTransmittance, expectedOf(double0Case, "T"));
   // g at 0°: the g-value case, to half a unit in its 6th printed decimal. The case itself allows 1.5e-6 because it
@@ -56,7 +58,9 @@ test("a double glazing answers the contract with the reference values", async ({
   expect(body.angles[9].solarTransmittance).toBe(0); // grazing incidence: nothing enters
   // hemispherical T: the hemispherical case of two 6 mm panes, within its tolerance
   expectWithin(body.hemispherical.solarTransmittance, expectedOf(double6mmCase, "T"));
-  expect(Object.keys(body.hemispherical)).toEqual(expect.arrayContaining(["solarTransmittance", "solarReflectanceFront", "layerAbsorptance", "gValue"]));
+  expect(Object.keys(body.hemispherical)).toEqual(
+    expect.arrayContaining(["solarTransmittance", "solarReflectanceFront", "layerAbsorptance", "gValue"]),
+  );
   // No case holds U of 6 | 16 air | 6: a plausibility band around the 4 | 16 air | 4 case (u-value/4-16air-4), whose
   // 2 mm thinner panes change U by a few hundredths (common practice, no source).
   expect(body.uValue).toBeGreaterThan(2.6);
@@ -78,7 +82,10 @@ test("bad input is answered 400 naming the field (413 when huge), never 500", as
     [{ layers: [pane6, { ...air16, gas: "helium" }, pane6] }, "layers[1].gas"],
     [{ layers: [pane6, { ...air16, gas: { argon: 0.5, air: 0.2 } }, pane6] }, "layers[1].gas"],
     [{ layers: [pane6, { ...air16, widthMm: 1e6 }, pane6] }, "layers[1].widthMm"],
-    [{ layers: [{ kind: "pane", thicknessMm: 4, measured: { solarTransmittance: 0.9, solarReflectanceFront: 0.2, solarReflectanceBack: 0.1 } }] }, "layers[0].measured.solarReflectanceFront"],
+    [
+      { layers: [{ kind: "pane", thicknessMm: 4, measured: { solarTransmittance: 0.9, solarReflectanceFront: 0.2, solarReflectanceBack: 0.1 } }] },
+      "layers[0].measured.solarReflectanceFront",
+    ],
     [{ layers: Array.from({ length: 13 }, (_, i) => (i % 2 ? air16 : pane6)) }, "layers"],
     [{ layers: [pane6], anglesDeg: [0, 91] }, "anglesDeg[1]"],
     [{ layers: [pane6], anglesDeg: "all" }, "anglesDeg"],
@@ -88,9 +95,14 @@ test("bad input is answered 400 naming the field (413 when huge), never 500", as
     const res = await request.post("/api/v1/calc/glazing", { data: body as object });
     expect(res.status(), JSON.stringify(body).slice(0, 120)).toBe(400);
     const problem = await res.json();
-    expect(problem.errors.map((e: { field: string }) => e.field), JSON.stringify(body).slice(0, 120)).toContain(field);
+    expect(
+      problem.errors.map((e: { field: string }) => e.field),
+      JSON.stringify(body).slice(0, 120),
+    ).toContain(field);
   }
-  const huge = await request.post("/api/v1/calc/glazing", { data: { layers: [pane6], anglesDeg: Array.from({ length: 20_000 }, () => 45.123456789) } });
+  const huge = await request.post("/api/v1/calc/glazing", {
+    data: { layers: [pane6], anglesDeg: Array.from({ length: 20_000 }, () => 45.123456789) },
+  });
   expect(huge.status()).toBe(413);
   const broken = await request.post("/api/v1/calc/glazing", { headers: { "content-type": "application/json" }, data: '{"layers": [' });
   expect(broken.status()).toBe(400);

@@ -25,9 +25,15 @@ export async function waitForMail(to: string, timeoutMs = 10_000): Promise<{ mai
   if (!dir) throw new Error("MAIL_DIR is not set: run the tests through npm test");
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
-    for (const f of readdirSync(dir).filter((x) => x.endsWith(".eml")).sort().reverse()) {
+    for (const f of readdirSync(dir)
+      .filter((x) => x.endsWith(".eml"))
+      .sort()
+      .reverse()) {
       const mail = await simpleParser(readFileSync(join(dir, f)));
-      const rcpt = [mail.to].flat().flatMap((a) => a?.value ?? []).map((v) => v.address?.toLowerCase());
+      const rcpt = [mail.to]
+        .flat()
+        .flatMap((a) => a?.value ?? [])
+        .map((v) => v.address?.toLowerCase());
       if (rcpt.includes(to.toLowerCase())) {
         const link = /https?:\/\/\S+/.exec(mail.text ?? "")?.[0];
         if (!link) throw new Error(`mail to ${to} has no link`);

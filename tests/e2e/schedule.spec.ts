@@ -13,18 +13,34 @@ async function signInApi(request: APIRequestContext) {
 }
 
 test("anonymous callers get 401", async ({ request }) => {
-  expect((await request.post("/api/v1/calc/schedule", { data: { site, surfaces: [surface], from: "2026-06-21", to: "2026-06-21" } })).status()).toBe(401);
+  expect((await request.post("/api/v1/calc/schedule", { data: { site, surfaces: [surface], from: "2026-06-21", to: "2026-06-21" } })).status()).toBe(
+    401,
+  );
 });
 
 test("a full year for one surface: 8,760 hourly rows with every column and the totals", async ({ request }) => {
   await signInApi(request);
-  const res = await request.post("/api/v1/calc/schedule", { data: { site, surfaces: [surface], from: "2026-01-01", to: "2026-12-31" }, timeout: 30_000 });
+  const res = await request.post("/api/v1/calc/schedule", {
+    data: { site, surfaces: [surface], from: "2026-01-01", to: "2026-12-31" },
+    timeout: 30_000,
+  });
   expect(res.status()).toBe(200);
   const body = await res.json();
   const s = body.surfaces[0];
   expect(s.rows).toHaveLength(8760);
   expect(Object.keys(s.rows[4000]).sort()).toEqual(
-    ["beamIncidentWm2", "beamTransmittance", "diffuseIncidentWm2", "incidenceDeg", "solarGainWm2", "sunAltitudeDeg", "sunAzimuthDeg", "sunlitFraction", "time", "transmittedWm2"].sort(),
+    [
+      "beamIncidentWm2",
+      "beamTransmittance",
+      "diffuseIncidentWm2",
+      "incidenceDeg",
+      "solarGainWm2",
+      "sunAltitudeDeg",
+      "sunAzimuthDeg",
+      "sunlitFraction",
+      "time",
+      "transmittedWm2",
+    ].sort(),
   );
   expect(s.rows[0].time).toBe("2026-01-01T00:30:00+00:00");
   expect(s.totals.monthly).toHaveLength(12);
@@ -54,7 +70,10 @@ test("bad input: 400 naming the field; too much work: 413", async ({ request }) 
     const res = await request.post("/api/v1/calc/schedule", { data: body as object });
     expect(res.status(), JSON.stringify(body).slice(0, 160)).toBe(400);
     const problem = await res.json();
-    expect(problem.errors.map((e: { field: string }) => e.field), JSON.stringify(body).slice(0, 160)).toContain(field);
+    expect(
+      problem.errors.map((e: { field: string }) => e.field),
+      JSON.stringify(body).slice(0, 160),
+    ).toContain(field);
   }
   const tooMuch = await request.post("/api/v1/calc/schedule", {
     data: { ...base, from: "2026-01-01", to: "2026-12-31", surfaces: Array.from({ length: 12 }, (_, k) => ({ ...surface, name: `S${k}` })) },

@@ -5,11 +5,7 @@
 // Int. J. Energy Research 6:123–133 (1982), per polarisation, evaluated independently in float64 by
 // scripts/reference/absorbing-pane.ts. Each case gives its tolerance.
 import { describe, expect, it } from "vitest";
-import {
-  absorbingPaneOptics,
-  checkAbsorbingPane,
-  slabFromFaceReflectance,
-} from "@/lib/physics/absorbing-pane";
+import { absorbingPaneOptics, checkAbsorbingPane, slabFromFaceReflectance } from "@/lib/physics/absorbing-pane";
 import { fresnelReflectancesReal } from "@/lib/physics/fresnel";
 import { asRadians, toDegrees } from "@/lib/physics/units";
 import {

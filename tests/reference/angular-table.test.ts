@@ -6,13 +6,7 @@
 // held to published values in the other reference tests. Speed is measured by the benchmark
 // (scripts/bench/optics.ts), not here.
 import { describe, expect, it } from "vitest";
-import {
-  angleGridAngle,
-  AngularTable,
-  angularTablesFromFunction,
-  cosGridAngle,
-  maxInterpolationError,
-} from "@/lib/physics/angular-table";
+import { angleGridAngle, AngularTable, angularTablesFromFunction, cosGridAngle, maxInterpolationError } from "@/lib/physics/angular-table";
 import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
 import type { Radians } from "@/lib/physics/units";
 import { clear6mmSpec, coated6mmSpec } from "./fixtures";

@@ -64,7 +64,10 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
   const band = caseById("shading/example/shaded-band-and-strip");
   it(band.label, () => {
     const i = band.input;
-    expectValue(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, omega), expectedOf(band, "overhangShadedHeightM"));
+    expectValue(
+      overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, omega),
+      expectedOf(band, "overhangShadedHeightM"),
+    );
     expectValue(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, gamma), expectedOf(band, "finShadedWidthM"));
   });
 
@@ -87,7 +90,10 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
     expectValue(o * RAD, expectedOf(c, "profileAngleDeg"));
     expectValue(overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, o), expectedOf(c, "overhangShadedHeightM"));
     expectValue(finShadedWidthM(i.fins.depthM, i.fins.gapFromJambM, i.windowWidthM, g), expectedOf(c, "finShadedWidthM"));
-    expectValue(sunlitFractionAt(prepareShading(specOfCase(i)), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg)), expectedOf(c, "sunlitFraction"));
+    expectValue(
+      sunlitFractionAt(prepareShading(specOfCase(i)), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg)),
+      expectedOf(c, "sunlitFraction"),
+    );
   });
 
   it("the hot path equals the rectangle product of the overhang/fin formulas (property, random geometry and sun)", () => {
@@ -274,7 +280,12 @@ describe("beam, finite devices: exact parallelogram shadows (closed forms)", () 
     const P = 0.6;
     const shaded = W * P * -kv - 0.5 * (P * ku) * (P * -kv);
     const expected = 1 - shaded / (W * H);
-    const sh = prepareShading({ windowWidthM: W, windowHeightM: H, surfaceTiltRad: deg(90), overhang: { depthM: P, extendLeftM: 0, extendRightM: 0 } });
+    const sh = prepareShading({
+      windowWidthM: W,
+      windowHeightM: H,
+      surfaceTiltRad: deg(90),
+      overhang: { depthM: P, extendLeftM: 0, extendRightM: 0 },
+    });
     expect(Math.abs(sunlitFractionAt(sh, southVertical, deg(50), deg(210)) - expected)).toBeLessThan(1e-12);
     expect(expected).toBeCloseTo(0.391391, 6); // numeric value of the closed form, for the reader
   });
@@ -361,7 +372,11 @@ describe("diffuse: view factors with overhangs and fins", () => {
 
   it("infinite overhang, vertical window: sky factor = 1 − 2·F(window→overhang), crossed strings; ground and horizon band 1", () => {
     // Tolerance 1e-7: Gauss–Legendre over the window of an integrand smooth in v only (16 points).
-    for (const [p, g] of [[0.6, 0.3], [1.0, 0], [0.3, 0.6]] as const) {
+    for (const [p, g] of [
+      [0.6, 0.3],
+      [1.0, 0],
+      [0.3, 0.6],
+    ] as const) {
       const d = prepareShading({ windowWidthM: 1.5, windowHeightM: 1.2, surfaceTiltRad: deg(90), overhang: { depthM: p, gapAboveHeadM: g } }).diffuse;
       expect(Math.abs(d.skyIsotropic - (1 - 2 * crossedStringsOverhang(1.2, g, p)))).toBeLessThan(1e-7);
       expect(d.ground).toBeCloseTo(1, 12);
@@ -372,7 +387,10 @@ describe("diffuse: view factors with overhangs and fins", () => {
   it("infinite fins on both jambs, vertical window: sky and ground factors = 1 − 2·F(window→fin), crossed strings", () => {
     // An infinitely tall fin is symmetric about every point's horizontal plane, so it blocks sky
     // and ground equally: each of the view ½ loses F/2 per fin.
-    for (const [f, e] of [[0.4, 0], [0.8, 0.1]] as const) {
+    for (const [f, e] of [
+      [0.4, 0],
+      [0.8, 0.1],
+    ] as const) {
       const d = prepareShading({ windowWidthM: 1.5, windowHeightM: 1.2, surfaceTiltRad: deg(90), fins: { depthM: f, gapFromJambM: e } }).diffuse;
       const expected = 1 - 2 * crossedStringsFin(1.5, e, f);
       expect(Math.abs(d.skyIsotropic - expected)).toBeLessThan(1e-5);
@@ -384,7 +402,10 @@ describe("diffuse: view factors with overhangs and fins", () => {
     // Derivation: from a point at distance D from a fin, the horizontal directions up to
     // ψ = atan(D/F) from the normal stay open; (1/2)∫cos ψ dψ gives (sin ψ_L + sin ψ_R)/2 with
     // sin ψ = D/√(D² + F²); averaging over the width, ∫ D/√(D² + F²) dD = √(D² + F²).
-    for (const [f, e] of [[0.4, 0], [0.8, 0.1]] as const) {
+    for (const [f, e] of [
+      [0.4, 0],
+      [0.8, 0.1],
+    ] as const) {
       const d = prepareShading({ windowWidthM: 1.5, windowHeightM: 1.2, surfaceTiltRad: deg(90), fins: { depthM: f, gapFromJambM: e } }).diffuse;
       expect(Math.abs(d.horizonBand - (Math.hypot(1.5 + e, f) - Math.hypot(e, f)) / 1.5)).toBeLessThan(1e-5);
     }
@@ -401,7 +422,9 @@ describe("diffuse: view factors with overhangs and fins", () => {
     const a = ((1 + Ww * Ww) * (1 + Hh * Hh)) / (1 + s);
     const b = Math.pow((Ww * Ww * (1 + s)) / ((1 + Ww * Ww) * s), Ww * Ww);
     const c = Math.pow((Hh * Hh * (1 + s)) / ((1 + Hh * Hh) * s), Hh * Hh);
-    return (Ww * Math.atan(1 / Ww) + Hh * Math.atan(1 / Hh) - Math.sqrt(s) * Math.atan(1 / Math.sqrt(s)) + 0.25 * Math.log(a * b * c)) / (Math.PI * Ww);
+    return (
+      (Ww * Math.atan(1 / Ww) + Hh * Math.atan(1 / Hh) - Math.sqrt(s) * Math.atan(1 / Math.sqrt(s)) + 0.25 * Math.log(a * b * c)) / (Math.PI * Ww)
+    );
   };
 
   it("closed form for perpendicular rectangles tends to the crossed-string value for long edges (checks the recalled formula)", () => {
@@ -413,8 +436,17 @@ describe("diffuse: view factors with overhangs and fins", () => {
     // Tolerance 1e-5: the point view factor is exact; the window average is a 16 × 16 Gauss rule of
     // an integrand whose derivatives are singular at the window's top corners (errors 2e-6…7e-6
     // at 16 points, falling to 1e-8…3e-8 at 64 points in our convergence study).
-    for (const [w, h, p] of [[1.5, 1.2, 0.6], [1.0, 2.0, 1.0], [3.0, 1.0, 0.5]] as const) {
-      const d = prepareShading({ windowWidthM: w, windowHeightM: h, surfaceTiltRad: deg(90), overhang: { depthM: p, extendLeftM: 0, extendRightM: 0 } }).diffuse;
+    for (const [w, h, p] of [
+      [1.5, 1.2, 0.6],
+      [1.0, 2.0, 1.0],
+      [3.0, 1.0, 0.5],
+    ] as const) {
+      const d = prepareShading({
+        windowWidthM: w,
+        windowHeightM: h,
+        surfaceTiltRad: deg(90),
+        overhang: { depthM: p, extendLeftM: 0, extendRightM: 0 },
+      }).diffuse;
       expect(Math.abs(d.skyIsotropic - (1 - 2 * perpendicular(w, h, p)))).toBeLessThan(1e-5);
     }
   });
@@ -422,7 +454,12 @@ describe("diffuse: view factors with overhangs and fins", () => {
   it("finite overhang with a gap G: view-factor algebra A₁F₁₂ = A₁₃F₁₃,₂ − A₃F₃₂ (3 = wall strip between head and overhang)", () => {
     const [w, h, g, p] = [1.5, 1.2, 0.3, 0.6];
     const f12 = ((h + g) * perpendicular(w, h + g, p) - g * perpendicular(w, g, p)) / h;
-    const d = prepareShading({ windowWidthM: w, windowHeightM: h, surfaceTiltRad: deg(90), overhang: { depthM: p, gapAboveHeadM: g, extendLeftM: 0, extendRightM: 0 } }).diffuse;
+    const d = prepareShading({
+      windowWidthM: w,
+      windowHeightM: h,
+      surfaceTiltRad: deg(90),
+      overhang: { depthM: p, gapAboveHeadM: g, extendLeftM: 0, extendRightM: 0 },
+    }).diffuse;
     expect(Math.abs(d.skyIsotropic - (1 - 2 * f12))).toBeLessThan(1e-5);
   });
 
@@ -434,7 +471,12 @@ describe("diffuse: view factors with overhangs and fins", () => {
   });
 
   it("tilted window (β = 30°), infinite overhang: blocks sky only, F from crossed strings", () => {
-    const d = prepareShading({ windowWidthM: 1.5, windowHeightM: 1.2, surfaceTiltRad: deg(30), overhang: { depthM: 0.6, gapAboveHeadM: 0.3 } }).diffuse;
+    const d = prepareShading({
+      windowWidthM: 1.5,
+      windowHeightM: 1.2,
+      surfaceTiltRad: deg(30),
+      overhang: { depthM: 0.6, gapAboveHeadM: 0.3 },
+    }).diffuse;
     const skyRef = (1 + Math.cos(deg(30))) / 2;
     expect(Math.abs(d.skyIsotropic - (1 - crossedStringsOverhang(1.2, 0.3, 0.6) / skyRef))).toBeLessThan(1e-7);
     expect(d.ground).toBeCloseTo(1, 12);
@@ -443,7 +485,12 @@ describe("diffuse: view factors with overhangs and fins", () => {
   it("any tilt, infinite fins: sky + ground blocked = 2·F(window→fin) (summation rule; fins are fixed in the surface frame)", () => {
     fc.assert(
       fc.property(fc.double({ min: 0, max: 180, noNaN: true }), (tiltDeg) => {
-        const d = prepareShading({ windowWidthM: 1.5, windowHeightM: 1.2, surfaceTiltRad: deg(tiltDeg), fins: { depthM: 0.4, gapFromJambM: 0.1 } }).diffuse;
+        const d = prepareShading({
+          windowWidthM: 1.5,
+          windowHeightM: 1.2,
+          surfaceTiltRad: deg(tiltDeg),
+          fins: { depthM: 0.4, gapFromJambM: 0.1 },
+        }).diffuse;
         const cb = Math.cos(deg(tiltDeg));
         const blocked = ((1 + cb) / 2) * (1 - d.skyIsotropic) + ((1 - cb) / 2) * (1 - d.ground);
         expect(Math.abs(blocked - 2 * crossedStringsFin(1.5, 0.1, 0.4))).toBeLessThan(1e-5);
@@ -481,7 +528,11 @@ describe("diffuse: view factors with overhangs and fins", () => {
     const sh = prepareShading(combined(tiltDeg));
     const cb = Math.cos(deg(tiltDeg));
     const sb = Math.sin(deg(tiltDeg));
-    for (const [u, v] of [[0.3, 0.9], [1.2, 0.2], [0.75, 1.1]] as const) {
+    for (const [u, v] of [
+      [0.3, 0.9],
+      [1.2, 0.2],
+      [0.75, 1.1],
+    ] as const) {
       let sky = 0;
       let ground = 0;
       const nt = 400;
@@ -512,7 +563,11 @@ describe("diffuse: view factors with overhangs and fins", () => {
     const sh = prepareShading(combined(tiltDeg));
     const cb = Math.cos(deg(tiltDeg));
     const sb = Math.sin(deg(tiltDeg));
-    for (const [u, v] of [[0.3, 0.9], [1.2, 0.05], [0.75, 1.15]] as const) {
+    for (const [u, v] of [
+      [0.3, 0.9],
+      [1.2, 0.05],
+      [0.75, 1.15],
+    ] as const) {
       const n = 20000;
       let visible = 0;
       for (let j = 0; j < n; j++) {
@@ -523,13 +578,16 @@ describe("diffuse: view factors with overhangs and fins", () => {
     }
   });
 
-  it.each([90, 60, 120, 150])("window averages converge: 16 and 64 Gauss points agree within 1e-6, tilt %i° (our own convergence check)", (tiltDeg) => {
-    const a = prepareShading(combined(tiltDeg)).diffuse;
-    const b = prepareShading({ ...combined(tiltDeg), diffuseQuadraturePoints: 64 }).diffuse;
-    expect(Math.abs(a.skyIsotropic - b.skyIsotropic)).toBeLessThan(1e-6);
-    expect(Math.abs(a.ground - b.ground)).toBeLessThan(1e-6);
-    expect(Math.abs(a.horizonBand - b.horizonBand)).toBeLessThan(1e-6);
-  });
+  it.each([90, 60, 120, 150])(
+    "window averages converge: 16 and 64 Gauss points agree within 1e-6, tilt %i° (our own convergence check)",
+    (tiltDeg) => {
+      const a = prepareShading(combined(tiltDeg)).diffuse;
+      const b = prepareShading({ ...combined(tiltDeg), diffuseQuadraturePoints: 64 }).diffuse;
+      expect(Math.abs(a.skyIsotropic - b.skyIsotropic)).toBeLessThan(1e-6);
+      expect(Math.abs(a.ground - b.ground)).toBeLessThan(1e-6);
+      expect(Math.abs(a.horizonBand - b.horizonBand)).toBeLessThan(1e-6);
+    },
+  );
 
   it("factors lie in [0, 1] and fall with overhang depth (property, finite and infinite devices)", () => {
     fc.assert(

@@ -7,11 +7,7 @@
 // where stacks are involved. Each case gives its tolerance (half a unit in the last printed digit).
 import { describe, expect, it } from "vitest";
 import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
-import {
-  DEFAULT_HEMISPHERICAL_NODES,
-  hemisphericalAverage,
-  hemisphericalQuadrature,
-} from "@/lib/physics/hemispherical";
+import { DEFAULT_HEMISPHERICAL_NODES, hemisphericalAverage, hemisphericalQuadrature } from "@/lib/physics/hemispherical";
 import { gaussLegendre } from "@/lib/physics/quadrature";
 import { asRadians } from "@/lib/physics/units";
 import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
@@ -25,8 +21,7 @@ import {
 } from "@/lib/reference-cases/hemispherical";
 import { expectCase, pane6mm, lowIron4mm, paneFromMm } from "./fixtures";
 
-const specsOf = (input: HemisphericalCaseInput): PaneSpec[] =>
-  input.panes.map((p) => ({ kind: "physical", ...paneFromMm(p) }));
+const specsOf = (input: HemisphericalCaseInput): PaneSpec[] => input.panes.map((p) => ({ kind: "physical", ...paneFromMm(p) }));
 
 /** The engine's hemispherical values of the quantities a case names. */
 function engine(input: HemisphericalCaseInput): Record<string, number> {

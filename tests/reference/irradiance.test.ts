@@ -165,20 +165,31 @@ describe("Ineichen–Perez clear sky", () => {
 
   it("GHI = DNI cos z + DHI (closure, by definition) and zero at night", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 89.9, noNaN: true }), fc.double({ min: 1.5, max: 7, noNaN: true }), fc.double({ min: 0, max: 3000, noNaN: true }), (z, tl, h) => {
-        const r = clearSkyIneichenPerez2002({
-          cosZenith: cosd(z),
-          airMassAbsolute: absoluteAirMass(relativeAirMassKastenYoung1989(z), pressureFromElevation(h)),
-          linkeTurbidity: tl,
-          elevationM: h,
-          extraterrestrialWPerM2: 1361,
-        });
-        expect(Math.abs(r.ghi - (r.dni * cosd(z) + r.dhi))).toBeLessThan(1e-9);
-        expect(r.dni).toBeGreaterThanOrEqual(0);
-        expect(r.dhi).toBeGreaterThanOrEqual(-1e-9);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 89.9, noNaN: true }),
+        fc.double({ min: 1.5, max: 7, noNaN: true }),
+        fc.double({ min: 0, max: 3000, noNaN: true }),
+        (z, tl, h) => {
+          const r = clearSkyIneichenPerez2002({
+            cosZenith: cosd(z),
+            airMassAbsolute: absoluteAirMass(relativeAirMassKastenYoung1989(z), pressureFromElevation(h)),
+            linkeTurbidity: tl,
+            elevationM: h,
+            extraterrestrialWPerM2: 1361,
+          });
+          expect(Math.abs(r.ghi - (r.dni * cosd(z) + r.dhi))).toBeLessThan(1e-9);
+          expect(r.dni).toBeGreaterThanOrEqual(0);
+          expect(r.dhi).toBeGreaterThanOrEqual(-1e-9);
+        },
+      ),
     );
-    const night = clearSkyIneichenPerez2002({ cosZenith: -0.1, airMassAbsolute: Number.NaN, linkeTurbidity: 3, elevationM: 0, extraterrestrialWPerM2: 1361 });
+    const night = clearSkyIneichenPerez2002({
+      cosZenith: -0.1,
+      airMassAbsolute: Number.NaN,
+      linkeTurbidity: 3,
+      elevationM: 0,
+      extraterrestrialWPerM2: 1361,
+    });
     expect(night).toEqual({ ghi: 0, dni: 0, dhi: 0 });
   });
 
@@ -259,7 +270,9 @@ describe("transposition: worked example (vertical south façade)", () => {
     // printed last digit looks double-rounded (864.28747 → 864.2875 → 864.288). One unit in the last
     // printed digit is allowed here, and the closure is checked against the printed GHI and DHI.
     expectBelow(sky.dni, expectedOf(skyCase, "dni"));
-    expect(Math.abs((ghi.value - dhi.value) / cosd(ex.zenithDeg) - sky.dni)).toBeLessThan((ghi.tolerance.abs + dhi.tolerance.abs) / cosd(ex.zenithDeg));
+    expect(Math.abs((ghi.value - dhi.value) / cosd(ex.zenithDeg) - sky.dni)).toBeLessThan(
+      (ghi.tolerance.abs + dhi.tolerance.abs) / cosd(ex.zenithDeg),
+    );
     expectValue(sky.dhi, dhi);
   });
 
@@ -345,7 +358,9 @@ describe("transposition: consistency and hot path", () => {
           const fastH = skyDiffuseFromCoefficients(skyCoefficientsHayDavies1980(hour, hdOut), surface, cosTheta);
           expect(Math.abs(fastH - skyDiffuseHayDavies1980(hour, deg(tiltDeg), cosTheta))).toBeLessThan(tol);
           const iso = { isotropicWPerM2: dhi, circumsolarPerCos: 0, horizonWPerM2: 0 };
-          expect(Math.abs(skyDiffuseFromCoefficients(iso, surface, cosTheta) - skyDiffuseIsotropicLiuJordan1960(dhi, deg(tiltDeg)))).toBeLessThan(tol);
+          expect(Math.abs(skyDiffuseFromCoefficients(iso, surface, cosTheta) - skyDiffuseIsotropicLiuJordan1960(dhi, deg(tiltDeg)))).toBeLessThan(
+            tol,
+          );
           expect(Math.abs(groundReflectedOnSurface(dhi + dni, surface) - groundReflected(dhi + dni, deg(tiltDeg), albedo))).toBeLessThan(tol);
         },
       ),

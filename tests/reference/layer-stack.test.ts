@@ -171,11 +171,7 @@ describe("asymmetric layer", () => {
 
   it("radiation from indoors is the mirror image: reversed stack, Rf ↔ Rb", () => {
     // symmetry of the net-radiation system (exact)
-    const layers: LayerOptics[] = [
-      { T: 0.6, Rf: 0.1, Rb: 0.25 },
-      layer6mmAt(deg(0)),
-      { T: 0.3, Rf: 0.4, Rb: 0.05 },
-    ];
+    const layers: LayerOptics[] = [{ T: 0.6, Rf: 0.1, Rb: 0.25 }, layer6mmAt(deg(0)), { T: 0.3, Rf: 0.4, Rb: 0.05 }];
     const fwd = combineLayers(layers);
     const rev = combineLayers([...layers].reverse().map((l) => ({ T: l.T, Rf: l.Rb, Rb: l.Rf })));
     expect(Math.abs(fwd.T - rev.T)).toBeLessThan(1e-15);
@@ -222,8 +218,6 @@ describe("limits and input checks", () => {
     expect(() => combineLayers([{ T: Number.NaN, Rf: 0.1, Rb: 0.1 }])).toThrow(/layer 1: T/);
     expect(() => combineLayers([{ T: 0.5, Rf: -0.1, Rb: 0.1 }])).toThrow(/Rf/);
     expect(() => glazingOpticsAt([source6mm], deg(91))).toThrow(/angle of incidence/);
-    expect(() =>
-      glazingOpticsAt([source6mm], deg(30), { polarization: "sideways" as unknown as "averaged" }),
-    ).toThrow(/polarization/);
+    expect(() => glazingOpticsAt([source6mm], deg(30), { polarization: "sideways" as unknown as "averaged" })).toThrow(/polarization/);
   });
 });

@@ -30,7 +30,6 @@ import { localTimeline as timelineCases, type LocalTimelineCase } from "@/lib/re
 const H = 3_600_000;
 const MIN = 60_000;
 
-
 /** Day of month of the n-th (1-based) Sunday of a month, or of the last one for n = −1 (JS Date). */
 function sunday(year: number, month1: number, n: number): number {
   const sundays: number[] = [];
@@ -44,8 +43,7 @@ function sunday(year: number, month1: number, n: number): number {
 function sundayOnOrAfter(year: number, month1: number, day: number): number {
   for (let d = day; ; d++) if (new Date(Date.UTC(year, month1 - 1, d)).getUTCDay() === 0) return d;
 }
-const ymd = (y: number, m: number, d: number): string =>
-  `${y}-${String(m).padStart(2, "0")}-${String(d).padStart(2, "0")}`;
+const ymd = (y: number, m: number, d: number): string => `${y}-${String(m).padStart(2, "0")}-${String(d).padStart(2, "0")}`;
 
 /** Independent oracle: ISO 8601 local time with offset of an instant in a zone, from Intl.formatToParts. */
 function intlIsoFormatter(timeZone: string): (ms: number) => string {
@@ -100,7 +98,10 @@ function expectWellFormed(tl: Timeline): void {
 function checkCase(c: LocalTimelineCase): void {
   const { ruleDay, ...spec } = c.input;
   if (ruleDay) {
-    const day = "nthSunday" in ruleDay ? sunday(ruleDay.year, ruleDay.month, ruleDay.nthSunday) : sundayOnOrAfter(ruleDay.year, ruleDay.month, ruleDay.sundayOnOrAfter);
+    const day =
+      "nthSunday" in ruleDay
+        ? sunday(ruleDay.year, ruleDay.month, ruleDay.nthSunday)
+        : sundayOnOrAfter(ruleDay.year, ruleDay.month, ruleDay.sundayOnOrAfter);
     expect(day).toBe(c.expected.find((e) => e.quantity === "ruleDayOfMonth")?.value);
   }
   const tl = localTimeline(spec);
@@ -109,17 +110,24 @@ function checkCase(c: LocalTimelineCase): void {
     const m = /^(\w+)(?:\[(\d+)\])?$/.exec(e.quantity);
     const [name, index] = [m?.[1], Number(m?.[2])];
     const actual =
-      name === "rows" ? tl.length
-      : name === "offsetMinutes" ? tl.offsetMinutes[index]
-      : name === "localHour" ? tl.localHour[index]
-      : name === "dayRowCount" ? tl.days[index]?.rowCount
-      : name === "dayFirstRow" ? tl.days[index]?.firstRow
-      : name === "ruleDayOfMonth" ? e.value // checked above
-      : undefined;
+      name === "rows"
+        ? tl.length
+        : name === "offsetMinutes"
+          ? tl.offsetMinutes[index]
+          : name === "localHour"
+            ? tl.localHour[index]
+            : name === "dayRowCount"
+              ? tl.days[index]?.rowCount
+              : name === "dayFirstRow"
+                ? tl.days[index]?.firstRow
+                : name === "ruleDayOfMonth"
+                  ? e.value // checked above
+                  : undefined;
     expect(actual, e.quantity).toBe(e.value); // tolerance 0: exact
   }
   for (const [row, iso] of Object.entries(c.expectedIso ?? {})) expect(tl.iso(Number(row)), `row ${row}`).toBe(iso);
-  for (const [row, utc] of Object.entries(c.expectedIntervalStartUtc ?? {})) expect(tl.intervalStartMs[Number(row)], `start of row ${row}`).toBe(Date.parse(utc));
+  for (const [row, utc] of Object.entries(c.expectedIntervalStartUtc ?? {}))
+    expect(tl.intervalStartMs[Number(row)], `start of row ${row}`).toBe(Date.parse(utc));
   for (const [row, utc] of Object.entries(c.expectedEpochUtc ?? {})) expect(tl.epochMs[Number(row)], `instant of row ${row}`).toBe(Date.parse(utc));
 }
 const casesIn = (zones: string[]) => timelineCases.cases.filter((c) => zones.includes(c.input.timeZone));
@@ -253,9 +261,7 @@ describe("zones with 30- and 45-minute offsets", () => {
   it.each(casesIn(["Asia/Kolkata", "Asia/Kathmandu", "Australia/Lord_Howe", "Africa/Monrovia"]))("$label", checkCase);
 
   it("Australia/Lord_Howe (30-minute daylight saving): 60-minute rows refused", () => {
-    expect(() => localTimeline({ timeZone: "Australia/Lord_Howe", from: "2026-04-05", to: "2026-04-05", stepMinutes: 60 })).toThrow(
-      /stepMinutes/,
-    );
+    expect(() => localTimeline({ timeZone: "Australia/Lord_Howe", from: "2026-04-05", to: "2026-04-05", stepMinutes: 60 })).toThrow(/stepMinutes/);
   });
 });
 

@@ -22,12 +22,7 @@ import {
   type MeasuredBandModel,
 } from "@/lib/physics/measured-pane";
 import { asRadians, type Radians } from "@/lib/physics/units";
-import {
-  absorbingPaneDomain,
-  losslessCase,
-  pane6mmCases,
-  ratio6mmCases,
-} from "@/lib/reference-cases/absorbing-pane";
+import { absorbingPaneDomain, losslessCase, pane6mmCases, ratio6mmCases } from "@/lib/reference-cases/absorbing-pane";
 import {
   invertedAt60Case,
   karlssonRoosCases,
@@ -151,15 +146,11 @@ describe("uncoated pane: inversion of measured T and R to n and α", () => {
 
     it("thickness", () => {
       expect(() => invertUncoatedPane(0.8, 0.07, 0)).toThrow(/thickness/);
-      expect(() => prepareMeasuredPane({ thicknessM: Number.NaN, solar: { T: 0.8, Rf: 0.07, Rb: 0.07 } })).toThrow(
-        /thickness/,
-      );
+      expect(() => prepareMeasuredPane({ thicknessM: Number.NaN, solar: { T: 0.8, Rf: 0.07, Rb: 0.07 } })).toThrow(/thickness/);
     });
 
     it("measured values of a coated pane that break energy balance", () => {
-      expect(() => prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.6, Rf: 0.5, Rb: 0.1 } })).toThrow(
-        /solar\.T \+ solar\.Rf/,
-      );
+      expect(() => prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.6, Rf: 0.5, Rb: 0.1 } })).toThrow(/solar\.T \+ solar\.Rf/);
       expect(() =>
         prepareMeasuredPane({
           thicknessM: 0.006,
@@ -200,9 +191,7 @@ describe("coated pane: Karlsson–Roos transmittance", () => {
   it("default per-layer parameters (p, q) = (1, 4) stay within 0.011 of an uncoated 6 mm slab's own curve up to 80°", () => {
     // Sanity check of the chosen default against the slab model (Duffie & Beckman ch. 5, from memory),
     // our own comparison (no published source): the reference curve T(θ)/T(0) of the 6 mm pane (case values)
-    const ref = ratio6mmCases
-      .filter((c) => c.input.thetaDeg <= 80)
-      .map((c) => [c.input.thetaDeg, expectedOf(c, "TOverT0").value] as const);
+    const ref = ratio6mmCases.filter((c) => c.input.thetaDeg <= 80).map((c) => [c.input.thetaDeg, expectedOf(c, "TOverT0").value] as const);
     expect(ref.map(([d]) => d)).toEqual([30, 45, 60, 70, 80]);
     for (const [d, r] of ref) expect(Math.abs(karlssonRoosTransmittanceRatio(deg(d), 1, 4) - r)).toBeLessThan(0.011);
   });
@@ -210,9 +199,7 @@ describe("coated pane: Karlsson–Roos transmittance", () => {
   it("refuses p, q outside the accepted ranges", () => {
     expect(() => karlssonRoosTransmittanceRatio(deg(30), 4, 4)).toThrow(/pane count p/);
     expect(() => karlssonRoosTransmittanceRatio(deg(30), 1, 0.5)).toThrow(/glazing-type index q/);
-    expect(() => prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.6, Rf: 0.1, Rb: 0.2 } }, { karlssonRoosQ: 11 })).toThrow(
-      /q/,
-    );
+    expect(() => prepareMeasuredPane({ thicknessM: 0.006, solar: { T: 0.6, Rf: 0.1, Rb: 0.2 } }, { karlssonRoosQ: 11 })).toThrow(/q/);
   });
 });
 

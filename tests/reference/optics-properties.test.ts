@@ -50,9 +50,7 @@ const coatedMeasuredPane: fc.Arbitrary<PaneSpec> = fc
 
 const anyPane = fc.oneof(physicalPane, uncoatedMeasuredPane, coatedMeasuredPane);
 const glazing = fc.array(anyPane, { minLength: 1, maxLength: 6 });
-const angle: fc.Arbitrary<Radians> = fc
-  .oneof(dbl(0, Math.PI / 2), fc.constantFrom(0, Math.PI / 2, Math.PI / 3))
-  .map((x) => asRadians(x));
+const angle: fc.Arbitrary<Radians> = fc.oneof(dbl(0, Math.PI / 2), fc.constantFrom(0, Math.PI / 2, Math.PI / 3)).map((x) => asRadians(x));
 const route = fc.constantFrom("per-polarization" as const, "averaged" as const);
 
 /** The same pane seen from the other side. */
@@ -203,9 +201,9 @@ describe("glazing façade", () => {
     expect(() => prepareGlazing([])).toThrow(/1\.\.6 panes/);
     expect(() => prepareGlazing(Array<PaneSpec>(7).fill(clear))).toThrow(/1\.\.6 panes/);
     expect(() => prepareGlazing([clear, { ...clear, thicknessM: -1 }])).toThrow(/pane 2: pane thickness/);
-    expect(() =>
-      prepareGlazing([clear, clear, { kind: "measured", thicknessM: 0.004, solar: { T: 0.9, Rf: 0.2, Rb: 0.2 } }]),
-    ).toThrow(/pane 3 solar\.T \+ solar\.Rf/);
+    expect(() => prepareGlazing([clear, clear, { kind: "measured", thicknessM: 0.004, solar: { T: 0.9, Rf: 0.2, Rb: 0.2 } }])).toThrow(
+      /pane 3 solar\.T \+ solar\.Rf/,
+    );
     expect(() => prepareGlazing([clear]).at(asRadians(-0.1))).toThrow(/angle of incidence/);
     expect(() => prepareGlazing([clear], { polarization: "none" as unknown as "averaged" })).toThrow(/polarization/);
   });

@@ -61,31 +61,33 @@ const entries: readonly ScriptEntry[] = [
 function expectReproduced(rows: readonly ComparisonRow[], slack: number): void {
   for (const r of rows) {
     expect(Number.isFinite(r.recomputed), `${r.caseId} ${r.quantity}: the script computes no value`).toBe(true);
-    expect(
-      Math.abs(r.recomputed - r.printed),
-      `${r.caseId} ${r.quantity}: printed ${r.printed}, recomputed ${r.recomputed}`,
-    ).toBeLessThanOrEqual(r.tolerance * (1 + slack));
+    expect(Math.abs(r.recomputed - r.printed), `${r.caseId} ${r.quantity}: printed ${r.printed}, recomputed ${r.recomputed}`).toBeLessThanOrEqual(
+      r.tolerance * (1 + slack),
+    );
     expect(r.within, `${r.caseId} ${r.quantity}: the script's verdict`).toBe(true);
   }
 }
 
-describe.each(entries.map((e) => [`scripts/reference/${e.script}.ts`, e] as const))("%s reproduces its cases", (_path, { script, domain, rows: comparison, slack, closedForm }) => {
-  const rows = comparison();
-  const due = domain.cases.filter((c) => c.source.kind === "computed" || (closedForm && c.source.kind === "closed-form"));
+describe.each(entries.map((e) => [`scripts/reference/${e.script}.ts`, e] as const))(
+  "%s reproduces its cases",
+  (_path, { script, domain, rows: comparison, slack, closedForm }) => {
+    const rows = comparison();
+    const due = domain.cases.filter((c) => c.source.kind === "computed" || (closedForm && c.source.kind === "closed-form"));
 
-  it("covers every computed case of its domain (and every closed-form case it evaluates), each value once", () => {
-    expect(due.length).toBeGreaterThan(0);
-    // no computed case is left to another script
-    for (const c of due) if (c.source.kind === "computed") expect(c.source.script, c.id).toBe(`scripts/reference/${script}.ts`);
-    const covered = new Set(rows.map((r) => r.caseId));
-    for (const c of due) expect(covered.has(c.id), c.id).toBe(true);
-    expect(rows).toHaveLength(due.reduce((n, c) => n + c.expected.length, 0));
-  });
+    it("covers every computed case of its domain (and every closed-form case it evaluates), each value once", () => {
+      expect(due.length).toBeGreaterThan(0);
+      // no computed case is left to another script
+      for (const c of due) if (c.source.kind === "computed") expect(c.source.script, c.id).toBe(`scripts/reference/${script}.ts`);
+      const covered = new Set(rows.map((r) => r.caseId));
+      for (const c of due) expect(covered.has(c.id), c.id).toBe(true);
+      expect(rows).toHaveLength(due.reduce((n, c) => n + c.expected.length, 0));
+    });
 
-  it.each(rows.map((r) => [`${r.caseId} ${r.quantity}`, r] as const))("%s within its tolerance", (_name, r) => {
-    expectReproduced([r], slack);
-  });
-});
+    it.each(rows.map((r) => [`${r.caseId} ${r.quantity}`, r] as const))("%s within its tolerance", (_name, r) => {
+      expectReproduced([r], slack);
+    });
+  },
+);
 
 describe("scripts/reference/g-value.ts: the printed optical inputs of the g cases", () => {
   // The optical inputs of the g cases are printed optics of the named panes: recomputed from the panes
@@ -111,7 +113,10 @@ describe("the scripts and case modules are independent of the product's code", (
   // tests run from the repository root
   const scriptDir = join(process.cwd(), "scripts", "reference");
   const caseDir = join(process.cwd(), "src", "lib", "reference-cases");
-  const tsFiles = (dir: string) => readdirSync(dir).filter((f) => f.endsWith(".ts")).sort();
+  const tsFiles = (dir: string) =>
+    readdirSync(dir)
+      .filter((f) => f.endsWith(".ts"))
+      .sort();
   /** Every module a file loads: `import … from`, `export … from`, `import "…"` and `import("…")`. */
   const importsOf = (path: string) => {
     const text = readFileSync(path, "utf8");
@@ -130,8 +135,7 @@ describe("the scripts and case modules are independent of the product's code", (
     expect(imports.length, name).toBeGreaterThan(0);
     for (const spec of imports) {
       expect(spec, `${name} imports ${spec}`).not.toMatch(/lib\/(physics|calc)/);
-      const allowed =
-        spec.startsWith("@/lib/reference-cases/") || /^\.\/[\w-]+$/.test(spec) || spec.startsWith("node:") || LIBRARIES.includes(spec);
+      const allowed = spec.startsWith("@/lib/reference-cases/") || /^\.\/[\w-]+$/.test(spec) || spec.startsWith("node:") || LIBRARIES.includes(spec);
       expect(allowed, `${name} imports ${spec}`).toBe(true);
     }
   });

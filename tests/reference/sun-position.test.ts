@@ -12,7 +12,13 @@ import { Body, Equator, Horizon, Observer, SearchHourAngle } from "astronomy-eng
 import { getPosition } from "suncalc";
 import { describe, expect, it } from "vitest";
 import { sunPositionSuncalc, sunTrack } from "@/lib/physics/sun-position";
-import { sunPosition, type SunInstantInput, type SunPositionInput, type SunTransitInput, type SunYearInput } from "@/lib/reference-cases/sun-position";
+import {
+  sunPosition,
+  type SunInstantInput,
+  type SunPositionInput,
+  type SunTransitInput,
+  type SunYearInput,
+} from "@/lib/reference-cases/sun-position";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
 import { expectAtMost, expectBelow, expectedOf } from "./fixtures";
 

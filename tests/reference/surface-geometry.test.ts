@@ -79,9 +79,14 @@ describe("angle of incidence: other surfaces", () => {
 
   it("horizontal surface: θ = zenith for any sun azimuth and any surface azimuth (closed form)", () => {
     fc.assert(
-      fc.property(fc.double({ min: -89, max: 89, noNaN: true }), fc.double({ min: 0, max: 360, noNaN: true }), fc.double({ min: 0, max: 360, noNaN: true }), (alt, az, azs) => {
-        expect(Math.abs(angleOfIncidenceDeg(alt, az, azs, 0) - (90 - alt))).toBeLessThan(1e-9);
-      }),
+      fc.property(
+        fc.double({ min: -89, max: 89, noNaN: true }),
+        fc.double({ min: 0, max: 360, noNaN: true }),
+        fc.double({ min: 0, max: 360, noNaN: true }),
+        (alt, az, azs) => {
+          expect(Math.abs(angleOfIncidenceDeg(alt, az, azs, 0) - (90 - alt))).toBeLessThan(1e-9);
+        },
+      ),
     );
   });
 
@@ -119,7 +124,14 @@ describe("frames and the hot path", () => {
       fc.property(anySurface, (srf) => {
         const { along: u, upSlope: v, normal: n } = surfaceFrame(surfaceOrientationDeg(srf.az, srf.tilt));
         const dot = (a: typeof u, b: typeof u) => a.east * b.east + a.north * b.north + a.up * b.up;
-        for (const [a, b, want] of [[u, u, 1], [v, v, 1], [n, n, 1], [u, v, 0], [u, n, 0], [v, n, 0]] as const) {
+        for (const [a, b, want] of [
+          [u, u, 1],
+          [v, v, 1],
+          [n, n, 1],
+          [u, v, 0],
+          [u, n, 0],
+          [v, n, 0],
+        ] as const) {
           expect(Math.abs(dot(a, b) - want)).toBeLessThan(1e-12);
         }
         const cross = { east: u.north * v.up - u.up * v.north, north: u.up * v.east - u.east * v.up, up: u.east * v.north - u.north * v.east };

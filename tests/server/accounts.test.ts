@@ -11,7 +11,11 @@ import { newOwner, uniqueEmail, cookieHeaders } from "./helpers";
 
 afterAll(() => pool.end());
 
-const status = async (p: Promise<unknown>) => p.then(() => "ok" as const, (e) => problemFor(e)?.status ?? String(e));
+const status = async (p: Promise<unknown>) =>
+  p.then(
+    () => "ok" as const,
+    (e) => problemFor(e)?.status ?? String(e),
+  );
 
 describe("sign-up", () => {
   it("creates the user, an organisation and an owner membership, and returns a session cookie", async () => {

@@ -42,7 +42,11 @@ async function orgWithClientAndProject() {
       latitudeDeg: 52.37,
       longitudeDeg: 4.9,
       timeZone: "Europe/Amsterdam",
-      facades: [{ name: "South", azimuthDeg: 180 }, { name: "East", azimuthDeg: 90 }, { name: "West", azimuthDeg: 270 }],
+      facades: [
+        { name: "South", azimuthDeg: 180 },
+        { name: "East", azimuthDeg: 90 },
+        { name: "West", azimuthDeg: 270 },
+      ],
     }),
     o.userId,
   );
@@ -61,8 +65,12 @@ describe("services throw domain errors", () => {
     expect(refused.message).toBe("Your role (client) does not allow you to edit projects");
 
     const stranger = await newOwner("stranger");
-    expect(await rejection(requireOrgPermission(stranger.userId, o.organizationId, { member: ["update"] }, "manage members"))).toBeInstanceOf(NotFoundError);
-    expect(await rejection(requireOrgPermission(c.userId, o.organizationId, { member: ["update"] }, "manage members"))).toBeInstanceOf(ForbiddenError);
+    expect(await rejection(requireOrgPermission(stranger.userId, o.organizationId, { member: ["update"] }, "manage members"))).toBeInstanceOf(
+      NotFoundError,
+    );
+    expect(await rejection(requireOrgPermission(c.userId, o.organizationId, { member: ["update"] }, "manage members"))).toBeInstanceOf(
+      ForbiddenError,
+    );
   });
 
   it("projects: a foreign façade id is InvalidError on field facades; an unknown member NotFoundError", async () => {
@@ -125,7 +133,14 @@ describe("page loaders", () => {
   it("the dashboard lists each organisation's visible projects with their façade counts", async () => {
     const { o, c, p } = await orgWithClientAndProject();
     const second = await createProject(
-      ProjectCreateRequest.parse({ organizationId: o.organizationId, name: "Bare block", siteName: "Plot 4", latitudeDeg: 1, longitudeDeg: 2, timeZone: "UTC" }),
+      ProjectCreateRequest.parse({
+        organizationId: o.organizationId,
+        name: "Bare block",
+        siteName: "Plot 4",
+        latitudeDeg: 1,
+        longitudeDeg: 2,
+        timeZone: "UTC",
+      }),
       o.userId,
     );
     const { organizations } = await loadDashboardPage({ id: o.userId });

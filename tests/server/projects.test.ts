@@ -12,7 +12,11 @@ import { problemFor } from "@/lib/server/http";
 import { newOwner, uniqueEmail } from "./helpers";
 
 afterAll(() => pool.end());
-const status = async (p: Promise<unknown>) => p.then(() => "ok" as const, (e) => problemFor(e)?.status ?? String(e));
+const status = async (p: Promise<unknown>) =>
+  p.then(
+    () => "ok" as const,
+    (e) => problemFor(e)?.status ?? String(e),
+  );
 
 async function orgWithClient() {
   const o = await newOwner();
@@ -66,7 +70,12 @@ describe("project editing", () => {
   it("keeps façades named by id, adds new ones, drops the rest, in the given order", async () => {
     const { p } = await orgWithClient();
     const [north] = await facadesOf(p.id);
-    await updateProject(p.id, { facades: [{ name: "South", azimuthDeg: 180, tiltDeg: 90 }, { id: north!.id, name: "North (renamed)", azimuthDeg: 5, tiltDeg: 90 }] });
+    await updateProject(p.id, {
+      facades: [
+        { name: "South", azimuthDeg: 180, tiltDeg: 90 },
+        { id: north!.id, name: "North (renamed)", azimuthDeg: 5, tiltDeg: 90 },
+      ],
+    });
     const after = await facadesOf(p.id);
     expect(after.map((f) => f.name)).toEqual(["South", "North (renamed)"]);
     expect(after[1]!.id).toBe(north!.id);

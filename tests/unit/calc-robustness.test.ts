@@ -15,7 +15,12 @@ const physical = fc.record({
   emissivityFront: fc.option(fc.double({ min: 0.01, max: 1, noNaN: true }), { nil: undefined }),
 });
 const measured = fc
-  .record({ t: fc.double({ min: 0.001, max: 1, noNaN: true }), rf: fc.double({ min: 0, max: 1, noNaN: true }), rb: fc.double({ min: 0, max: 1, noNaN: true }), d: fc.double({ min: 0.5, max: 60, noNaN: true }) })
+  .record({
+    t: fc.double({ min: 0.001, max: 1, noNaN: true }),
+    rf: fc.double({ min: 0, max: 1, noNaN: true }),
+    rb: fc.double({ min: 0, max: 1, noNaN: true }),
+    d: fc.double({ min: 0.5, max: 60, noNaN: true }),
+  })
   .map(({ t, rf, rb, d }) => ({
     kind: "pane",
     thicknessMm: d,
@@ -24,11 +29,14 @@ const measured = fc
 const gap = fc.record({
   kind: fc.constant("gap"),
   widthMm: fc.double({ min: 1, max: 100, noNaN: true }),
-  gas: fc.oneof(fc.constantFrom("air", "argon", "krypton"), fc.double({ min: 0, max: 1, noNaN: true }).map((f) => ({ argon: f, air: 1 - f }))),
+  gas: fc.oneof(
+    fc.constantFrom("air", "argon", "krypton"),
+    fc.double({ min: 0, max: 1, noNaN: true }).map((f) => ({ argon: f, air: 1 - f })),
+  ),
 });
-const layers = fc.array(fc.tuple(fc.oneof(physical, measured), gap), { minLength: 0, maxLength: 5 }).chain((pairs) =>
-  fc.oneof(physical, measured).map((last) => [...pairs.flat(), last]),
-);
+const layers = fc
+  .array(fc.tuple(fc.oneof(physical, measured), gap), { minLength: 0, maxLength: 5 })
+  .chain((pairs) => fc.oneof(physical, measured).map((last) => [...pairs.flat(), last]));
 
 /** Every number in a result must be finite (NaN would silently become null in JSON). */
 function firstNonFinite(x: unknown, path = "$"): string | null {
@@ -81,7 +89,9 @@ describe("robustness", () => {
         fc.double({ min: 0, max: 180, noNaN: true }),
         fc.constantFrom(10, 15, 30, 60, 120),
         fc.constantFrom("perez", "hay-davies", "isotropic"),
-        fc.option(fc.record({ depthM: fc.double({ min: 0, max: 5, noNaN: true }), gapAboveM: fc.double({ min: 0, max: 2, noNaN: true }) }), { nil: undefined }),
+        fc.option(fc.record({ depthM: fc.double({ min: 0, max: 5, noNaN: true }), gapAboveM: fc.double({ min: 0, max: 2, noNaN: true }) }), {
+          nil: undefined,
+        }),
         (lat, lon, timeZone, date, az, tilt, stepMinutes, model, overhang) => {
           const day = date.toISOString().slice(0, 10);
           const req = ScheduleRequest.safeParse({

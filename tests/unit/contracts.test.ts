@@ -13,8 +13,7 @@ const valid = {
   timeZone: "Europe/London",
 };
 
-const fields = (r: { success: boolean; error?: unknown }) =>
-  r.success ? [] : zodFieldErrors(r.error as never).map((e) => e.field);
+const fields = (r: { success: boolean; error?: unknown }) => (r.success ? [] : zodFieldErrors(r.error as never).map((e) => e.field));
 
 describe("project contract", () => {
   it("accepts a minimal project and fills defaults", () => {
@@ -41,7 +40,13 @@ describe("project contract", () => {
   });
 
   it("names the façade field by index", () => {
-    const r = ProjectCreateRequest.safeParse({ ...valid, facades: [{ name: "N", azimuthDeg: 0 }, { name: "S", azimuthDeg: 400 }] });
+    const r = ProjectCreateRequest.safeParse({
+      ...valid,
+      facades: [
+        { name: "N", azimuthDeg: 0 },
+        { name: "S", azimuthDeg: 400 },
+      ],
+    });
     expect(fields(r)).toEqual(["facades[1].azimuthDeg"]);
   });
 

@@ -96,10 +96,20 @@ describe("U-values through the API calculation (EN 673:2011 cases)", () => {
     ["4 | 16 air | 4", [pane4, air16, pane4], uCase("u-value/4-16air-4")],
     ["4 | 16 argon | 4", [pane4, { kind: "gap", widthMm: 16, gas: "argon" }, pane4], uCase("u-value/4-16ar-4")],
     // the case has the coating on face 2; EN 673 h_r is symmetric in the two gap faces, so face 3 gives the same U
-    ["4 | 16 Ar 90 % | 4, ε = 0.03 on face 3", [pane4, { kind: "gap", widthMm: 16, gas: { argon: 0.9, air: 0.1 } }, { ...pane4, emissivityFront: 0.03 }], uCase("u-value/4-16ar90-4-e0.03")],
+    [
+      "4 | 16 Ar 90 % | 4, ε = 0.03 on face 3",
+      [pane4, { kind: "gap", widthMm: 16, gas: { argon: 0.9, air: 0.1 } }, { ...pane4, emissivityFront: 0.03 }],
+      uCase("u-value/4-16ar90-4-e0.03"),
+    ],
     [
       "4 | 16 Ar | 4 | 16 Ar | 4, ε = 0.03 on faces 2 and 5",
-      [{ ...pane4, emissivityBack: 0.03 }, { kind: "gap", widthMm: 16, gas: "argon" }, pane4, { kind: "gap", widthMm: 16, gas: "argon" }, { ...pane4, emissivityFront: 0.03 }],
+      [
+        { ...pane4, emissivityBack: 0.03 },
+        { kind: "gap", widthMm: 16, gas: "argon" },
+        pane4,
+        { kind: "gap", widthMm: 16, gas: "argon" },
+        { ...pane4, emissivityFront: 0.03 },
+      ],
       uCase("u-value/4-16ar-4-16ar-4-e0.03"),
     ],
   ] as const)("%s → U %f W/m²K", (_label, layers, u) => {
@@ -142,7 +152,14 @@ describe("warnings", () => {
     const m = {
       kind: "pane",
       thicknessMm: 4,
-      measured: { solarTransmittance: 0.83, solarReflectanceFront: 0.075, solarReflectanceBack: 0.075, visibleTransmittance: 0.9, visibleReflectanceFront: 0.08, visibleReflectanceBack: 0.08 },
+      measured: {
+        solarTransmittance: 0.83,
+        solarReflectanceFront: 0.075,
+        solarReflectanceBack: 0.075,
+        visibleTransmittance: 0.9,
+        visibleReflectanceFront: 0.08,
+        visibleReflectanceBack: 0.08,
+      },
     } as const;
     const r = calc({ layers: [m, air16, m] });
     expect(r.angles[0]!.visibleTransmittance).toBeGreaterThan(0.75);

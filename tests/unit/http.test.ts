@@ -47,7 +47,12 @@ describe("readJson", () => {
         c.close();
       },
     });
-    const streamed = new Request("http://127.0.0.1/x", { method: "POST", body: stream, headers: { "content-type": "application/json" }, duplex: "half" } as RequestInit);
+    const streamed = new Request("http://127.0.0.1/x", {
+      method: "POST",
+      body: stream,
+      headers: { "content-type": "application/json" },
+      duplex: "half",
+    } as RequestInit);
     expect(await statusOf(readJson(streamed, Schema, 1000))).toBe(413);
   });
   it("answers 415 for a form body", async () => {
@@ -80,7 +85,10 @@ describe("endpoint wrapper", () => {
 describe("endpoint factory", () => {
   type Locals = { user: { id: string; email: string; name: string } | null };
   const signedIn: Locals = { user: { id: "u1", email: "u1@test.example", name: "U One" } };
-  const call = (route: ReturnType<typeof endpoint>, opts: { locals?: Locals; params?: Record<string, string>; body?: unknown; raw?: string } = {}) => {
+  const call = (
+    route: ReturnType<typeof endpoint>,
+    opts: { locals?: Locals; params?: Record<string, string>; body?: unknown; raw?: string } = {},
+  ) => {
     const text = opts.raw ?? (opts.body === undefined ? undefined : JSON.stringify(opts.body));
     const request = new Request("http://127.0.0.1/api/x", {
       method: text === undefined ? "GET" : "POST",
@@ -115,14 +123,18 @@ describe("endpoint factory", () => {
   });
 
   it("answers 404 for route parameters that fail their schema, 400 naming the field for bodies", async () => {
-    const route = endpoint({ auth: "user", params: z.object({ id: z.string().regex(/^[a-z]+$/, "not a valid id") }), body: Schema }, ({ params, body }) =>
-      json({ id: params.id, c: body.b.c }),
+    const route = endpoint(
+      { auth: "user", params: z.object({ id: z.string().regex(/^[a-z]+$/, "not a valid id") }), body: Schema },
+      ({ params, body }) => json({ id: params.id, c: body.b.c }),
     );
     expect((await call(route, { locals: signedIn, params: { id: "<x>" }, body: { a: 1, b: { c: "x" } } })).status).toBe(404);
     const bad = await call(route, { locals: signedIn, params: { id: "abc" }, body: { a: 1, b: { c: 2 } } });
     expect(bad.status).toBe(400);
     expect((await bad.json()).errors).toEqual([{ field: "b.c", message: expect.any(String) }]);
-    expect(await (await call(route, { locals: signedIn, params: { id: "abc" }, body: { a: 1, b: { c: "y" } } })).json()).toEqual({ id: "abc", c: "y" });
+    expect(await (await call(route, { locals: signedIn, params: { id: "abc" }, body: { a: 1, b: { c: "y" } } })).json()).toEqual({
+      id: "abc",
+      c: "y",
+    });
   });
 
   it("holds each endpoint to its own body limit", async () => {
@@ -137,8 +149,9 @@ describe("endpoint factory", () => {
 
   it("loads the project named by the parameter with the permission, and hands it to the handler", async () => {
     access.requireProject.mockResolvedValue({ project: { id: "p1", name: "Tower" }, membership: { role: "consultant" } });
-    const route = endpoint({ auth: { project: "id", permission: "project:update" }, params: z.object({ id: z.string() }) }, ({ project, membership }) =>
-      json({ name: project.name, role: membership.role }),
+    const route = endpoint(
+      { auth: { project: "id", permission: "project:update" }, params: z.object({ id: z.string() }) },
+      ({ project, membership }) => json({ name: project.name, role: membership.role }),
     );
     expect(await (await call(route, { locals: signedIn, params: { id: "p1" } })).json()).toEqual({ name: "Tower", role: "consultant" });
     expect(access.requireProject).toHaveBeenCalledWith("u1", "p1", { project: ["update"] }, "edit projects");
@@ -146,8 +159,9 @@ describe("endpoint factory", () => {
 
   it("checks an organisation permission named in the body after the body is valid", async () => {
     access.requireOrgPermission.mockRejectedValue(ForbiddenError.forRole("client", "create projects"));
-    const route = endpoint({ auth: { org: "organizationId", from: "body", permission: "project:create" }, body: z.object({ organizationId: z.string() }) }, () =>
-      json({ ran: true }),
+    const route = endpoint(
+      { auth: { org: "organizationId", from: "body", permission: "project:create" }, body: z.object({ organizationId: z.string() }) },
+      () => json({ ran: true }),
     );
     expect((await call(route, { locals: signedIn, body: {} })).status).toBe(400);
     expect(access.requireOrgPermission).not.toHaveBeenCalled();
@@ -163,12 +177,19 @@ describe("endpoint factory", () => {
     expect(notFound.status).toBe(404);
     expect(await notFound.json()).toMatchObject({ status: 404, title: "Not found", detail: "No such project, or it is not shared with you" });
     expect((await call(failing(ForbiddenError.forRole("architect", "edit projects")), { locals: signedIn })).status).toBe(403);
-    const conflict = await call(failing(new ConflictError("already a member", [{ field: "email", message: "already a member" }])), { locals: signedIn });
+    const conflict = await call(failing(new ConflictError("already a member", [{ field: "email", message: "already a member" }])), {
+      locals: signedIn,
+    });
     expect(conflict.status).toBe(409);
     expect((await conflict.json()).errors).toEqual([{ field: "email", message: "already a member" }]);
-    const invalid = await call(failing(new InvalidError("facades", "unknown façade id", 'Façade id "f9" does not belong to this project')), { locals: signedIn });
+    const invalid = await call(failing(new InvalidError("facades", "unknown façade id", 'Façade id "f9" does not belong to this project')), {
+      locals: signedIn,
+    });
     expect(invalid.status).toBe(400);
-    expect(await invalid.json()).toMatchObject({ detail: 'Façade id "f9" does not belong to this project', errors: [{ field: "facades", message: "unknown façade id" }] });
+    expect(await invalid.json()).toMatchObject({
+      detail: 'Façade id "f9" does not belong to this project',
+      errors: [{ field: "facades", message: "unknown façade id" }],
+    });
   });
 
   it("maps the engine's RangeError to 400 naming the declared field, and only where declared", async () => {
@@ -178,7 +199,10 @@ describe("endpoint factory", () => {
     const declared = endpoint({ auth: "user", engineErrorsField: "layers" }, engine);
     const res = await call(declared, { locals: signedIn });
     expect(res.status).toBe(400);
-    expect(await res.json()).toMatchObject({ detail: "no pane can transmit 0.9 and reflect 0.2", errors: [{ field: "layers", message: "no pane can transmit 0.9 and reflect 0.2" }] });
+    expect(await res.json()).toMatchObject({
+      detail: "no pane can transmit 0.9 and reflect 0.2",
+      errors: [{ field: "layers", message: "no pane can transmit 0.9 and reflect 0.2" }],
+    });
     const undeclared = endpoint({ auth: "user" }, engine);
     const failed = await quiet(() => call(undeclared, { locals: signedIn }));
     expect(failed.status).toBe(500);

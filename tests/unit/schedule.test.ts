@@ -8,16 +8,15 @@
 import { describe, expect, it } from "vitest";
 import { ScheduleRequest, type ScheduleRequestInput } from "@/lib/contracts/schedule";
 import { GlazingRequest } from "@/lib/contracts/glazing";
-import {
-  allocateColumns,
-  computeSurfaceSeries,
-  prepareGlazingTables,
-  prepareSurface,
-  type SiteSeries,
-} from "@/lib/calc/schedule";
+import { allocateColumns, computeSurfaceSeries, prepareGlazingTables, prepareSurface, type SiteSeries } from "@/lib/calc/schedule";
 import { scheduleResponse } from "@/lib/calc/schedule-response";
 import { calculateGlazing } from "@/lib/calc/glazing";
-import { emptyPerez1990SkyCoefficients, emptyHayDavies1980SkyCoefficients, skyCoefficientsPerez1990, skyCoefficientsHayDavies1980 } from "@/lib/physics/irradiance";
+import {
+  emptyPerez1990SkyCoefficients,
+  emptyHayDavies1980SkyCoefficients,
+  skyCoefficientsPerez1990,
+  skyCoefficientsHayDavies1980,
+} from "@/lib/physics/irradiance";
 
 const RAD = Math.PI / 180;
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } as const;
@@ -27,8 +26,14 @@ const double6 = [pane6, { kind: "gap", widthMm: 16, gas: "air" }, pane6] as cons
 function exampleSite(model: "isotropic" | "hay-davies" | "perez", zenithDeg = 40, azimuthDeg = 160): SiteSeries {
   // case "transposition/example/clear-sky" (scripts/reference/irradiance.ts): doy 172 → E0 = 1321.62
   // (Spencer, 1366.1); z = 40°, TL = 3, sea level: GHI 755.302, DNI 864.288, DHI 93.2191 (AM = 1.304224)
-  const ghi = 755.302, dni = 864.288, dhi = 93.2191, e0 = 1321.62, am = 1.304224;
-  const z = zenithDeg * RAD, a = azimuthDeg * RAD, alt = Math.PI / 2 - z;
+  const ghi = 755.302,
+    dni = 864.288,
+    dhi = 93.2191,
+    e0 = 1321.62,
+    am = 1.304224;
+  const z = zenithDeg * RAD,
+    a = azimuthDeg * RAD,
+    alt = Math.PI / 2 - z;
   const hour = { dhiWPerM2: dhi, dniWPerM2: dni, extraterrestrialWPerM2: e0, zenithRad: z };
   const c =
     model === "isotropic"
@@ -96,7 +101,7 @@ describe("irradiance on a vertical south façade (transposition worked example)"
   });
 });
 
-describe("external shading in the schedule (overhang/fin worked example, case \"shading/example/sunlit-fractions\")", () => {
+describe('external shading in the schedule (overhang/fin worked example, case "shading/example/sunlit-fractions")', () => {
   // W 1.5, H 1.2, overhang P 0.6 with G 0.3, fins F 0.4 flush; south façade; sun alt 50°, az 210° → f_sunlit 0.475424
   const shading = { window: { widthM: 1.5, heightM: 1.2 }, overhang: { depthM: 0.6, gapAboveM: 0.3 }, fins: { depthM: 0.4, gapM: 0 } };
   it("sunlit fraction 0.475424 and the beam reduced by it", () => {
@@ -118,7 +123,12 @@ describe("external shading in the schedule (overhang/fin worked example, case \"
     expect(behind.beamTransmittance[0]).toBe(0);
     expect(behind.diffuseIncidentWm2[0]!).toBeGreaterThan(0);
     const low = allocateColumns(1);
-    computeSurfaceSeries(exampleSite("perez", 80, 180), prepareSurface({ azimuthDeg: 180, tiltDeg: 90, shading: { window: { widthM: 1, heightM: 1 }, horizonDeg: 15 } }, 0.2), glazing, low);
+    computeSurfaceSeries(
+      exampleSite("perez", 80, 180),
+      prepareSurface({ azimuthDeg: 180, tiltDeg: 90, shading: { window: { widthM: 1, heightM: 1 }, horizonDeg: 15 } }, 0.2),
+      glazing,
+      low,
+    );
     expect(low.sunlitFraction[0]).toBe(0);
   });
 });
@@ -194,7 +204,10 @@ describe("schedule rows and totals", () => {
   });
 
   it("uses a weather series in place of the clear sky", () => {
-    const weather = [{ time: "2026-06-21T12:30:00+01:00", ghi: 500, dni: 300, dhi: 250 }, { time: "2030-01-01T00:30:00Z", ghi: 1, dni: 1, dhi: 1 }];
+    const weather = [
+      { time: "2026-06-21T12:30:00+01:00", ghi: 500, dni: 300, dhi: 250 },
+      { time: "2030-01-01T00:30:00Z", ghi: 1, dni: 1, dhi: 1 },
+    ];
     const res = schedule({ weather });
     const s = res.surfaces[0]!;
     expect(res.irradiance).toBe("weather series");

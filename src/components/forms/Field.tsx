@@ -23,7 +23,11 @@ export function FormMessage({ kind, children }: { kind: "error" | "ok"; children
   return (
     <div
       role={kind === "error" ? "alert" : "status"}
-      className={kind === "error" ? "rounded border border-alert/30 bg-alert/5 px-3 py-2 text-sm text-alert" : "rounded border border-glass/30 bg-glass-light px-3 py-2 text-sm text-glass"}
+      className={
+        kind === "error"
+          ? "rounded border border-alert/30 bg-alert/5 px-3 py-2 text-sm text-alert"
+          : "rounded border border-glass/30 bg-glass-light px-3 py-2 text-sm text-glass"
+      }
     >
       {children}
     </div>

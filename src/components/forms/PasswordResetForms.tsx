@@ -21,7 +21,11 @@ export function RequestResetForm() {
     else setSent(true);
   });
   if (sent) {
-    return <FormMessage kind="ok">If an account exists for that address, we have sent it a link to choose a new password. The link is valid for one hour.</FormMessage>;
+    return (
+      <FormMessage kind="ok">
+        If an account exists for that address, we have sent it a link to choose a new password. The link is valid for one hour.
+      </FormMessage>
+    );
   }
   return (
     <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
@@ -51,7 +55,10 @@ export function ResetPasswordForm({ token }: { token: string }) {
   const onSubmit = handleSubmit(async (v) => {
     setFailure(null);
     const { error } = await authClient.resetPassword({ newPassword: v.password, token });
-    if (error) setFailure(error.code === "INVALID_TOKEN" ? "This reset link is invalid or has expired; ask for a new one." : (error.message ?? "Reset failed."));
+    if (error)
+      setFailure(
+        error.code === "INVALID_TOKEN" ? "This reset link is invalid or has expired; ask for a new one." : (error.message ?? "Reset failed."),
+      );
     else setDone(true);
   });
   if (done) {

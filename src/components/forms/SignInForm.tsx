@@ -24,7 +24,9 @@ export default function SignInForm({ next, email }: { next?: string; email?: str
     setFailure(null);
     const { error } = await authClient.signIn.email({ email: v.email, password: v.password });
     if (error) {
-      setFailure(error.status === 401 || error.code === "INVALID_EMAIL_OR_PASSWORD" ? "Wrong e-mail or password." : (error.message ?? "Sign-in failed."));
+      setFailure(
+        error.status === 401 || error.code === "INVALID_EMAIL_OR_PASSWORD" ? "Wrong e-mail or password." : (error.message ?? "Sign-in failed."),
+      );
       return;
     }
     window.location.assign(safeNext(next));

@@ -18,7 +18,13 @@ export default function SignUpForm({ invitation }: Props) {
   const [failure, setFailure] = useState<string | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<Values>({
     resolver: zodResolver(SignUpRequest) as never,
-    defaultValues: { name: "", email: invitation?.email ?? "", password: "", organizationName: invitation ? undefined : "", invitationId: invitation?.id },
+    defaultValues: {
+      name: "",
+      email: invitation?.email ?? "",
+      password: "",
+      organizationName: invitation ? undefined : "",
+      invitationId: invitation?.id,
+    },
   });
   const onSubmit = handleSubmit(async (v) => {
     setFailure(null);
@@ -48,7 +54,12 @@ export default function SignUpForm({ invitation }: Props) {
           You will join <strong>{invitation.organizationName}</strong> as <strong>{invitation.roleLabel}</strong>.
         </p>
       ) : (
-        <Field label="Your firm" htmlFor="organizationName" error={formState.errors.organizationName} hint="A new organisation is created with you as its owner.">
+        <Field
+          label="Your firm"
+          htmlFor="organizationName"
+          error={formState.errors.organizationName}
+          hint="A new organisation is created with you as its owner."
+        >
           <input id="organizationName" autoComplete="organization" {...register("organizationName")} />
         </Field>
       )}

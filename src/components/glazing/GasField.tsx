@@ -24,7 +24,9 @@ export default function GasField({ id, value, onChange }: { id: string; value: G
         <label htmlFor={`${id}-gas`}>Gas</label>
         <select id={`${id}-gas`} value={name} onChange={(e) => onChange(joinGas(e.target.value as Name, e.target.value === "air" ? 100 : 90))}>
           {NAMES.map((n) => (
-            <option key={n} value={n}>{n}</option>
+            <option key={n} value={n}>
+              {n}
+            </option>
           ))}
         </select>
       </div>

@@ -101,10 +101,29 @@ export default function GlazingComposer() {
     ? [
         { key: "T", label: "solar transmittance", color: "#0f4c5c", points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarTransmittance })) },
         { key: "g", label: "g-value", color: "#14212b", points: result.angles.map((a) => ({ x: a.angleDeg, y: a.gValue })) },
-        { key: "Rf", label: "solar reflectance, outdoor side", color: "#e8a33d", points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarReflectanceFront })) },
-        { key: "Rb", label: "solar reflectance, room side", color: "#e8a33d", dashed: true, points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarReflectanceBack })) },
+        {
+          key: "Rf",
+          label: "solar reflectance, outdoor side",
+          color: "#e8a33d",
+          points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarReflectanceFront })),
+        },
+        {
+          key: "Rb",
+          label: "solar reflectance, room side",
+          color: "#e8a33d",
+          dashed: true,
+          points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarReflectanceBack })),
+        },
         ...(result.angles[0]?.visibleTransmittance != null
-          ? [{ key: "Tv", label: "light transmittance", color: "#0f4c5c", dashed: true, points: result.angles.map((a) => ({ x: a.angleDeg, y: a.visibleTransmittance ?? 0 })) }]
+          ? [
+              {
+                key: "Tv",
+                label: "light transmittance",
+                color: "#0f4c5c",
+                dashed: true,
+                points: result.angles.map((a) => ({ x: a.angleDeg, y: a.visibleTransmittance ?? 0 })),
+              },
+            ]
           : []),
       ]
     : [];
@@ -131,9 +150,13 @@ export default function GlazingComposer() {
               if (p) reset({ layers: structuredClone(p.request.layers) as LayerIn[] });
             }}
           >
-            <option value="" disabled>choose a typical make-up…</option>
+            <option value="" disabled>
+              choose a typical make-up…
+            </option>
             {PRESETS.map((p) => (
-              <option key={p.id} value={p.id}>{p.label}</option>
+              <option key={p.id} value={p.id}>
+                {p.label}
+              </option>
             ))}
           </select>
         </div>
@@ -166,7 +189,12 @@ export default function GlazingComposer() {
             return (
               <li key={field.id} className="card space-y-3 p-4" data-testid="pane-row">
                 <div className="flex items-center gap-2">
-                  <p className="font-bold">Pane {n} <span className="text-xs font-normal text-slate">faces {2 * n - 1} | {2 * n}</span></p>
+                  <p className="font-bold">
+                    Pane {n}{" "}
+                    <span className="text-xs font-normal text-slate">
+                      faces {2 * n - 1} | {2 * n}
+                    </span>
+                  </p>
                   <select
                     aria-label={`How pane ${n} is described`}
                     className="ml-auto mt-0 w-auto py-1 text-sm"
@@ -188,15 +216,30 @@ export default function GlazingComposer() {
                 </div>
                 <div className="grid grid-cols-3 gap-3">
                   <Field label="Thickness (mm)" htmlFor={`${base}.thicknessMm`} error={errorAt(errors, `${base}.thicknessMm`)}>
-                    <input id={`${base}.thicknessMm`} type="number" step="any" {...register(`layers.${i}.thicknessMm` as never, { valueAsNumber: true })} />
+                    <input
+                      id={`${base}.thicknessMm`}
+                      type="number"
+                      step="any"
+                      {...register(`layers.${i}.thicknessMm` as never, { valueAsNumber: true })}
+                    />
                   </Field>
                   {!measured && (
                     <>
                       <Field label="Refractive index" htmlFor={`${base}.refractiveIndex`} error={errorAt(errors, `${base}.refractiveIndex`)}>
-                        <input id={`${base}.refractiveIndex`} type="number" step="any" {...register(`layers.${i}.refractiveIndex` as never, { valueAsNumber: true })} />
+                        <input
+                          id={`${base}.refractiveIndex`}
+                          type="number"
+                          step="any"
+                          {...register(`layers.${i}.refractiveIndex` as never, { valueAsNumber: true })}
+                        />
                       </Field>
                       <Field label="Absorption (1/mm)" htmlFor={`${base}.absorptionPerMm`} error={errorAt(errors, `${base}.absorptionPerMm`)}>
-                        <input id={`${base}.absorptionPerMm`} type="number" step="any" {...register(`layers.${i}.absorptionPerMm` as never, { valueAsNumber: true })} />
+                        <input
+                          id={`${base}.absorptionPerMm`}
+                          type="number"
+                          step="any"
+                          {...register(`layers.${i}.absorptionPerMm` as never, { valueAsNumber: true })}
+                        />
                       </Field>
                     </>
                   )}
@@ -228,11 +271,37 @@ export default function GlazingComposer() {
                   </div>
                 )}
                 <div className="grid grid-cols-2 gap-3">
-                  <Field label={`Emissivity, face ${2 * n - 1}`} htmlFor={`${base}.emissivityFront`} error={errorAt(errors, `${base}.emissivityFront`)} hint="0.837 if uncoated">
-                    <input id={`${base}.emissivityFront`} type="number" step="any" placeholder="0.837" {...register(`layers.${i}.emissivityFront` as never, { setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)) })} />
+                  <Field
+                    label={`Emissivity, face ${2 * n - 1}`}
+                    htmlFor={`${base}.emissivityFront`}
+                    error={errorAt(errors, `${base}.emissivityFront`)}
+                    hint="0.837 if uncoated"
+                  >
+                    <input
+                      id={`${base}.emissivityFront`}
+                      type="number"
+                      step="any"
+                      placeholder="0.837"
+                      {...register(`layers.${i}.emissivityFront` as never, {
+                        setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
+                      })}
+                    />
                   </Field>
-                  <Field label={`Emissivity, face ${2 * n}`} htmlFor={`${base}.emissivityBack`} error={errorAt(errors, `${base}.emissivityBack`)} hint="0.837 if uncoated">
-                    <input id={`${base}.emissivityBack`} type="number" step="any" placeholder="0.837" {...register(`layers.${i}.emissivityBack` as never, { setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)) })} />
+                  <Field
+                    label={`Emissivity, face ${2 * n}`}
+                    htmlFor={`${base}.emissivityBack`}
+                    error={errorAt(errors, `${base}.emissivityBack`)}
+                    hint="0.837 if uncoated"
+                  >
+                    <input
+                      id={`${base}.emissivityBack`}
+                      type="number"
+                      step="any"
+                      placeholder="0.837"
+                      {...register(`layers.${i}.emissivityBack` as never, {
+                        setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
+                      })}
+                    />
                   </Field>
                 </div>
               </li>
@@ -254,18 +323,24 @@ export default function GlazingComposer() {
             <div className="grid gap-4 sm:grid-cols-3">
               <div className="card">
                 <p className="text-xs font-bold uppercase tracking-wide text-slate">g-value (normal)</p>
-                <p className="text-3xl font-black tabular-nums" data-testid="g-normal">{fix(normal?.gValue, 2)}</p>
+                <p className="text-3xl font-black tabular-nums" data-testid="g-normal">
+                  {fix(normal?.gValue, 2)}
+                </p>
                 <p className="text-xs text-slate">EN 410 · hemispherical {fix(result.hemispherical.gValue, 2)}</p>
               </div>
               <div className="card">
                 <p className="text-xs font-bold uppercase tracking-wide text-slate">U-value, centre of glass</p>
-                <p className="text-3xl font-black tabular-nums" data-testid="u-value">{result.uValue.toFixed(1)}</p>
+                <p className="text-3xl font-black tabular-nums" data-testid="u-value">
+                  {result.uValue.toFixed(1)}
+                </p>
                 <p className="text-xs text-slate">W/(m²K) · EN 673 · unrounded {result.uValue.toFixed(3)}</p>
               </div>
               <div className="card">
                 <p className="text-xs font-bold uppercase tracking-wide text-slate">Light transmittance</p>
                 <p className="text-3xl font-black tabular-nums">{normal?.visibleTransmittance == null ? "—" : pct(normal.visibleTransmittance, 0)}</p>
-                <p className="text-xs text-slate">{normal?.visibleTransmittance == null ? "needs measured light values for every pane" : "normal incidence"}</p>
+                <p className="text-xs text-slate">
+                  {normal?.visibleTransmittance == null ? "needs measured light values for every pane" : "normal incidence"}
+                </p>
               </div>
             </div>
             <div className="card grid gap-6 2xl:grid-cols-2">
@@ -275,17 +350,45 @@ export default function GlazingComposer() {
             <div className="card overflow-x-auto">
               <table className="w-full text-sm tabular-nums" data-testid="summary-table">
                 <thead className="text-left text-slate">
-                  <tr><th className="py-1">Quantity</th><th className="text-right">Normal (0°)</th><th className="text-right">Hemispherical</th></tr>
+                  <tr>
+                    <th className="py-1">Quantity</th>
+                    <th className="text-right">Normal (0°)</th>
+                    <th className="text-right">Hemispherical</th>
+                  </tr>
                 </thead>
                 <tbody>
-                  <tr className="border-t border-line"><td className="py-1">Solar transmittance τe</td><td className="text-right">{fix(normal?.solarTransmittance)}</td><td className="text-right">{fix(result.hemispherical.solarTransmittance)}</td></tr>
-                  <tr className="border-t border-line"><td className="py-1">Solar reflectance ρe, outdoor side</td><td className="text-right">{fix(normal?.solarReflectanceFront)}</td><td className="text-right">{fix(result.hemispherical.solarReflectanceFront)}</td></tr>
-                  <tr className="border-t border-line"><td className="py-1">Solar reflectance, room side</td><td className="text-right">{fix(normal?.solarReflectanceBack)}</td><td className="text-right">{fix(result.hemispherical.solarReflectanceBack)}</td></tr>
+                  <tr className="border-t border-line">
+                    <td className="py-1">Solar transmittance τe</td>
+                    <td className="text-right">{fix(normal?.solarTransmittance)}</td>
+                    <td className="text-right">{fix(result.hemispherical.solarTransmittance)}</td>
+                  </tr>
+                  <tr className="border-t border-line">
+                    <td className="py-1">Solar reflectance ρe, outdoor side</td>
+                    <td className="text-right">{fix(normal?.solarReflectanceFront)}</td>
+                    <td className="text-right">{fix(result.hemispherical.solarReflectanceFront)}</td>
+                  </tr>
+                  <tr className="border-t border-line">
+                    <td className="py-1">Solar reflectance, room side</td>
+                    <td className="text-right">{fix(normal?.solarReflectanceBack)}</td>
+                    <td className="text-right">{fix(result.hemispherical.solarReflectanceBack)}</td>
+                  </tr>
                   {(normal?.layerAbsorptance ?? []).map((a, k) => (
-                    <tr key={k} className="border-t border-line"><td className="py-1">Absorptance, pane {k + 1}</td><td className="text-right">{fix(a)}</td><td className="text-right">{fix(result.hemispherical.layerAbsorptance[k])}</td></tr>
+                    <tr key={k} className="border-t border-line">
+                      <td className="py-1">Absorptance, pane {k + 1}</td>
+                      <td className="text-right">{fix(a)}</td>
+                      <td className="text-right">{fix(result.hemispherical.layerAbsorptance[k])}</td>
+                    </tr>
                   ))}
-                  <tr className="border-t border-line font-bold"><td className="py-1">g-value (total solar energy transmittance)</td><td className="text-right">{fix(normal?.gValue)}</td><td className="text-right">{fix(result.hemispherical.gValue)}</td></tr>
-                  <tr className="border-t border-line"><td className="py-1">Light transmittance τv</td><td className="text-right">{fix(normal?.visibleTransmittance)}</td><td className="text-right">{fix(result.hemispherical.visibleTransmittance)}</td></tr>
+                  <tr className="border-t border-line font-bold">
+                    <td className="py-1">g-value (total solar energy transmittance)</td>
+                    <td className="text-right">{fix(normal?.gValue)}</td>
+                    <td className="text-right">{fix(result.hemispherical.gValue)}</td>
+                  </tr>
+                  <tr className="border-t border-line">
+                    <td className="py-1">Light transmittance τv</td>
+                    <td className="text-right">{fix(normal?.visibleTransmittance)}</td>
+                    <td className="text-right">{fix(result.hemispherical.visibleTransmittance)}</td>
+                  </tr>
                 </tbody>
               </table>
             </div>
@@ -293,22 +396,44 @@ export default function GlazingComposer() {
               <summary className="cursor-pointer font-bold">Values every 10°</summary>
               <table className="mt-3 w-full text-sm tabular-nums" data-testid="angle-table">
                 <thead className="text-left text-slate">
-                  <tr><th>Angle</th><th className="text-right">τe</th><th className="text-right">ρe out</th><th className="text-right">ρe room</th>{(normal?.layerAbsorptance ?? []).map((_, k) => <th key={k} className="text-right">A{k + 1}</th>)}<th className="text-right">g</th></tr>
+                  <tr>
+                    <th>Angle</th>
+                    <th className="text-right">τe</th>
+                    <th className="text-right">ρe out</th>
+                    <th className="text-right">ρe room</th>
+                    {(normal?.layerAbsorptance ?? []).map((_, k) => (
+                      <th key={k} className="text-right">
+                        A{k + 1}
+                      </th>
+                    ))}
+                    <th className="text-right">g</th>
+                  </tr>
                 </thead>
                 <tbody>
-                  {result.angles.filter((a) => a.angleDeg % 10 === 0).map((a) => (
-                    <tr key={a.angleDeg} className="border-t border-line">
-                      <td>{a.angleDeg}°</td><td className="text-right">{fix(a.solarTransmittance)}</td><td className="text-right">{fix(a.solarReflectanceFront)}</td><td className="text-right">{fix(a.solarReflectanceBack)}</td>
-                      {a.layerAbsorptance.map((x, k) => <td key={k} className="text-right">{fix(x)}</td>)}
-                      <td className="text-right">{fix(a.gValue)}</td>
-                    </tr>
-                  ))}
+                  {result.angles
+                    .filter((a) => a.angleDeg % 10 === 0)
+                    .map((a) => (
+                      <tr key={a.angleDeg} className="border-t border-line">
+                        <td>{a.angleDeg}°</td>
+                        <td className="text-right">{fix(a.solarTransmittance)}</td>
+                        <td className="text-right">{fix(a.solarReflectanceFront)}</td>
+                        <td className="text-right">{fix(a.solarReflectanceBack)}</td>
+                        {a.layerAbsorptance.map((x, k) => (
+                          <td key={k} className="text-right">
+                            {fix(x)}
+                          </td>
+                        ))}
+                        <td className="text-right">{fix(a.gValue)}</td>
+                      </tr>
+                    ))}
                 </tbody>
               </table>
             </details>
             {result.warnings.length > 0 && (
               <ul className="notice list-disc space-y-1 pl-8" data-testid="warnings">
-                {result.warnings.map((w) => <li key={w}>{w}</li>)}
+                {result.warnings.map((w) => (
+                  <li key={w}>{w}</li>
+                ))}
               </ul>
             )}
           </>

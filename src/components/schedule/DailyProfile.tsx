@@ -16,8 +16,13 @@ export const PROFILE_SERIES = [
 /** One day's irradiance on and through the glass against local time (d3 scales, SVG). */
 export default function DailyProfile({ rows, localHours, title }: { rows: ScheduleRow[]; localHours: number[]; title: string }) {
   const yMax = Math.max(50, ...rows.flatMap((r) => PROFILE_SERIES.map((s) => r[s.key])));
-  const x = scaleLinear().domain([0, 24]).range([M.left, W - M.right]);
-  const y = scaleLinear().domain([0, yMax]).range([H - M.bottom, M.top]).nice();
+  const x = scaleLinear()
+    .domain([0, 24])
+    .range([M.left, W - M.right]);
+  const y = scaleLinear()
+    .domain([0, yMax])
+    .range([H - M.bottom, M.top])
+    .nice();
   const path = (key: (typeof PROFILE_SERIES)[number]["key"]) =>
     line<number>()
       .x((_, i) => x(localHours[i]!))
@@ -29,13 +34,19 @@ export default function DailyProfile({ rows, localHours, title }: { rows: Schedu
         {y.ticks(5).map((t) => (
           <g key={t}>
             <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#ddd8cc" />
-            <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="11" fill="#4a5a66">{t}</text>
+            <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize="11" fill="#4a5a66">
+              {t}
+            </text>
           </g>
         ))}
         {[0, 3, 6, 9, 12, 15, 18, 21, 24].map((t) => (
-          <text key={t} x={x(t)} y={H - M.bottom + 16} textAnchor="middle" fontSize="11" fill="#4a5a66">{String(t).padStart(2, "0")}:00</text>
+          <text key={t} x={x(t)} y={H - M.bottom + 16} textAnchor="middle" fontSize="11" fill="#4a5a66">
+            {String(t).padStart(2, "0")}:00
+          </text>
         ))}
-        <text transform={`translate(12 ${(H - M.bottom + M.top) / 2}) rotate(-90)`} textAnchor="middle" fontSize="11" fill="#4a5a66">W/m²</text>
+        <text transform={`translate(12 ${(H - M.bottom + M.top) / 2}) rotate(-90)`} textAnchor="middle" fontSize="11" fill="#4a5a66">
+          W/m²
+        </text>
         {PROFILE_SERIES.map((s) => (
           <path key={s.key} d={path(s.key)} fill="none" stroke={s.color} strokeWidth={2} strokeDasharray={s.dashed ? "5 4" : undefined} />
         ))}

@@ -68,7 +68,12 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
             tiltDeg: facade.tiltDeg,
             layers: preset.request.layers,
             ...(overhang.on
-              ? { shading: { window: { widthM: overhang.widthM, heightM: overhang.heightM }, overhang: { depthM: overhang.depthM, gapAboveM: overhang.gapAboveM } } }
+              ? {
+                  shading: {
+                    window: { widthM: overhang.widthM, heightM: overhang.heightM },
+                    overhang: { depthM: overhang.depthM, gapAboveM: overhang.gapAboveM },
+                  },
+                }
               : {}),
           },
         ],
@@ -95,7 +100,8 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
       const dIdx = dayOf.get(r.time.slice(0, 10));
       if (dIdx === undefined) continue;
       const incident = r.beamIncidentWm2 + r.diffuseIncidentWm2;
-      const value = measure === "fraction" ? (incident > 1 ? r.transmittedWm2 / incident : 0) : measure === "transmitted" ? r.transmittedWm2 : r.solarGainWm2;
+      const value =
+        measure === "fraction" ? (incident > 1 ? r.transmittedWm2 / incident : 0) : measure === "transmitted" ? r.transmittedWm2 : r.solarGainWm2;
       if (value > max) max = value;
       cells.push({ day: dIdx, hour: localHourOf(r.time), value });
     }
@@ -133,7 +139,9 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
           <label htmlFor="glazing">Glazing option</label>
           <select id="glazing" value={presetId} onChange={(e) => setPresetId(e.target.value)}>
             {PRESETS.map((p) => (
-              <option key={p.id} value={p.id}>{p.label}</option>
+              <option key={p.id} value={p.id}>
+                {p.label}
+              </option>
             ))}
           </select>
         </div>
@@ -151,15 +159,37 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
         </div>
         <div>
           <label htmlFor="linke">Linke turbidity</label>
-          <input id="linke" type="number" step="0.1" min={1} max={10} placeholder="monthly defaults" value={linke} onChange={(e) => setLinke(Number.isNaN(e.target.valueAsNumber) ? "" : e.target.valueAsNumber)} />
+          <input
+            id="linke"
+            type="number"
+            step="0.1"
+            min={1}
+            max={10}
+            placeholder="monthly defaults"
+            value={linke}
+            onChange={(e) => setLinke(Number.isNaN(e.target.valueAsNumber) ? "" : e.target.valueAsNumber)}
+          />
         </div>
         <div>
           <label htmlFor="albedo">Ground albedo</label>
-          <input id="albedo" type="number" step="0.05" min={0} max={1} value={albedo} onChange={(e) => setAlbedo(Number.isNaN(e.target.valueAsNumber) ? 0.2 : e.target.valueAsNumber)} />
+          <input
+            id="albedo"
+            type="number"
+            step="0.05"
+            min={0}
+            max={1}
+            value={albedo}
+            onChange={(e) => setAlbedo(Number.isNaN(e.target.valueAsNumber) ? 0.2 : e.target.valueAsNumber)}
+          />
         </div>
         <fieldset className="md:col-span-3 xl:col-span-4">
           <label className="flex items-center gap-2 font-bold">
-            <input type="checkbox" className="mt-0 w-auto" checked={overhang.on} onChange={(e) => setOverhang({ ...overhang, on: e.target.checked })} />
+            <input
+              type="checkbox"
+              className="mt-0 w-auto"
+              checked={overhang.on}
+              onChange={(e) => setOverhang({ ...overhang, on: e.target.checked })}
+            />
             Overhang over a window
           </label>
           {overhang.on && (
@@ -174,7 +204,14 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
               ).map(([k, label]) => (
                 <div key={k}>
                   <label htmlFor={`oh-${k}`}>{label}</label>
-                  <input id={`oh-${k}`} type="number" step="any" min={0} value={overhang[k]} onChange={(e) => setOverhang({ ...overhang, [k]: e.target.valueAsNumber })} />
+                  <input
+                    id={`oh-${k}`}
+                    type="number"
+                    step="any"
+                    min={0}
+                    value={overhang[k]}
+                    onChange={(e) => setOverhang({ ...overhang, [k]: e.target.valueAsNumber })}
+                  />
                 </div>
               ))}
             </div>
@@ -190,17 +227,42 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
       {result && view && period && (
         <>
           <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4" data-testid="period-totals">
-            <div className="card"><p className="text-xs font-bold uppercase text-slate">Sun on the glass</p><p className="text-2xl font-black tabular-nums">{f(period.incidentKWhPerM2, 0)}</p><p className="text-xs text-slate">kWh/m² in {year}</p></div>
-            <div className="card"><p className="text-xs font-bold uppercase text-slate">Transmitted</p><p className="text-2xl font-black tabular-nums" data-testid="transmitted-total">{f(period.transmittedKWhPerM2, 0)}</p><p className="text-xs text-slate">kWh/m² · {period.incidentKWhPerM2 > 0 ? f((100 * period.transmittedKWhPerM2) / period.incidentKWhPerM2, 0) : "—"} % of the incident sun</p></div>
-            <div className="card"><p className="text-xs font-bold uppercase text-slate">Solar gain</p><p className="text-2xl font-black tabular-nums">{f(period.solarGainKWhPerM2, 0)}</p><p className="text-xs text-slate">kWh/m² (g-weighted)</p></div>
-            <div className="card"><p className="text-xs font-bold uppercase text-slate">Peak solar gain</p><p className="text-2xl font-black tabular-nums">{f(period.peak?.solarGainWm2, 0)}</p><p className="text-xs text-slate">W/m² · {period.peak ? period.peak.time.slice(0, 16).replace("T", " ") : "—"}</p></div>
+            <div className="card">
+              <p className="text-xs font-bold uppercase text-slate">Sun on the glass</p>
+              <p className="text-2xl font-black tabular-nums">{f(period.incidentKWhPerM2, 0)}</p>
+              <p className="text-xs text-slate">kWh/m² in {year}</p>
+            </div>
+            <div className="card">
+              <p className="text-xs font-bold uppercase text-slate">Transmitted</p>
+              <p className="text-2xl font-black tabular-nums" data-testid="transmitted-total">
+                {f(period.transmittedKWhPerM2, 0)}
+              </p>
+              <p className="text-xs text-slate">
+                kWh/m² · {period.incidentKWhPerM2 > 0 ? f((100 * period.transmittedKWhPerM2) / period.incidentKWhPerM2, 0) : "—"} % of the incident
+                sun
+              </p>
+            </div>
+            <div className="card">
+              <p className="text-xs font-bold uppercase text-slate">Solar gain</p>
+              <p className="text-2xl font-black tabular-nums">{f(period.solarGainKWhPerM2, 0)}</p>
+              <p className="text-xs text-slate">kWh/m² (g-weighted)</p>
+            </div>
+            <div className="card">
+              <p className="text-xs font-bold uppercase text-slate">Peak solar gain</p>
+              <p className="text-2xl font-black tabular-nums">{f(period.peak?.solarGainWm2, 0)}</p>
+              <p className="text-xs text-slate">W/m² · {period.peak ? period.peak.time.slice(0, 16).replace("T", " ") : "—"}</p>
+            </div>
           </div>
           <div className="card space-y-3">
             <div className="flex flex-wrap items-center gap-3">
-              <label htmlFor="measure" className="mb-0">Show</label>
+              <label htmlFor="measure" className="mb-0">
+                Show
+              </label>
               <select id="measure" className="mt-0 w-auto" value={measure} onChange={(e) => setMeasure(e.target.value as Measure)}>
                 {(Object.keys(MEASURES) as Measure[]).map((m) => (
-                  <option key={m} value={m}>{MEASURES[m].label}</option>
+                  <option key={m} value={m}>
+                    {MEASURES[m].label}
+                  </option>
                 ))}
               </select>
               <span className="text-xs text-slate">diffuse transmittance of this glazing: {f(result.surface.diffuseTransmittance, 3)}</span>
@@ -221,24 +283,57 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
             <div className="grid gap-5 xl:grid-cols-[1fr_1.2fr]">
               <div className="card space-y-3">
                 <div className="flex items-center gap-3">
-                  <label htmlFor="day" className="mb-0">Day</label>
-                  <input id="day" type="date" className="mt-0 w-auto" value={view.dates[day]} min={view.dates[0]} max={view.dates[view.dates.length - 1]} onChange={(e) => { const i = view.dates.indexOf(e.target.value); if (i >= 0) setDay(i); }} />
+                  <label htmlFor="day" className="mb-0">
+                    Day
+                  </label>
+                  <input
+                    id="day"
+                    type="date"
+                    className="mt-0 w-auto"
+                    value={view.dates[day]}
+                    min={view.dates[0]}
+                    max={view.dates[view.dates.length - 1]}
+                    onChange={(e) => {
+                      const i = view.dates.indexOf(e.target.value);
+                      if (i >= 0) setDay(i);
+                    }}
+                  />
                 </div>
                 <DailyProfile rows={dayRows} localHours={dayRows.map((r) => localHourOf(r.time))} title={`Daily profile, ${view.dates[day]}`} />
               </div>
               <div className="card overflow-x-auto">
                 <table className="w-full text-xs tabular-nums" data-testid="day-table">
                   <thead className="text-left text-slate">
-                    <tr><th>Time</th><th className="text-right">Sun alt.</th><th className="text-right">Sun az.</th><th className="text-right">Incidence</th><th className="text-right">τ beam</th><th className="text-right">Sunlit</th><th className="text-right">Beam</th><th className="text-right">Diffuse</th><th className="text-right">Transm.</th><th className="text-right">Gain</th></tr>
+                    <tr>
+                      <th>Time</th>
+                      <th className="text-right">Sun alt.</th>
+                      <th className="text-right">Sun az.</th>
+                      <th className="text-right">Incidence</th>
+                      <th className="text-right">τ beam</th>
+                      <th className="text-right">Sunlit</th>
+                      <th className="text-right">Beam</th>
+                      <th className="text-right">Diffuse</th>
+                      <th className="text-right">Transm.</th>
+                      <th className="text-right">Gain</th>
+                    </tr>
                   </thead>
                   <tbody>
-                    {dayRows.filter((r) => r.sunAltitudeDeg > -6).map((r) => (
-                      <tr key={r.time} className="border-t border-line">
-                        <td>{r.time.slice(11, 16)}</td><td className="text-right">{f(r.sunAltitudeDeg)}°</td><td className="text-right">{f(r.sunAzimuthDeg)}°</td><td className="text-right">{f(r.incidenceDeg)}°</td>
-                        <td className="text-right">{f(r.beamTransmittance, 3)}</td><td className="text-right">{f(r.sunlitFraction, 2)}</td><td className="text-right">{f(r.beamIncidentWm2, 0)}</td><td className="text-right">{f(r.diffuseIncidentWm2, 0)}</td>
-                        <td className="text-right">{f(r.transmittedWm2, 0)}</td><td className="text-right">{f(r.solarGainWm2, 0)}</td>
-                      </tr>
-                    ))}
+                    {dayRows
+                      .filter((r) => r.sunAltitudeDeg > -6)
+                      .map((r) => (
+                        <tr key={r.time} className="border-t border-line">
+                          <td>{r.time.slice(11, 16)}</td>
+                          <td className="text-right">{f(r.sunAltitudeDeg)}°</td>
+                          <td className="text-right">{f(r.sunAzimuthDeg)}°</td>
+                          <td className="text-right">{f(r.incidenceDeg)}°</td>
+                          <td className="text-right">{f(r.beamTransmittance, 3)}</td>
+                          <td className="text-right">{f(r.sunlitFraction, 2)}</td>
+                          <td className="text-right">{f(r.beamIncidentWm2, 0)}</td>
+                          <td className="text-right">{f(r.diffuseIncidentWm2, 0)}</td>
+                          <td className="text-right">{f(r.transmittedWm2, 0)}</td>
+                          <td className="text-right">{f(r.solarGainWm2, 0)}</td>
+                        </tr>
+                      ))}
                   </tbody>
                 </table>
                 <p className="mt-2 text-xs text-slate">W/m² on the glass; times are interval midpoints, local clock time.</p>
@@ -248,18 +343,38 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
           <div className="card overflow-x-auto">
             <h2 className="mb-2">Monthly totals</h2>
             <table className="w-full text-sm tabular-nums" data-testid="monthly-table">
-              <thead className="text-left text-slate"><tr><th>Month</th><th className="text-right">Incident kWh/m²</th><th className="text-right">Transmitted kWh/m²</th><th className="text-right">Solar gain kWh/m²</th><th className="text-right">Peak gain W/m²</th><th className="text-right">at</th></tr></thead>
+              <thead className="text-left text-slate">
+                <tr>
+                  <th>Month</th>
+                  <th className="text-right">Incident kWh/m²</th>
+                  <th className="text-right">Transmitted kWh/m²</th>
+                  <th className="text-right">Solar gain kWh/m²</th>
+                  <th className="text-right">Peak gain W/m²</th>
+                  <th className="text-right">at</th>
+                </tr>
+              </thead>
               <tbody>
                 {result.surface.totals.monthly.map((m) => (
                   <tr key={m.month} className="border-t border-line">
-                    <td>{MONTH_NAMES[Number(m.month.slice(5, 7)) - 1]} {m.month.slice(0, 4)}</td><td className="text-right">{f(m.incidentKWhPerM2)}</td><td className="text-right">{f(m.transmittedKWhPerM2)}</td><td className="text-right">{f(m.solarGainKWhPerM2)}</td><td className="text-right">{f(m.peak?.solarGainWm2, 0)}</td><td className="text-right">{m.peak?.time.slice(5, 16).replace("T", " ") ?? "—"}</td>
+                    <td>
+                      {MONTH_NAMES[Number(m.month.slice(5, 7)) - 1]} {m.month.slice(0, 4)}
+                    </td>
+                    <td className="text-right">{f(m.incidentKWhPerM2)}</td>
+                    <td className="text-right">{f(m.transmittedKWhPerM2)}</td>
+                    <td className="text-right">{f(m.solarGainKWhPerM2)}</td>
+                    <td className="text-right">{f(m.peak?.solarGainWm2, 0)}</td>
+                    <td className="text-right">{m.peak?.time.slice(5, 16).replace("T", " ") ?? "—"}</td>
                   </tr>
                 ))}
               </tbody>
             </table>
           </div>
           {result.warnings.length > 0 && (
-            <ul className="notice list-disc space-y-1 pl-8">{result.warnings.map((w) => <li key={w}>{w}</li>)}</ul>
+            <ul className="notice list-disc space-y-1 pl-8">
+              {result.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
           )}
         </>
       )}

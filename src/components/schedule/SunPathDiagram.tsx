@@ -58,11 +58,19 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
     .y((p) => p[1]);
   return (
     <figure className="space-y-2">
-      <svg viewBox={`${-R - 40} ${-R - 30} ${2 * R + 80} ${2 * R + 60}`} className="w-full max-w-md" role="img" aria-label="Sun-path diagram with façade orientations" data-testid="sun-path">
+      <svg
+        viewBox={`${-R - 40} ${-R - 30} ${2 * R + 80} ${2 * R + 60}`}
+        className="w-full max-w-md"
+        role="img"
+        aria-label="Sun-path diagram with façade orientations"
+        data-testid="sun-path"
+      >
         {[0, 30, 60].map((a) => (
           <g key={a}>
             <circle r={r(a)} fill={a === 0 ? "#fff" : "none"} stroke="#ddd8cc" />
-            <text x={4} y={-r(a) + 12} fontSize="10" fill="#4a5a66">{a}°</text>
+            <text x={4} y={-r(a) + 12} fontSize="10" fill="#4a5a66">
+              {a}°
+            </text>
           </g>
         ))}
         {[0, 45, 90, 135, 180, 225, 270, 315].map((az) => {
@@ -71,7 +79,9 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
           return (
             <g key={az}>
               <line x1={0} y1={0} x2={x} y2={y} stroke="#ddd8cc" strokeDasharray="2 3" />
-              <text x={lx} y={ly + 4} textAnchor="middle" fontSize="11" fontWeight={az % 90 === 0 ? 700 : 400} fill="#4a5a66">{compassPoint(az)}</text>
+              <text x={lx} y={ly + 4} textAnchor="middle" fontSize="11" fontWeight={az % 90 === 0 ? 700 : 400} fill="#4a5a66">
+                {compassPoint(az)}
+              </text>
             </g>
           );
         })}
@@ -95,7 +105,9 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
               <g key={h.h}>
                 <circle cx={h.x} cy={h.y} r={2.5} fill={p.color} />
                 {p.md === "06-21" && (
-                  <text x={h.x} y={h.y - 6} textAnchor="middle" fontSize="9" fill="#4a5a66">{h.h}</text>
+                  <text x={h.x} y={h.y - 6} textAnchor="middle" fontSize="9" fill="#4a5a66">
+                    {h.h}
+                  </text>
                 )}
               </g>
             ))}
@@ -104,13 +116,22 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
       </svg>
       <ul className="flex flex-wrap gap-x-4 gap-y-1 text-xs">
         {DAYS.map((d) => (
-          <li key={d.md} className="flex items-center gap-1.5"><span className="inline-block h-1 w-5" style={{ background: d.color }} />{d.label}</li>
+          <li key={d.md} className="flex items-center gap-1.5">
+            <span className="inline-block h-1 w-5" style={{ background: d.color }} />
+            {d.label}
+          </li>
         ))}
         {facades.map((f, k) => (
-          <li key={`${f.name}-${k}`} className="flex items-center gap-1.5"><span className="inline-block h-2 w-2 rounded-full" style={{ background: FACADE_COLORS[k % FACADE_COLORS.length] }} />{f.name}</li>
+          <li key={`${f.name}-${k}`} className="flex items-center gap-1.5">
+            <span className="inline-block h-2 w-2 rounded-full" style={{ background: FACADE_COLORS[k % FACADE_COLORS.length] }} />
+            {f.name}
+          </li>
         ))}
       </ul>
-      <figcaption className="text-xs text-slate">Altitude rings every 30°, azimuth clockwise from north; dots mark local clock hours (labelled on 21 June). Façade lines point along each outward normal.</figcaption>
+      <figcaption className="text-xs text-slate">
+        Altitude rings every 30°, azimuth clockwise from north; dots mark local clock hours (labelled on 21 June). Façade lines point along each
+        outward normal.
+      </figcaption>
     </figure>
   );
 }

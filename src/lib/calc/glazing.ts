@@ -100,7 +100,9 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
   });
   model.gaps.forEach((gap, k) => {
     if (gap.widthMm < TYPICAL_GAP_MM.min || gap.widthMm > TYPICAL_GAP_MM.max) {
-      warnings.push(`Gap ${k + 1} is ${gap.widthMm} mm wide; EN 673's gap correlation is meant for the usual ${TYPICAL_GAP_MM.min}–${TYPICAL_GAP_MM.max} mm cavities, so treat its U-value as indicative.`);
+      warnings.push(
+        `Gap ${k + 1} is ${gap.widthMm} mm wide; EN 673's gap correlation is meant for the usual ${TYPICAL_GAP_MM.min}–${TYPICAL_GAP_MM.max} mm cavities, so treat its U-value as indicative.`,
+      );
     }
   });
   if (!model.optics.hasVisible) {

@@ -15,15 +15,18 @@ const r1 = (x: number) => Math.round(x * 10) / 10;
 export const SCHEDULE_METHODS = {
   time: "each row stands for an interval of stepMinutes starting at local midnight; the sun is evaluated at the interval's midpoint, which is the row's time (local clock time with its UTC offset, daylight saving included)",
   sunPosition: "suncalc v2: apparent (refraction-corrected) altitude, azimuth clockwise from north",
-  clearSky: "Ineichen & Perez (2002) clear sky with monthly Linke turbidity; extraterrestrial irradiance by Spencer (1971); relative air mass by Kasten & Young (1989), scaled by the site's pressure",
+  clearSky:
+    "Ineichen & Perez (2002) clear sky with monthly Linke turbidity; extraterrestrial irradiance by Spencer (1971); relative air mass by Kasten & Young (1989), scaled by the site's pressure",
   sky: {
     perez: "Perez et al. (1990) anisotropic sky, all-sites composite coefficients",
     "hay-davies": "Hay & Davies (1980) anisotropic sky",
     isotropic: "Liu & Jordan (1960) isotropic sky",
   },
   ground: "isotropic ground reflection, GHI × albedo × (1 − cos tilt)/2",
-  glazing: "beam: the unit's transmittance τ(θ) and g(θ) at the angle of incidence (angular tables of the Fresnel stack); diffuse: hemispherical τ and g",
-  shading: "beam: exact sunlit fraction of the window under the overhang and fins; circumsolar sky like the beam; isotropic sky, horizon band and ground reduced by the devices' view factors",
+  glazing:
+    "beam: the unit's transmittance τ(θ) and g(θ) at the angle of incidence (angular tables of the Fresnel stack); diffuse: hemispherical τ and g",
+  shading:
+    "beam: exact sunlit fraction of the window under the overhang and fins; circumsolar sky like the beam; isotropic sky, horizon band and ground reduced by the devices' view factors",
 } as const;
 
 function rowsOf(c: ScheduleComputation, k: number, isoTimes: string[]): ScheduleRow[] {

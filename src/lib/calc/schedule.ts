@@ -153,7 +153,13 @@ export function prepareSite(
       const cz = sun.up[i]!;
       if (cz <= 0) continue;
       const am = relativeAirMassKastenYoung1989(Math.min(90, sun.zenithRad[i]! * DEG_PER_RAD));
-      const h = clearSkyIneichenPerez2002({ cosZenith: cz, airMassAbsolute: am * pressureRatio, linkeTurbidity: tl, elevationM: site.elevationM, extraterrestrialWPerM2: e0 });
+      const h = clearSkyIneichenPerez2002({
+        cosZenith: cz,
+        airMassAbsolute: am * pressureRatio,
+        linkeTurbidity: tl,
+        elevationM: site.elevationM,
+        extraterrestrialWPerM2: e0,
+      });
       ghi[i] = h.ghi;
       dni[i] = h.dni;
       dhi[i] = h.dhi;
@@ -182,7 +188,20 @@ export function prepareSite(
     skyCirc[i] = c.circumsolarPerCos;
     skyHor[i] = c.horizonWPerM2;
   }
-  return { timeline, sun, ghi, dni, dhi, skyIso, skyCirc, skyHor, albedo: sky.albedo, model: sky.model, source: weather ? "weather" : "clear-sky", warnings };
+  return {
+    timeline,
+    sun,
+    ghi,
+    dni,
+    dhi,
+    skyIso,
+    skyCirc,
+    skyHor,
+    albedo: sky.albedo,
+    model: sky.model,
+    source: weather ? "weather" : "clear-sky",
+    warnings,
+  };
 }
 
 /** Step 2: what the hourly loop needs of a glazing make-up. */
@@ -260,17 +279,22 @@ export function prepareSurface(s: SurfaceGeometryInput, albedo: number, shadingC
     if (cached) shading = cached;
     else
       shading = new PreparedShading({
-      windowWidthM: sh.window.widthM,
-      windowHeightM: sh.window.heightM,
-      surfaceTiltRad: orientation.tiltRad,
-      overhang: sh.overhang
-        ? { depthM: sh.overhang.depthM, gapAboveHeadM: sh.overhang.gapAboveM, extendLeftM: sh.overhang.extensionLeftM, extendRightM: sh.overhang.extensionRightM }
-        : undefined,
-      fins: sh.fins ? { depthM: sh.fins.depthM, gapFromJambM: sh.fins.gapM } : undefined,
-      horizonAngleRad: (sh.horizonDeg ?? 0) * RAD_PER_DEG,
-      // 8 × 8 Gauss points over the window: within 2e-6 of 16 × 16 on our test windows, a quarter of the work.
-      diffuseQuadraturePoints: DIFFUSE_QUADRATURE_POINTS,
-    });
+        windowWidthM: sh.window.widthM,
+        windowHeightM: sh.window.heightM,
+        surfaceTiltRad: orientation.tiltRad,
+        overhang: sh.overhang
+          ? {
+              depthM: sh.overhang.depthM,
+              gapAboveHeadM: sh.overhang.gapAboveM,
+              extendLeftM: sh.overhang.extensionLeftM,
+              extendRightM: sh.overhang.extensionRightM,
+            }
+          : undefined,
+        fins: sh.fins ? { depthM: sh.fins.depthM, gapFromJambM: sh.fins.gapM } : undefined,
+        horizonAngleRad: (sh.horizonDeg ?? 0) * RAD_PER_DEG,
+        // 8 × 8 Gauss points over the window: within 2e-6 of 16 × 16 on our test windows, a quarter of the work.
+        diffuseQuadraturePoints: DIFFUSE_QUADRATURE_POINTS,
+      });
     shadingCache?.set(key, shading);
   }
   const k = shading?.diffuse;
@@ -314,9 +338,15 @@ export function computeSurfaceSeries(site: SiteSeries, surface: PreparedSurface,
   const { east, north, up } = site.sun;
   const { dni, ghi, skyIso, skyCirc, skyHor } = site;
   const { normal: nv, along: uv, upSlope: vv } = surface.frame;
-  const nE = nv.east, nN = nv.north, nU = nv.up;
-  const uE = uv.east, uN = uv.north, uU = uv.up;
-  const vE = vv.east, vN = vv.north, vU = vv.up;
+  const nE = nv.east,
+    nN = nv.north,
+    nU = nv.up;
+  const uE = uv.east,
+    uN = uv.north,
+    uU = uv.up;
+  const vE = vv.east,
+    vN = vv.north,
+    vU = vv.up;
   const shading = surface.shading;
   const isoK = surface.skyView * surface.kSky;
   const horK = surface.sinTilt * surface.kBand;
@@ -325,7 +355,9 @@ export function computeSurfaceSeries(site: SiteSeries, surface: PreparedSurface,
   const { cosIncidence, beamTransmittance, sunlitFraction, beamIncidentWm2, diffuseIncidentWm2, transmittedWm2, solarGainWm2 } = out;
   const n = east.length;
   for (let i = 0; i < n; i++) {
-    const sE = east[i]!, sN = north[i]!, sU = up[i]!;
+    const sE = east[i]!,
+      sN = north[i]!,
+      sU = up[i]!;
     const c = nE * sE + nN * sN + nU * sU;
     cosIncidence[i] = c;
     let beam = 0;

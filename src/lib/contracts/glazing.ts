@@ -27,17 +27,31 @@ export const MeasuredValues = z
       ctx.addIssue({ code: "custom", path: ["solarReflectanceFront"], message: "solarTransmittance + solarReflectanceFront must not exceed 1" });
     if (sum(m.solarTransmittance, m.solarReflectanceBack))
       ctx.addIssue({ code: "custom", path: ["solarReflectanceBack"], message: "solarTransmittance + solarReflectanceBack must not exceed 1" });
-    if (m.solarTransmittance <= 0) ctx.addIssue({ code: "custom", path: ["solarTransmittance"], message: "solarTransmittance must be greater than 0" });
+    if (m.solarTransmittance <= 0)
+      ctx.addIssue({ code: "custom", path: ["solarTransmittance"], message: "solarTransmittance must be greater than 0" });
     const vis = [m.visibleTransmittance, m.visibleReflectanceFront, m.visibleReflectanceBack];
     const given = vis.filter((v) => v !== undefined).length;
     if (given !== 0 && given !== 3)
-      ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "give all three visible values (transmittance, front and back reflectance) or none" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["visibleTransmittance"],
+        message: "give all three visible values (transmittance, front and back reflectance) or none",
+      });
     if (given === 3) {
-      if (m.visibleTransmittance! <= 0) ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "visibleTransmittance must be greater than 0" });
+      if (m.visibleTransmittance! <= 0)
+        ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "visibleTransmittance must be greater than 0" });
       if (sum(m.visibleTransmittance!, m.visibleReflectanceFront!))
-        ctx.addIssue({ code: "custom", path: ["visibleReflectanceFront"], message: "visibleTransmittance + visibleReflectanceFront must not exceed 1" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["visibleReflectanceFront"],
+          message: "visibleTransmittance + visibleReflectanceFront must not exceed 1",
+        });
       if (sum(m.visibleTransmittance!, m.visibleReflectanceBack!))
-        ctx.addIssue({ code: "custom", path: ["visibleReflectanceBack"], message: "visibleTransmittance + visibleReflectanceBack must not exceed 1" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["visibleReflectanceBack"],
+          message: "visibleTransmittance + visibleReflectanceBack must not exceed 1",
+        });
     }
   });
 export type MeasuredValues = z.infer<typeof MeasuredValues>;
@@ -85,7 +99,9 @@ export const GasMix = z
   .strict()
   .refine((g) => Math.abs((g.air ?? 0) + (g.argon ?? 0) + (g.krypton ?? 0) - 1) <= 1e-3, "the gas fractions must add up to 1");
 
-export const Gas = z.union([z.enum(GAS_NAMES), GasMix], { error: `gas must be "air", "argon", "krypton" or fractions such as { "argon": 0.9, "air": 0.1 }` });
+export const Gas = z.union([z.enum(GAS_NAMES), GasMix], {
+  error: `gas must be "air", "argon", "krypton" or fractions such as { "argon": 0.9, "air": 0.1 }`,
+});
 export type Gas = z.infer<typeof Gas>;
 
 export const Gap = z.object({
@@ -99,7 +115,10 @@ const DEFAULT_ANGLES = Array.from({ length: 10 }, (_, i) => i * 10);
 
 export const GlazingRequest = z
   .object({
-    layers: z.array(z.unknown()).min(1, "layers must contain at least one pane").max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
+    layers: z
+      .array(z.unknown())
+      .min(1, "layers must contain at least one pane")
+      .max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
     anglesDeg: z
       .array(bounded("anglesDeg", 0, 90))
       .min(1, "anglesDeg must not be empty")

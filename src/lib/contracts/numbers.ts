@@ -4,8 +4,7 @@
  */
 import { z } from "zod";
 
-const finiteNumber = (label: string) =>
-  z.number({ error: `${label} must be a number` }).refine(Number.isFinite, `${label} must be a finite number`);
+const finiteNumber = (label: string) => z.number({ error: `${label} must be a number` }).refine(Number.isFinite, `${label} must be a finite number`);
 
 /** A finite number within [min, max]: "… must be between min and max". */
 export const finite = (label: string, min: number, max: number) =>

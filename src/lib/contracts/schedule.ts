@@ -62,7 +62,9 @@ export const Sky = z
 
 export const WeatherRow = z.object({
   /** ISO-8601 instant with offset or Z: the midpoint of the hour the values stand for. */
-  time: z.string().refine((t) => /[zZ]|[+-]\d{2}:?\d{2}$/.test(t) && !Number.isNaN(Date.parse(t)), "time must be an ISO-8601 instant with a UTC offset"),
+  time: z
+    .string()
+    .refine((t) => /[zZ]|[+-]\d{2}:?\d{2}$/.test(t) && !Number.isNaN(Date.parse(t)), "time must be an ISO-8601 instant with a UTC offset"),
   ghi: finite("ghi", 0, 1500),
   dni: finite("dni", 0, 1500),
   dhi: finite("dhi", 0, 1000),
@@ -92,7 +94,10 @@ export const ScheduleRequest = z
       .default(60),
     sky: Sky,
     /** Measured or typical-year weather in place of the clear sky. */
-    weather: z.array(WeatherRow).max(MAX_SPAN_DAYS * 24 + 48, "weather may hold at most one year of hours").optional(),
+    weather: z
+      .array(WeatherRow)
+      .max(MAX_SPAN_DAYS * 24 + 48, "weather may hold at most one year of hours")
+      .optional(),
   })
   .superRefine((r, ctx) => {
     if (r.from > r.to) ctx.addIssue({ code: "custom", path: ["to"], message: "to must not be before from" });

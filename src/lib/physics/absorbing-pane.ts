@@ -63,9 +63,7 @@ export function checkAbsorbingPane(spec: AbsorbingPaneSpec): AbsorbingPaneSpec {
     throw new RangeError(`pane thickness must be finite, in (0, ${MAX_PANE_THICKNESS_M}] m; got ${thicknessM}`);
   }
   if (!Number.isFinite(refractiveIndex) || refractiveIndex <= 1 || refractiveIndex > MAX_PANE_REFRACTIVE_INDEX) {
-    throw new RangeError(
-      `pane refractive index must be finite, in (1, ${MAX_PANE_REFRACTIVE_INDEX}]; got ${refractiveIndex}`,
-    );
+    throw new RangeError(`pane refractive index must be finite, in (1, ${MAX_PANE_REFRACTIVE_INDEX}]; got ${refractiveIndex}`);
   }
   if (!Number.isFinite(absorptionPerM) || absorptionPerM < 0) {
     throw new RangeError(`pane absorption coefficient must be finite and ≥ 0 1/m; got ${absorptionPerM}`);

@@ -43,9 +43,7 @@ const TWO_OVER_PI = 2 / Math.PI;
 
 function checkIntervals(n: number): void {
   if (!Number.isInteger(n) || n < TABLE_INTERVALS_RANGE.min || n > TABLE_INTERVALS_RANGE.max) {
-    throw new RangeError(
-      `table intervals must be an integer in [${TABLE_INTERVALS_RANGE.min}, ${TABLE_INTERVALS_RANGE.max}]; got ${n}`,
-    );
+    throw new RangeError(`table intervals must be an integer in [${TABLE_INTERVALS_RANGE.min}, ${TABLE_INTERVALS_RANGE.max}]; got ${n}`);
   }
 }
 
@@ -200,11 +198,7 @@ export function angularTablesFromFunction(
  * @param steps number of sweep intervals (steps + 1 angles), default 9000 (0.01°)
  * @returns max |table − X| over both lookups [unit of the quantity]
  */
-export function maxInterpolationError(
-  table: AngularTable,
-  quantity: (thetaRad: Radians) => number,
-  steps = 9000,
-): number {
+export function maxInterpolationError(table: AngularTable, quantity: (thetaRad: Radians) => number, steps = 9000): number {
   let worst = 0;
   for (let i = 0; i <= steps; i++) {
     const theta = ((i / steps) * Math.PI) / 2; // the last one is the float64 π/2 (cos = 6e-17 > 0)

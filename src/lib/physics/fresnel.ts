@@ -78,11 +78,7 @@ function toComplexIndex(n2: RefractiveIndex): Complex {
  * @returns k_x (real) and q_x (complex), in units of the vacuum wave number k0
  * @see Born & Wolf, Principles of Optics, 7th ed., §1.5.4 (branch choice; from memory)
  */
-export function normalWaveVectorComponents(
-  n1: number,
-  n2: RefractiveIndex,
-  thetaRad: Radians,
-): NormalWaveVectorComponents {
+export function normalWaveVectorComponents(n1: number, n2: RefractiveIndex, thetaRad: Radians): NormalWaveVectorComponents {
   checkIncidentIndex(n1);
   const N2 = toComplexIndex(n2);
   checkIncidenceAngleRad(thetaRad);
@@ -93,7 +89,9 @@ function componentsUnchecked(n1: number, N2: Complex, thetaRad: Radians): Normal
   const cosI = cosIncidence(thetaRad);
   const sinI = Math.sin(thetaRad);
   const kx = n1 * cosI;
-  let qx = N2.mul(N2).sub(n1 * n1 * sinI * sinI).sqrt();
+  let qx = N2.mul(N2)
+    .sub(n1 * n1 * sinI * sinI)
+    .sqrt();
   // Principal root has Re ≥ 0; enforce the decaying branch Im(q_x) ≥ 0 explicitly.
   // (For passive media Im(n2²) ≥ 0, so the principal root already qualifies; this guards signed zeros.)
   if (qx.im < 0) qx = new Complex(-qx.re, -qx.im);
@@ -161,8 +159,7 @@ export function fresnelInterface(n1: number, n2: RefractiveIndex, thetaRad: Radi
  * @returns R_s [-]
  * @see Hecht, Optics, 4th ed., §4.6 (from memory)
  */
-export const fresnelReflectanceS = (n1: number, n2: RefractiveIndex, thetaRad: Radians): number =>
-  fresnelInterface(n1, n2, thetaRad).Rs;
+export const fresnelReflectanceS = (n1: number, n2: RefractiveIndex, thetaRad: Radians): number => fresnelInterface(n1, n2, thetaRad).Rs;
 
 /**
  * Power reflectance for p-polarised light, R_p = |(n1² q_x − n2² k_x)/(n1² q_x + n2² k_x)|².
@@ -171,8 +168,7 @@ export const fresnelReflectanceS = (n1: number, n2: RefractiveIndex, thetaRad: R
  * @returns R_p [-]
  * @see Hecht, Optics, 4th ed., §4.6 (from memory)
  */
-export const fresnelReflectanceP = (n1: number, n2: RefractiveIndex, thetaRad: Radians): number =>
-  fresnelInterface(n1, n2, thetaRad).Rp;
+export const fresnelReflectanceP = (n1: number, n2: RefractiveIndex, thetaRad: Radians): number => fresnelInterface(n1, n2, thetaRad).Rp;
 
 /** Result of {@link fresnelReflectancesReal}. */
 export interface RealInterfaceReflectances {
@@ -207,9 +203,7 @@ export function fresnelReflectancesReal(n1: number, n2: number, thetaRad: Radian
   const sin2I = 1 - cosI * cosI; // absolute error ~1e-16, harmless here and saves a Math.sin
   const q2 = n2 * n2 - n1 * n1 * sin2I;
   if (q2 < 0) {
-    throw new RangeError(
-      `angle of incidence ${thetaRad} rad exceeds the critical angle for n1=${n1}, n2=${n2}; use fresnelInterface`,
-    );
+    throw new RangeError(`angle of incidence ${thetaRad} rad exceeds the critical angle for n1=${n1}, n2=${n2}; use fresnelInterface`);
   }
   const kx = n1 * cosI;
   const qx = Math.sqrt(q2);

@@ -10,29 +10,23 @@
  * Pure module: no I/O. SI units: W/(m²K), m²K/W; optical quantities are fractions 0–1.
  */
 
-import {
-  internalHeatTransferCoefficientEn673,
-  uValueEn673,
-  type GlazingThermalInput,
-  type UValueOptions,
-  type UValueResult,
-} from './u-value';
+import { internalHeatTransferCoefficientEn673, uValueEn673, type GlazingThermalInput, type UValueOptions, type UValueResult } from "./u-value";
 
 /** Edition of EN 410 that this module follows; included in results. */
-export const EN410_EDITION = 'EN 410:2011';
+export const EN410_EDITION = "EN 410:2011";
 
 /** Allowed excess of τ_e + Σ α_e,k over 1 (rounding of optical inputs) [-]. */
 const ENERGY_BALANCE_TOLERANCE = 1e-9;
 
 function requireFraction(name: string, value: unknown): number {
-  if (typeof value !== 'number' || !Number.isFinite(value) || value < 0 || value > 1) {
+  if (typeof value !== "number" || !Number.isFinite(value) || value < 0 || value > 1) {
     throw new RangeError(`${name} must be a finite number in [0, 1], got ${String(value)}`);
   }
   return value;
 }
 
 function requirePositive(name: string, value: unknown): number {
-  if (typeof value !== 'number' || !Number.isFinite(value) || value <= 0) {
+  if (typeof value !== "number" || !Number.isFinite(value) || value <= 0) {
     throw new RangeError(`${name} must be a finite number > 0, got ${String(value)}`);
   }
   return value;
@@ -72,10 +66,10 @@ export interface ThermalNetwork {
  * @returns N_k for every pane, outdoor first; 0 < N_1 < … < N_n < 1
  */
 export function secondaryHeatTransferFactors(network: ThermalNetwork): number[] {
-  const he = requirePositive('externalCoefficientWPerM2K', network.externalCoefficientWPerM2K);
-  const hi = requirePositive('internalCoefficientWPerM2K', network.internalCoefficientWPerM2K);
+  const he = requirePositive("externalCoefficientWPerM2K", network.externalCoefficientWPerM2K);
+  const hi = requirePositive("internalCoefficientWPerM2K", network.internalCoefficientWPerM2K);
   if (!Array.isArray(network.resistancesBetweenPanesM2KPerW)) {
-    throw new RangeError('resistancesBetweenPanesM2KPerW must be an array');
+    throw new RangeError("resistancesBetweenPanesM2KPerW must be an array");
   }
   const rs = network.resistancesBetweenPanesM2KPerW.map((r, k) => requirePositive(`resistancesBetweenPanesM2KPerW[${k}]`, r));
   const total = 1 / he + rs.reduce((s, r) => s + r, 0) + 1 / hi;
@@ -96,7 +90,7 @@ export function secondaryHeatTransferFactors(network: ThermalNetwork): number[] 
  */
 export function secondaryHeatTransfer(absorptances: readonly number[], factors: readonly number[]): number {
   if (!Array.isArray(absorptances) || !Array.isArray(factors)) {
-    throw new RangeError('absorptances and factors must be arrays');
+    throw new RangeError("absorptances and factors must be arrays");
   }
   if (absorptances.length !== factors.length) {
     throw new RangeError(`absorptances: ${absorptances.length} value(s) but factors: ${factors.length}; one per pane is required`);
@@ -120,7 +114,7 @@ export function secondaryHeatTransfer(absorptances: readonly number[], factors: 
  * @returns g [-]
  */
 export function gValue(solarTransmittance: number, absorptances: readonly number[], factors: readonly number[]): number {
-  const t = requireFraction('solarTransmittance', solarTransmittance);
+  const t = requireFraction("solarTransmittance", solarTransmittance);
   const q = secondaryHeatTransfer(absorptances, factors);
   const sum = absorptances.reduce((s, a) => s + a, t);
   if (sum > 1 + ENERGY_BALANCE_TOLERANCE) {
@@ -136,7 +130,7 @@ export function gValue(solarTransmittance: number, absorptances: readonly number
  *   half of each intermediate pane are included (see {@link secondaryHeatTransferFactorsEn410}).
  * - 'none': Λ_k = h_s,k only (glass conduction ignored), for comparison.
  */
-export type GlassConductionInNetwork = 'surfaces' | 'none';
+export type GlassConductionInNetwork = "surfaces" | "none";
 
 /** Options of {@link secondaryHeatTransferFactorsEn410}: EN 673 conditions plus the Λ convention. */
 export interface SecondaryHeatTransferOptions extends UValueOptions {
@@ -191,8 +185,8 @@ export function secondaryHeatTransferFactorsEn410(
   unit: GlazingThermalInput,
   options: SecondaryHeatTransferOptions = {},
 ): SecondaryHeatTransferResult {
-  const glassConduction = options.glassConduction ?? 'surfaces';
-  if (glassConduction !== 'surfaces' && glassConduction !== 'none') {
+  const glassConduction = options.glassConduction ?? "surfaces";
+  if (glassConduction !== "surfaces" && glassConduction !== "none") {
     throw new RangeError(`glassConduction must be 'surfaces' or 'none', got ${String(glassConduction)}`);
   }
   const thermal = uValueEn673(unit, options);
@@ -200,7 +194,7 @@ export function secondaryHeatTransferFactorsEn410(
   const n = r.length;
   const resistancesBetweenPanesM2KPerW = thermal.gaps.map((gap, k) => {
     const gapR = 1 / gap.conductanceWPerM2K;
-    if (glassConduction === 'none') return gapR;
+    if (glassConduction === "none") return gapR;
     const outer = r[k]! * (k === 0 ? 1 : 0.5);
     const inner = r[k + 1]! * (k + 1 === n - 1 ? 1 : 0.5);
     return outer + gapR + inner;

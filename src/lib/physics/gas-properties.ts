@@ -9,7 +9,7 @@
  */
 
 /** Names of the pure gases whose properties are tabulated here. */
-export const GAS_NAMES = ['air', 'argon', 'krypton'] as const;
+export const GAS_NAMES = ["air", "argon", "krypton"] as const;
 
 /** A pure gas tabulated in EN 673. */
 export type GasName = (typeof GAS_NAMES)[number];
@@ -66,7 +66,7 @@ export const GAS_PROPERTIES_EN673: Readonly<Record<GasName, GasProperties>> = Ob
 
 /** True when `name` is one of the tabulated gases. */
 export function isGasName(name: unknown): name is GasName {
-  return typeof name === 'string' && (GAS_NAMES as readonly string[]).includes(name);
+  return typeof name === "string" && (GAS_NAMES as readonly string[]).includes(name);
 }
 
 /**
@@ -79,26 +79,26 @@ export function isGasName(name: unknown): name is GasName {
  */
 export function gasVolumeFractions(fill: GasFill): Record<GasName, number> {
   const fractions: Record<GasName, number> = { air: 0, argon: 0, krypton: 0 };
-  if (typeof fill === 'string') {
+  if (typeof fill === "string") {
     if (!isGasName(fill)) {
-      throw new RangeError(`gas: unknown gas '${String(fill)}' (expected one of ${GAS_NAMES.join(', ')})`);
+      throw new RangeError(`gas: unknown gas '${String(fill)}' (expected one of ${GAS_NAMES.join(", ")})`);
     }
     fractions[fill] = 1;
     return fractions;
   }
-  if (fill === null || typeof fill !== 'object') {
-    throw new RangeError('gas: expected a gas name or a record of volume fractions');
+  if (fill === null || typeof fill !== "object") {
+    throw new RangeError("gas: expected a gas name or a record of volume fractions");
   }
   const entries = Object.entries(fill);
   if (entries.length === 0) {
-    throw new RangeError('gas fractions: the record is empty; volume fractions must sum to 1');
+    throw new RangeError("gas fractions: the record is empty; volume fractions must sum to 1");
   }
   let sum = 0;
   for (const [name, fraction] of entries) {
     if (!isGasName(name)) {
-      throw new RangeError(`gas fractions: unknown gas '${name}' (expected one of ${GAS_NAMES.join(', ')})`);
+      throw new RangeError(`gas fractions: unknown gas '${name}' (expected one of ${GAS_NAMES.join(", ")})`);
     }
-    if (typeof fraction !== 'number' || !Number.isFinite(fraction) || fraction < 0 || fraction > 1) {
+    if (typeof fraction !== "number" || !Number.isFinite(fraction) || fraction < 0 || fraction > 1) {
       throw new RangeError(`gas fractions: volume fraction of ${name} must be a finite number in [0, 1], got ${String(fraction)}`);
     }
     fractions[name] = fraction;

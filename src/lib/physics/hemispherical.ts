@@ -63,10 +63,7 @@ export function hemisphericalQuadrature(n: number = DEFAULT_HEMISPHERICAL_NODES)
  * @throws RangeError when the property returns a non-finite value
  * @see ISO 15099:2003 (from memory); Duffie & Beckman, 4th ed., ch. 5 (from memory)
  */
-export function hemisphericalAverage(
-  property: (thetaRad: Radians) => number,
-  nodes: number = DEFAULT_HEMISPHERICAL_NODES,
-): number {
+export function hemisphericalAverage(property: (thetaRad: Radians) => number, nodes: number = DEFAULT_HEMISPHERICAL_NODES): number {
   const { thetaRad, weight } = hemisphericalQuadrature(nodes);
   let acc = 0;
   for (let i = 0; i < thetaRad.length; i++) {

@@ -266,8 +266,7 @@ export function prepareGlazing(panes: readonly PaneSpec[], options: GlazingOptic
     warnings.push({
       code: "averaged-polarization",
       paneIndex: null,
-      message:
-        "polarisation averaged pane by pane: a simplification that underestimates transmittance at oblique incidence",
+      message: "polarisation averaged pane by pane: a simplification that underestimates transmittance at oblique incidence",
     });
   }
 

@@ -235,21 +235,12 @@ export function angleOfIncidenceRad(sunAltitudeRad: number, sunAzimuthRad: numbe
  * @throws RangeError naming the offending quantity
  * @see Duffie & Beckman, 4th ed., ch. 1 (from memory)
  */
-export function angleOfIncidenceDeg(
-  sunAltitudeDeg: number,
-  sunAzimuthDeg: number,
-  surfaceAzimuthDeg: number,
-  tiltDeg: number,
-): Degrees {
+export function angleOfIncidenceDeg(sunAltitudeDeg: number, sunAzimuthDeg: number, surfaceAzimuthDeg: number, tiltDeg: number): Degrees {
   if (!Number.isFinite(sunAltitudeDeg) || sunAltitudeDeg < -90 || sunAltitudeDeg > 90) {
     throw new RangeError(`sun altitude must be a finite angle in [−90, 90]°; got ${sunAltitudeDeg}`);
   }
   checkFinite(sunAzimuthDeg, "sun azimuth");
   const surface = surfaceOrientationDeg(surfaceAzimuthDeg, tiltDeg);
-  const theta = angleOfIncidenceRad(
-    toRadians(asDegrees(sunAltitudeDeg)),
-    toRadians(asDegrees(sunAzimuthDeg)),
-    surface,
-  );
+  const theta = angleOfIncidenceRad(toRadians(asDegrees(sunAltitudeDeg)), toRadians(asDegrees(sunAzimuthDeg)), surface);
   return toDegrees(theta);
 }

@@ -17,10 +17,10 @@
  * Pure module: no I/O. SI units: metres, kelvin, W/(m²K).
  */
 
-import { gasPropertiesEn673, type GasFill, type GasProperties } from './gas-properties';
+import { gasPropertiesEn673, type GasFill, type GasProperties } from "./gas-properties";
 
 /** Edition of EN 673 that this module implements; included in every result. */
-export const EN673_EDITION = 'EN 673:2011';
+export const EN673_EDITION = "EN 673:2011";
 
 /** Stefan–Boltzmann constant as used in EN 673 [W/(m²K⁴)] (value 5.67e-8, from memory). */
 export const STEFAN_BOLTZMANN_EN673_W_PER_M2K4 = 5.67e-8;
@@ -161,7 +161,7 @@ export interface UValueResult {
 }
 
 function requireFinite(name: string, value: unknown): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
+  if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new RangeError(`${name} must be a finite number, got ${String(value)}`);
   }
   return value;
@@ -200,7 +200,7 @@ function requireTilt(name: string, value: unknown): number {
  * @returns h_i [W/(m²K)]
  */
 export function internalHeatTransferCoefficientEn673(roomSideEmissivity: number): number {
-  const e = requireEmissivity('roomSideEmissivity', roomSideEmissivity);
+  const e = requireEmissivity("roomSideEmissivity", roomSideEmissivity);
   return 3.6 + (4.4 * e) / UNCOATED_GLASS_EMISSIVITY;
 }
 
@@ -212,9 +212,9 @@ export function internalHeatTransferCoefficientEn673(roomSideEmissivity: number)
  * @param meanTemperatureK T_m [K], > 0; default 283
  */
 export function radiativeConductanceEn673(emissivity1: number, emissivity2: number, meanTemperatureK = 283): number {
-  const e1 = requireEmissivity('emissivity1', emissivity1);
-  const e2 = requireEmissivity('emissivity2', emissivity2);
-  const t = requirePositive('meanTemperatureK', meanTemperatureK);
+  const e1 = requireEmissivity("emissivity1", emissivity1);
+  const e2 = requireEmissivity("emissivity2", emissivity2);
+  const t = requirePositive("meanTemperatureK", meanTemperatureK);
   return (4 * STEFAN_BOLTZMANN_EN673_W_PER_M2K4 * t ** 3) / (1 / e1 + 1 / e2 - 1);
 }
 
@@ -227,9 +227,9 @@ export function radiativeConductanceEn673(emissivity1: number, emissivity2: numb
  * @param gas properties (ρ [kg/m³], μ [Pa·s])
  */
 export function grashofNumberEn673(widthM: number, temperatureDifferenceK: number, meanTemperatureK: number, gas: GasProperties): number {
-  const s = requirePositive('widthM', widthM);
-  const dt = requireNonNegative('temperatureDifferenceK', temperatureDifferenceK);
-  const t = requirePositive('meanTemperatureK', meanTemperatureK);
+  const s = requirePositive("widthM", widthM);
+  const dt = requireNonNegative("temperatureDifferenceK", temperatureDifferenceK);
+  const t = requirePositive("meanTemperatureK", meanTemperatureK);
   return (GRAVITY_EN673_M_PER_S2 * s ** 3 * dt * gas.densityKgPerM3 ** 2) / (t * gas.dynamicViscosityPaS ** 2);
 }
 
@@ -261,7 +261,7 @@ const CONVECTION_TABLE: readonly ConvectionConstants[] = [
  * @param tiltDeg tilt of the glazing from horizontal [deg], in [0, 90]; 90 = vertical
  */
 export function convectionConstantsEn673(tiltDeg = 90): ConvectionConstants {
-  const tilt = requireTilt('tiltDeg', tiltDeg);
+  const tilt = requireTilt("tiltDeg", tiltDeg);
   let best = CONVECTION_TABLE[0]!;
   for (const row of CONVECTION_TABLE) {
     const d = Math.abs(row.tabulatedTiltDeg - tilt);
@@ -278,7 +278,7 @@ export function convectionConstantsEn673(tiltDeg = 90): ConvectionConstants {
  * @param tiltDeg tilt from horizontal [deg], in [0, 90]; selects A, n (see {@link convectionConstantsEn673})
  */
 export function nusseltNumberEn673(grashofPrandtl: number, tiltDeg = 90): number {
-  const x = requireNonNegative('grashofPrandtl', grashofPrandtl);
+  const x = requireNonNegative("grashofPrandtl", grashofPrandtl);
   const { a, n } = convectionConstantsEn673(tiltDeg);
   return Math.max(1, a * x ** n);
 }
@@ -293,11 +293,11 @@ export function nusseltNumberEn673(grashofPrandtl: number, tiltDeg = 90): number
  */
 export function convectionOnsetWidthEn673(
   gas: GasFill,
-  options: Pick<UValueOptions, 'temperatureDifferenceK' | 'meanTemperatureK' | 'tiltDeg'> = {},
+  options: Pick<UValueOptions, "temperatureDifferenceK" | "meanTemperatureK" | "tiltDeg"> = {},
 ): number {
   const props = gasPropertiesEn673(gas);
-  const dt = requirePositive('temperatureDifferenceK', options.temperatureDifferenceK ?? EN673_DECLARED_CONDITIONS.temperatureDifferenceK);
-  const t = requirePositive('meanTemperatureK', options.meanTemperatureK ?? EN673_DECLARED_CONDITIONS.meanTemperatureK);
+  const dt = requirePositive("temperatureDifferenceK", options.temperatureDifferenceK ?? EN673_DECLARED_CONDITIONS.temperatureDifferenceK);
+  const t = requirePositive("meanTemperatureK", options.meanTemperatureK ?? EN673_DECLARED_CONDITIONS.meanTemperatureK);
   const { a, n } = convectionConstantsEn673(options.tiltDeg ?? EN673_DECLARED_CONDITIONS.tiltDeg);
   const onsetGrashofPrandtl = a ** (-1 / n);
   const grashofPrandtlPerM3 = grashofNumberEn673(1, dt, t, props) * prandtlNumber(props);
@@ -372,18 +372,20 @@ const SPLIT_MAX_ITERATIONS = 200;
  */
 export function uValueEn673(unit: GlazingThermalInput, options: UValueOptions = {}): UValueResult {
   const d = EN673_DECLARED_CONDITIONS;
-  const he = requirePositive('externalCoefficientWPerM2K', options.externalCoefficientWPerM2K ?? d.externalCoefficientWPerM2K);
-  const dt = requireNonNegative('temperatureDifferenceK', options.temperatureDifferenceK ?? d.temperatureDifferenceK);
-  const tm = requirePositive('meanTemperatureK', options.meanTemperatureK ?? d.meanTemperatureK);
-  const glassLambda = requirePositive('glassConductivityWPerMK', options.glassConductivityWPerMK ?? d.glassConductivityWPerMK);
-  const tilt = requireTilt('tiltDeg', options.tiltDeg ?? d.tiltDeg);
+  const he = requirePositive("externalCoefficientWPerM2K", options.externalCoefficientWPerM2K ?? d.externalCoefficientWPerM2K);
+  const dt = requireNonNegative("temperatureDifferenceK", options.temperatureDifferenceK ?? d.temperatureDifferenceK);
+  const tm = requirePositive("meanTemperatureK", options.meanTemperatureK ?? d.meanTemperatureK);
+  const glassLambda = requirePositive("glassConductivityWPerMK", options.glassConductivityWPerMK ?? d.glassConductivityWPerMK);
+  const tilt = requireTilt("tiltDeg", options.tiltDeg ?? d.tiltDeg);
   const convection = convectionConstantsEn673(tilt);
 
   if (!unit || !Array.isArray(unit.panes) || unit.panes.length < 1) {
-    throw new RangeError('panes: at least one pane is required');
+    throw new RangeError("panes: at least one pane is required");
   }
   if (!Array.isArray(unit.gaps) || unit.gaps.length !== unit.panes.length - 1) {
-    throw new RangeError(`gaps: ${unit.panes.length} pane(s) need ${unit.panes.length - 1} gap(s), got ${Array.isArray(unit.gaps) ? unit.gaps.length : 'none'}`);
+    throw new RangeError(
+      `gaps: ${unit.panes.length} pane(s) need ${unit.panes.length - 1} gap(s), got ${Array.isArray(unit.gaps) ? unit.gaps.length : "none"}`,
+    );
   }
 
   let allGlassDeclared = true;
@@ -412,7 +414,7 @@ export function uValueEn673(unit: GlazingThermalInput, options: UValueOptions = 
   const hi =
     options.internalCoefficientWPerM2K === undefined
       ? internalHeatTransferCoefficientEn673(roomSideEmissivity)
-      : requirePositive('internalCoefficientWPerM2K', options.internalCoefficientWPerM2K);
+      : requirePositive("internalCoefficientWPerM2K", options.internalCoefficientWPerM2K);
 
   const evaluate = (split: readonly number[]): GapThermalResult[] =>
     gapInputs.map((g, k) => gapConductanceEn673(g.widthM, g.gas, g.e1, g.e2, split[k]!, tm, tilt));
@@ -440,10 +442,7 @@ export function uValueEn673(unit: GlazingThermalInput, options: UValueOptions = 
 
   const paneResistancesM2KPerW = panes.map((p) => p.resistance);
   const totalResistanceM2KPerW =
-    1 / he +
-    paneResistancesM2KPerW.reduce((s, r) => s + r, 0) +
-    gaps.reduce((s, g) => s + 1 / g.conductanceWPerM2K, 0) +
-    1 / hi;
+    1 / he + paneResistancesM2KPerW.reduce((s, r) => s + r, 0) + gaps.reduce((s, g) => s + 1 / g.conductanceWPerM2K, 0) + 1 / hi;
 
   const declaredConditions =
     he === d.externalCoefficientWPerM2K &&
@@ -457,7 +456,7 @@ export function uValueEn673(unit: GlazingThermalInput, options: UValueOptions = 
     uValueWPerM2K: 1 / totalResistanceM2KPerW,
     standard: EN673_EDITION,
     declaredConditions,
-    label: `${EN673_EDITION} centre-of-glass U, ${declaredConditions ? 'declared conditions' : 'non-declared conditions'}`,
+    label: `${EN673_EDITION} centre-of-glass U, ${declaredConditions ? "declared conditions" : "non-declared conditions"}`,
     externalCoefficientWPerM2K: he,
     internalCoefficientWPerM2K: hi,
     roomSideEmissivity,

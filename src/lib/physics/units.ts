@@ -47,8 +47,7 @@ export function checkIncidenceAngleRad(thetaRad: number, quantity = "angle of in
  * @param thetaRad angle from the surface normal [rad], already checked
  * @returns cos θ [-]
  */
-export const cosIncidence = (thetaRad: Radians): number =>
-  thetaRad === GRAZING_INCIDENCE_RAD ? 0 : Math.cos(thetaRad);
+export const cosIncidence = (thetaRad: Radians): number => (thetaRad === GRAZING_INCIDENCE_RAD ? 0 : Math.cos(thetaRad));
 
 // ---------------------------------------------------------------------------------------------
 // Construction-time checks (RangeError naming the quantity)

@@ -73,15 +73,13 @@ export const pane6mm58Case: ReferenceCase<AbsorbingPaneCaseInput> = {
 };
 
 const ratioCases = (name: string, paneLabel: string, pane: PaneMm, ratios: readonly number[]) =>
-  [30, 45, 60, 70, 80, 85].map(
-    (theta, i): ReferenceCase<AbsorbingPaneCaseInput> => ({
-      id: `absorbing-pane/${name}/${theta}deg/ratio`,
-      label: `${paneLabel} at ${theta}°: T(θ)/T(0)`,
-      input: { pane, thetaDeg: theta },
-      expected: [ev("TOverT0", ratios[i]!)],
-      source: computed,
-    }),
-  );
+  [30, 45, 60, 70, 80, 85].map((theta, i): ReferenceCase<AbsorbingPaneCaseInput> => ({
+    id: `absorbing-pane/${name}/${theta}deg/ratio`,
+    label: `${paneLabel} at ${theta}°: T(θ)/T(0)`,
+    input: { pane, thetaDeg: theta },
+    expected: [ev("TOverT0", ratios[i]!)],
+    source: computed,
+  }));
 
 /** Normalised angular curve T(θ)/T(0) of the 6 mm pane (also the reference curve for coated panes). */
 export const ratio6mmCases = ratioCases("6mm", "6 mm pane", PANE_6MM, [0.990297, 0.967005, 0.892051, 0.756402, 0.45755, 0.223722]);
@@ -94,9 +92,12 @@ export const lowIron0Case: ReferenceCase<AbsorbingPaneCaseInput> = {
   source: computed,
 };
 
-export const ratioLowIronCases = ratioCases("low-iron-4mm", "4 mm low-iron pane", LOW_IRON_4MM, [
-  0.996951, 0.981738, 0.916678, 0.786857, 0.493574, 0.263579,
-]);
+export const ratioLowIronCases = ratioCases(
+  "low-iron-4mm",
+  "4 mm low-iron pane",
+  LOW_IRON_4MM,
+  [0.996951, 0.981738, 0.916678, 0.786857, 0.493574, 0.263579],
+);
 
 export const losslessCase: ReferenceCase<AbsorbingPaneCaseInput> = {
   id: "absorbing-pane/lossless-6mm/0deg",

@@ -56,12 +56,7 @@ export const airGlassCases: readonly ReferenceCase<FresnelCaseInput>[] = airGlas
   id: `fresnel/air-glass-${n2}/${theta}deg`,
   label: `air → glass n = ${n2} at ${theta}°: R_s, R_p, R and the refraction angle`,
   input: { kind: "interface", n1: 1, n2, thetaDeg: theta },
-  expected: [
-    ev("Rs", Rs, P6),
-    ev("Rp", Rp, P6),
-    ev("R", R, P6),
-    ev("thetaTDeg", thetaT, theta === 0 ? half(0) : P4, "deg"),
-  ],
+  expected: [ev("Rs", Rs, P6), ev("Rp", Rp, P6), ev("R", R, P6), ev("thetaTDeg", thetaT, theta === 0 ? half(0) : P4, "deg")],
   source: computed,
 }));
 

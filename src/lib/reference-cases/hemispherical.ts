@@ -32,7 +32,6 @@ const computed: CaseSource = {
   fromMemory: true,
 };
 
-
 export const single6mmCase: ReferenceCase<HemisphericalCaseInput> = {
   id: "hemispherical/6mm",
   label: "6 mm pane (n = 1.52, α = 0.02 /mm): hemispherical T, R, A",

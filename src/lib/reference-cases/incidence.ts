@@ -85,11 +85,7 @@ const cases: readonly ReferenceCase<IncidenceInput>[] = [
     id: "incidence/south-facade/sun-behind",
     label: "vertical south façade, sun altitude 40° due north (behind): cos θ −0.766044, θ 140°, no beam",
     input: { sunAltitudeDeg: 40, sunAzimuthDeg: 0, ...southFacade },
-    expected: [
-      cos(-0.766044),
-      theta(140, { abs: 1e-10, reason: "exactly 90° + 50° from the formula; float64 rounding of acos" }),
-      beam(false),
-    ],
+    expected: [cos(-0.766044), theta(140, { abs: 1e-10, reason: "exactly 90° + 50° from the formula; float64 rounding of acos" }), beam(false)],
     source: incidenceFormula,
   },
   {

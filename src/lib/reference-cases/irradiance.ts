@@ -70,13 +70,7 @@ export interface PerezTableInput {
 }
 
 export type IrradianceInput =
-  | ExtraterrestrialInput
-  | AirMassInput
-  | PressureInput
-  | IneichenPerezInput
-  | AshraeTauInput
-  | TranspositionInput
-  | PerezTableInput;
+  ExtraterrestrialInput | AirMassInput | PressureInput | IneichenPerezInput | AshraeTauInput | TranspositionInput | PerezTableInput;
 
 const script = "scripts/reference/irradiance.ts";
 
@@ -106,8 +100,8 @@ const kastenYoung: CaseSource = {
 const alt2pres: CaseSource = {
   kind: "computed",
   formula:
-    "p = 100 · ((44331.514 − h)/11880.516)^(1/0.1902632) Pa, standard-atmosphere fit: \"A Quick Derivation relating altitude " +
-    "to air pressure\", Portland State Aerospace Society, v1.03, 2004 (formula from memory)",
+    'p = 100 · ((44331.514 − h)/11880.516)^(1/0.1902632) Pa, standard-atmosphere fit: "A Quick Derivation relating altitude ' +
+    'to air pressure", Portland State Aerospace Society, v1.03, 2004 (formula from memory)',
   script,
   fromMemory: true,
 };
@@ -122,7 +116,7 @@ const ineichenPerez: CaseSource = {
 const ashraeTau: CaseSource = {
   kind: "computed",
   formula:
-    "ASHRAE clear-sky \"tau\" model, Eb = E0 exp(−τb m^ab), Ed = E0 exp(−τd m^ad), ab and ad as bilinear fits in τb, τd, " +
+    'ASHRAE clear-sky "tau" model, Eb = E0 exp(−τb m^ab), Ed = E0 exp(−τd m^ad), ab and ad as bilinear fits in τb, τd, ' +
     "E0 = 1367[1 + 0.033 cos(360°(n − 3)/365)]: ASHRAE Handbook—Fundamentals, 2009 and later, ch. 14 (formula from memory)",
   script,
   fromMemory: true,
@@ -161,7 +155,7 @@ const hayDavies: CaseSource = {
 const perez1990: CaseSource = {
   kind: "computed",
   formula:
-    "Perez sky with the \"all sites composite\" coefficients: R. Perez, P. Ineichen, R. Seals, J. Michalsky & R. Stewart, " +
+    'Perez sky with the "all sites composite" coefficients: R. Perez, P. Ineichen, R. Seals, J. Michalsky & R. Stewart, ' +
     "Solar Energy 44(5):271–289, 1990; on the example's clear sky",
   script,
 };
@@ -235,7 +229,7 @@ const perezRow = (bin: number, values: number[]): ReferenceCase<IrradianceInput>
     kind: "published",
     citation:
       "R. Perez, P. Ineichen, R. Seals, J. Michalsky & R. Stewart, Solar Energy 44(5):271–289, 1990, table of the " +
-      "\"all sites composite\" coefficients (table number not checked)",
+      '"all sites composite" coefficients (table number not checked)',
   },
 });
 
@@ -272,12 +266,19 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
     id: "pressure/sea-level",
     label: "station pressure at sea level: 101325 Pa, the formula's stated base pressure",
     input: { kind: "pressure", elevationM: 0 },
-    expected: [{ quantity: "pressurePa", unit: "Pa", value: 101325, tolerance: { abs: 0.01, reason: "the fitted constants reproduce the base pressure to 0.002 Pa" } }],
+    expected: [
+      {
+        quantity: "pressurePa",
+        unit: "Pa",
+        value: 101325,
+        tolerance: { abs: 0.01, reason: "the fitted constants reproduce the base pressure to 0.002 Pa" },
+      },
+    ],
     source: {
       kind: "published",
       citation:
-        "standard sea-level pressure 101 325 Pa, the base pressure of the standard-atmosphere fit: \"A Quick Derivation " +
-        "relating altitude to air pressure\", Portland State Aerospace Society, v1.03, 2004 (from memory)",
+        'standard sea-level pressure 101 325 Pa, the base pressure of the standard-atmosphere fit: "A Quick Derivation ' +
+        'relating altitude to air pressure", Portland State Aerospace Society, v1.03, 2004 (from memory)',
       fromMemory: true,
     },
   },
@@ -297,8 +298,7 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
   })),
   {
     id: "clear-sky/ineichen-perez-2002/z-30-tl-3-1000m",
-    label:
-      "Ineichen–Perez, z = 30°, TL = 3, 1000 m, AM_abs = AM · exp(−1000/8434.5) = 1.024974: GHI 941.563, DNI 962.598, DHI 107.928 W/m²",
+    label: "Ineichen–Perez, z = 30°, TL = 3, 1000 m, AM_abs = AM · exp(−1000/8434.5) = 1.024974: GHI 941.563, DNI 962.598, DHI 107.928 W/m²",
     input: {
       kind: "ineichen-perez",
       zenithDeg: 30,
@@ -315,8 +315,18 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
       p("dhi", "W/m²", "107.928"),
       // The printed irradiances were computed from the unrounded AM_abs; the printed 1.024974 shifts GHI by
       // 6.5e-5 (∂GHI/∂AM ≈ −131 W/m² × 5e-7), hence half a unit plus 1e-4 when the printed AM_abs is the input.
-      { quantity: "ghiFromPrintedAirMass", unit: "W/m²", value: 941.563, tolerance: { abs: 5e-4 + 1e-4, reason: "half a unit in the 3rd decimal plus 1e-4 for the rounding of the printed AM_abs" } },
-      { quantity: "dniFromPrintedAirMass", unit: "W/m²", value: 962.598, tolerance: { abs: 5e-4 + 1e-4, reason: "half a unit in the 3rd decimal plus 1e-4 for the rounding of the printed AM_abs" } },
+      {
+        quantity: "ghiFromPrintedAirMass",
+        unit: "W/m²",
+        value: 941.563,
+        tolerance: { abs: 5e-4 + 1e-4, reason: "half a unit in the 3rd decimal plus 1e-4 for the rounding of the printed AM_abs" },
+      },
+      {
+        quantity: "dniFromPrintedAirMass",
+        unit: "W/m²",
+        value: 962.598,
+        tolerance: { abs: 5e-4 + 1e-4, reason: "half a unit in the 3rd decimal plus 1e-4 for the rounding of the printed AM_abs" },
+      },
     ],
     source: ineichenPerez,
   },
@@ -344,7 +354,12 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
       p("ghi", "W/m²", "755.302"),
       // The unrounded DNI is 864.28747; the printed GHI and DHI fix DNI = (GHI − DHI)/cos z ∈ [864.2873, 864.2875],
       // so the printed last digit is double-rounded (864.28747 → 864.2875 → 864.288): one unit allowed.
-      { quantity: "dni", unit: "W/m²", value: 864.288, tolerance: { abs: 1e-3, reason: "one unit in the 3rd printed decimal (the printed digit is double-rounded)" } },
+      {
+        quantity: "dni",
+        unit: "W/m²",
+        value: 864.288,
+        tolerance: { abs: 1e-3, reason: "one unit in the 3rd printed decimal (the printed digit is double-rounded)" },
+      },
       p("dhi", "W/m²", "93.2191"),
     ],
     source: exampleSky,
@@ -355,7 +370,12 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
     input: example,
     expected: [
       // θ = acos(sin 40° cos 20°) = 52.841446°, printed 52.8415 (double rounding, 52.84145 → 52.8415)
-      { quantity: "thetaDeg", unit: "deg", value: 52.8415, tolerance: { abs: 1e-4, reason: "one unit in the 4th printed decimal (the printed digit is double-rounded)" } },
+      {
+        quantity: "thetaDeg",
+        unit: "deg",
+        value: 52.8415,
+        tolerance: { abs: 1e-4, reason: "one unit in the 4th printed decimal (the printed digit is double-rounded)" },
+      },
       p("cosTheta", "-", "0.604023"),
     ],
     source: exampleIncidence,

@@ -11,8 +11,7 @@ import type { CaseSource, ReferenceCase, ReferenceDomain } from "./types";
 
 /** A layer: an uncoated pane (slab per polarisation), or a layer given by its own (T, Rf, Rb), the same for s and p. */
 export type StackLayer =
-  | { readonly kind: "pane"; readonly pane: PaneMm }
-  | { readonly kind: "given"; readonly T: number; readonly Rf: number; readonly Rb: number };
+  { readonly kind: "pane"; readonly pane: PaneMm } | { readonly kind: "given"; readonly T: number; readonly Rf: number; readonly Rb: number };
 
 /**
  * Layers from outdoors (1) inwards, the angle of incidence in degrees, and the route:

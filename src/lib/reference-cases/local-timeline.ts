@@ -16,7 +16,9 @@ export interface LocalTimelineInput {
   readonly to: string;
   readonly stepMinutes: number;
   /** The rule day of the change: the n-th Sunday of a month (−1 = last), or the first Sunday on or after a day. */
-  readonly ruleDay?: { readonly year: number; readonly month: number; readonly nthSunday: number } | { readonly year: number; readonly month: number; readonly sundayOnOrAfter: number };
+  readonly ruleDay?:
+    | { readonly year: number; readonly month: number; readonly nthSunday: number }
+    | { readonly year: number; readonly month: number; readonly sundayOnOrAfter: number };
 }
 
 export interface LocalTimelineCase extends ReferenceCase<LocalTimelineInput> {
@@ -33,7 +35,9 @@ const tzRules = (rules: string): CaseSource => ({
   citation: `IANA Time Zone Database (tzdata), ${rules} (rules quoted from memory)`,
   fromMemory: true,
 });
-const eu = tzRules("EU rules (Europe/Lisbon, Europe/Paris): summer time from the last Sunday of March to the last Sunday of October, both changes at 01:00 UTC");
+const eu = tzRules(
+  "EU rules (Europe/Lisbon, Europe/Paris): summer time from the last Sunday of March to the last Sunday of October, both changes at 01:00 UTC",
+);
 const us = tzRules("US rules (America/New_York): daylight time from the second Sunday of March to the first Sunday of November, at 02:00 local time");
 const au = tzRules(
   "Australian NSW and South Australia rules (Australia/Sydney, Australia/Adelaide): daylight time ends on the first Sunday of April at " +
@@ -48,7 +52,11 @@ const fixed = tzRules("fixed offsets Asia/Kolkata +05:30 and Asia/Kathmandu +05:
 
 const exact = { abs: 0, reason: "an integer count, or minutes and hours exact in float64" } as const;
 const rows = (n: number): ExpectedValue => ({ quantity: "rows", unit: "-", value: n, tolerance: exact });
-const at = (quantity: "offsetMinutes" | "localHour" | "dayRowCount" | "dayFirstRow" | "ruleDayOfMonth", index: number | null, value: number): ExpectedValue => ({
+const at = (
+  quantity: "offsetMinutes" | "localHour" | "dayRowCount" | "dayFirstRow" | "ruleDayOfMonth",
+  index: number | null,
+  value: number,
+): ExpectedValue => ({
   quantity: index === null ? quantity : `${quantity}[${index}]`,
   unit: quantity === "offsetMinutes" ? "min" : quantity === "localHour" ? "h" : "-",
   value,
@@ -81,7 +89,14 @@ const cases: readonly LocalTimelineCase[] = [
     id: "local-timeline/europe-lisbon/2026-10-25",
     label: "Europe/Lisbon 2026-10-25 (last Sunday of October): 25 rows, 01:00–02:00 local twice",
     input: { ...oneDay("Europe/Lisbon", "2026-10-25"), ruleDay: { year: 2026, month: 10, nthSunday: -1 } },
-    expected: [at("ruleDayOfMonth", null, 25), rows(25), at("localHour", 0, 0.5), at("localHour", 1, 1.5), at("localHour", 2, 1.5), at("localHour", 3, 2.5)],
+    expected: [
+      at("ruleDayOfMonth", null, 25),
+      rows(25),
+      at("localHour", 0, 0.5),
+      at("localHour", 1, 1.5),
+      at("localHour", 2, 1.5),
+      at("localHour", 3, 2.5),
+    ],
     expectedIso: {
       0: "2026-10-25T00:30:00+01:00",
       1: "2026-10-25T01:30:00+01:00",
@@ -167,7 +182,13 @@ const cases: readonly LocalTimelineCase[] = [
   {
     id: "local-timeline/america-santiago/2026-04-04",
     label: "America/Santiago 2026-04-04: 00:00 on the 5th (03:00 UTC) goes back to 23:00 on the 4th → 25 rows, 23:30 twice",
-    input: { timeZone: "America/Santiago", from: "2026-04-04", to: "2026-04-05", stepMinutes: 60, ruleDay: { year: 2026, month: 4, sundayOnOrAfter: 2 } },
+    input: {
+      timeZone: "America/Santiago",
+      from: "2026-04-04",
+      to: "2026-04-05",
+      stepMinutes: 60,
+      ruleDay: { year: 2026, month: 4, sundayOnOrAfter: 2 },
+    },
     expected: [at("ruleDayOfMonth", null, 5), at("dayRowCount", 0, 25), at("dayRowCount", 1, 24), at("localHour", 24, 23.5)],
     expectedIso: {
       22: "2026-04-04T22:30:00-03:00",
@@ -181,7 +202,13 @@ const cases: readonly LocalTimelineCase[] = [
   {
     id: "local-timeline/america-santiago/2026-09-06",
     label: "America/Santiago 2026-09-06: midnight does not exist (04:00 UTC, 00:00 → 01:00); the day starts at 01:00 with 23 rows",
-    input: { timeZone: "America/Santiago", from: "2026-09-05", to: "2026-09-06", stepMinutes: 60, ruleDay: { year: 2026, month: 9, sundayOnOrAfter: 2 } },
+    input: {
+      timeZone: "America/Santiago",
+      from: "2026-09-05",
+      to: "2026-09-06",
+      stepMinutes: 60,
+      ruleDay: { year: 2026, month: 9, sundayOnOrAfter: 2 },
+    },
     expected: [at("ruleDayOfMonth", null, 6), at("dayRowCount", 0, 24), at("dayRowCount", 1, 23), at("dayFirstRow", 1, 24), at("localHour", 24, 1.5)],
     expectedIso: { 23: "2026-09-05T23:30:00-04:00", 24: "2026-09-06T01:30:00-03:00" },
     expectedIntervalStartUtc: { 24: "2026-09-06T04:00:00Z" },

@@ -103,15 +103,13 @@ const krRows: readonly [number, number, readonly number[]][] = [
 ];
 
 export const karlssonRoosCases: readonly ReferenceCase<MeasuredPaneCaseInput>[] = krRows.flatMap(([p, q, values]) =>
-  KR_ANGLES.map(
-    (theta, i): ReferenceCase<MeasuredPaneCaseInput> => ({
-      id: `measured-pane/karlsson-roos/p${p}-q${q}/${theta}deg`,
-      label: `Karlsson–Roos T(θ)/T(0), p = ${p}, q = ${q}, at ${theta}° (implementation-only check)`,
-      input: { kind: "karlsson-roos", p, q, thetaDeg: theta },
-      expected: [ev("TOverT0", values[i]!, theta === 90 ? half(0) : P6)],
-      source: karlssonRoos,
-    }),
-  ),
+  KR_ANGLES.map((theta, i): ReferenceCase<MeasuredPaneCaseInput> => ({
+    id: `measured-pane/karlsson-roos/p${p}-q${q}/${theta}deg`,
+    label: `Karlsson–Roos T(θ)/T(0), p = ${p}, q = ${q}, at ${theta}° (implementation-only check)`,
+    input: { kind: "karlsson-roos", p, q, thetaDeg: theta },
+    expected: [ev("TOverT0", values[i]!, theta === 90 ? half(0) : P6)],
+    source: karlssonRoos,
+  })),
 );
 
 export const measuredPaneDomain: ReferenceDomain<MeasuredPaneCaseInput> = {

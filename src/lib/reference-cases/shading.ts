@@ -54,7 +54,12 @@ const cases: readonly ReferenceCase<ShadingInput>[] = [
     label: `${exampleLabel}: γ = 30°, tan Ω = 1.376119, Ω = 53.9948°, P tan Ω = 0.825671 m`,
     input: example,
     expected: [
-      { quantity: "horizontalShadowAngleDeg", unit: "deg", value: 30, tolerance: { abs: 1e-12, reason: "exactly 210° − 180°; float64 rounding of the degree–radian round trip" } },
+      {
+        quantity: "horizontalShadowAngleDeg",
+        unit: "deg",
+        value: 30,
+        tolerance: { abs: 1e-12, reason: "exactly 210° − 180°; float64 rounding of the degree–radian round trip" },
+      },
       p("tanProfileAngle", "-", "1.376119"),
       p("profileAngleDeg", "deg", "53.9948"),
       p("shadowDropM", "m", "0.825671"),
@@ -72,23 +77,14 @@ const cases: readonly ReferenceCase<ShadingInput>[] = [
     id: "shading/example/sunlit-fractions",
     label: `${exampleLabel}: f_sunlit = 0.475424 (both), 0.561941 (overhang alone), 0.846040 (fins alone)`,
     input: example,
-    expected: [
-      p("sunlitFraction", "-", "0.475424"),
-      p("sunlitFractionOverhangOnly", "-", "0.561941"),
-      p("sunlitFractionFinsOnly", "-", "0.846040"),
-    ],
+    expected: [p("sunlitFraction", "-", "0.475424"), p("sunlitFractionOverhangOnly", "-", "0.561941"), p("sunlitFractionFinsOnly", "-", "0.846040")],
     source: geometry,
   },
   ...tableRows.map(([alt, az, om, hs, ws, f]): ReferenceCase<ShadingInput> => ({
     id: `shading/example-window/alt${alt}-az${az}`,
     label: `worked-example window, sun altitude ${alt}°, azimuth ${az}°: Ω = ${om}°, h_s = ${hs} m, w_s = ${ws} m, f = ${f}`,
     input: { ...window, sunAltitudeDeg: alt, sunAzimuthDeg: az },
-    expected: [
-      p("profileAngleDeg", "deg", om),
-      p("overhangShadedHeightM", "m", hs),
-      p("finShadedWidthM", "m", ws),
-      p("sunlitFraction", "-", f),
-    ],
+    expected: [p("profileAngleDeg", "deg", om), p("overhangShadedHeightM", "m", hs), p("finShadedWidthM", "m", ws), p("sunlitFraction", "-", f)],
     source: geometry,
   })),
 ];

@@ -68,7 +68,7 @@ const astronomyEngine: CaseSource = {
   library: "astronomy-engine 2.1.19",
   note:
     "topocentric apparent equatorial coordinates of date, Equator(Body.Sun, date, observer, true, true), turned into horizontal " +
-    "coordinates with Horizon(date, observer, ra, dec, \"normal\") (Sæmundsson refraction, standard atmosphere); maxima over the " +
+    'coordinates with Horizon(date, observer, ra, dec, "normal") (Sæmundsson refraction, standard atmosphere); maxima over the ' +
     "compared hours must stay within the tolerance of zero",
 };
 

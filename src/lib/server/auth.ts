@@ -23,7 +23,9 @@ export const auth = betterAuth({
   appName: "Paneray",
   baseURL: env.BETTER_AUTH_URL,
   secret: env.BETTER_AUTH_SECRET,
-  trustedOrigins: env.TRUSTED_ORIGINS.split(",").map((s) => s.trim()).filter(Boolean),
+  trustedOrigins: env.TRUSTED_ORIGINS.split(",")
+    .map((s) => s.trim())
+    .filter(Boolean),
   database: drizzleAdapter(db, { provider: "pg", schema }),
   telemetry: { enabled: false },
   rateLimit: { enabled: env.AUTH_RATE_LIMIT !== "off" },

@@ -62,7 +62,12 @@ export function statusOfDomainError(err: DomainError): 400 | 403 | 404 | 409 | 5
 }
 
 export const fieldPath = (path: readonly PropertyKey[]) =>
-  path.length === 0 ? "(body)" : path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");
+  path.length === 0
+    ? "(body)"
+    : path
+        .map((p) => (typeof p === "number" ? `[${p}]` : String(p)))
+        .join(".")
+        .replace(/\.\[/g, "[");
 
 export function zodFieldErrors(error: z.ZodError): FieldError[] {
   return error.issues.map((i) => ({ field: fieldPath(i.path), message: i.message }));
@@ -264,7 +269,9 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
         const permission = auth.permission ? permissionFor(auth.permission) : undefined;
         loaded = await (await access()).requireProject(user!.id, stringAt(source, auth.project), permission, phrase(auth));
       } else if ("org" in auth && (auth.from ?? "params") === from) {
-        loaded = { membership: await (await access()).requireOrgPermission(user!.id, stringAt(source, auth.org), permissionFor(auth.permission), phrase(auth)) };
+        loaded = {
+          membership: await (await access()).requireOrgPermission(user!.id, stringAt(source, auth.org), permissionFor(auth.permission), phrase(auth)),
+        };
       }
     };
 

@@ -46,8 +46,7 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
   await t.sendMail({ from: serverEnv().MAIL_FROM, ...mail });
 }
 
-const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
+const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
 
 /** A plain message with one call-to-action link, as text and minimal HTML. */
 export function actionMail(opts: { to: string; subject: string; lines: string[]; actionLabel: string; url: string }): OutgoingMail {

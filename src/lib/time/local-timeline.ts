@@ -211,8 +211,7 @@ function makeOffsetReader(timeZone: unknown): (utcMs: number) => number {
       }
     }
     const hour = f[3]! === 24 ? 0 : f[3]!; // guard: some engines once printed midnight as 24 with hour12:false
-    const wallMs =
-      daysFromCivil(f[0]!, f[1]!, f[2]!) * MS_PER_DAY + hour * MS_PER_HOUR + f[4]! * MS_PER_MINUTE + f[5]! * MS_PER_SECOND;
+    const wallMs = daysFromCivil(f[0]!, f[1]!, f[2]!) * MS_PER_DAY + hour * MS_PER_HOUR + f[4]! * MS_PER_MINUTE + f[5]! * MS_PER_SECOND;
     return wallMs - t;
   };
 }

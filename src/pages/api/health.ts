@@ -9,10 +9,7 @@ import { json } from "@/lib/server/http";
 export const GET: APIRoute = async () => {
   const started = performance.now();
   try {
-    await Promise.race([
-      pool.query("select 1"),
-      new Promise((_, reject) => setTimeout(() => reject(new Error("timed out after 2 s")), 2000)),
-    ]);
+    await Promise.race([pool.query("select 1"), new Promise((_, reject) => setTimeout(() => reject(new Error("timed out after 2 s")), 2000))]);
     return json({ status: "ok", database: "up", databaseLatencyMs: Math.round((performance.now() - started) * 10) / 10 });
   } catch (err) {
     return json({ status: "unavailable", database: "down", detail: (err as Error).message }, 503);

@@ -76,6 +76,4 @@ export function clearSkyIneichenPerez2002(input: IneichenPerezInput): Horizontal
  * climatology of J. Remund, L. Wald, M. Lefèvre, T. Ranchin & J. Page, "Worldwide Linke
  * turbidity information", Proc. ISES Solar World Congress, Göteborg, 2003 (from memory).
  */
-export const DEFAULT_MONTHLY_LINKE_TURBIDITY: readonly number[] = Object.freeze([
-  3.0, 3.2, 3.5, 3.8, 4.0, 4.2, 4.2, 4.1, 3.8, 3.4, 3.1, 3.0,
-]);
+export const DEFAULT_MONTHLY_LINKE_TURBIDITY: readonly number[] = Object.freeze([3.0, 3.2, 3.5, 3.8, 4.0, 4.2, 4.2, 4.1, 3.8, 3.4, 3.1, 3.0]);

@@ -25,9 +25,7 @@ export function checkDayOfYear(dayOfYear: number): void {
 export function extraterrestrialFactorSpencer1971(dayOfYear: number): number {
   checkDayOfYear(dayOfYear);
   const b = (2 * Math.PI * (dayOfYear - 1)) / 365;
-  return (
-    1.00011 + 0.034221 * Math.cos(b) + 0.00128 * Math.sin(b) + 0.000719 * Math.cos(2 * b) + 0.000077 * Math.sin(2 * b)
-  );
+  return 1.00011 + 0.034221 * Math.cos(b) + 0.00128 * Math.sin(b) + 0.000719 * Math.cos(2 * b) + 0.000077 * Math.sin(2 * b);
 }
 
 /**
@@ -37,10 +35,7 @@ export function extraterrestrialFactorSpencer1971(dayOfYear: number): number {
  *   Kopp & Lean, GRL 38 L01706, 2011, from memory; 1367 in older work)
  * @throws RangeError naming "day of year" or "solar constant"
  */
-export function extraterrestrialIrradianceSpencer1971(
-  dayOfYear: number,
-  solarConstantWPerM2: number = SOLAR_CONSTANT_W_PER_M2,
-): number {
+export function extraterrestrialIrradianceSpencer1971(dayOfYear: number, solarConstantWPerM2: number = SOLAR_CONSTANT_W_PER_M2): number {
   checkRange(solarConstantWPerM2, "solar constant", 1000, 2000, " W/m²");
   return solarConstantWPerM2 * extraterrestrialFactorSpencer1971(dayOfYear);
 }

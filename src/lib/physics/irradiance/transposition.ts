@@ -68,7 +68,6 @@ export function skyDiffuseCoefficients(
   throw new RangeError(`sky diffuse model must be isotropic, hay-davies or perez; got ${String(model)}`);
 }
 
-
 /** Inputs of {@link tiltedSurfaceIrradiance}. */
 export interface TiltedSurfaceInput extends SkyModelHourInput {
   readonly ghiWPerM2: number;

@@ -86,11 +86,7 @@ export function karlssonRoosUnchecked(thetaRad: number, p: number, q: number): n
  * @param referenceNormal R_ref(0) [-], < 1
  * @returns R_c(θ) [-]
  */
-export function referenceCurveReflectance(
-  coatedNormal: number,
-  referenceAtAngle: number,
-  referenceNormal: number,
-): number {
+export function referenceCurveReflectance(coatedNormal: number, referenceAtAngle: number, referenceNormal: number): number {
   checkFraction(coatedNormal, "coated reflectance");
   checkFraction(referenceAtAngle, "reference reflectance");
   if (!(referenceNormal >= 0 && referenceNormal < 1)) {

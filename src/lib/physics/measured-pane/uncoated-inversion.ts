@@ -66,28 +66,16 @@ export function invertUncoatedPane(T: number, R: number, thicknessM: number, ban
   const b = 1 + 2 * R - R * R + T * T;
   const disc = b * b - 4 * R * (2 - R);
   if (disc < 0) {
-    throw new MeasuredPaneError(
-      `${band}.T, ${band}.R`,
-      "negative-discriminant",
-      `no uncoated slab has these values (discriminant ${disc} < 0)`,
-    );
+    throw new MeasuredPaneError(`${band}.T, ${band}.R`, "negative-discriminant", `no uncoated slab has these values (discriminant ${disc} < 0)`);
   }
   const r = (2 * R) / (b + Math.sqrt(disc));
   if (!(r > 0 && r < R)) {
-    throw new MeasuredPaneError(
-      `${band}.R`,
-      "face-reflectance",
-      `single-face reflectance ${r} must lie in (0, R = ${R})`,
-    );
+    throw new MeasuredPaneError(`${band}.R`, "face-reflectance", `single-face reflectance ${r} must lie in (0, R = ${R})`);
   }
   let tau = (R - r) / (r * T);
   if (tau > 1 && tau <= 1 + 1e-9) tau = 1; // rounding when T + R = 1 (no absorption)
   if (!(tau > 0 && tau <= 1)) {
-    throw new MeasuredPaneError(
-      `${band}.T, ${band}.R`,
-      "internal-transmittance",
-      `internal transmittance ${tau} must lie in (0, 1]`,
-    );
+    throw new MeasuredPaneError(`${band}.T, ${band}.R`, "internal-transmittance", `internal transmittance ${tau} must lie in (0, 1]`);
   }
   const sr = Math.sqrt(r);
   const n = (1 + sr) / (1 - sr);

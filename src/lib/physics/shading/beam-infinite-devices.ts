@@ -37,7 +37,9 @@ export function horizontalShadowAngleRad(sunAzimuthRad: number, facadeAzimuthRad
 export function profileAngleRad(sunAltitudeRad: number, shadowAngleRad: number): Radians {
   const c = Math.cos(shadowAngleRad);
   if (!(c > 0) || !(sunAltitudeRad > 0) || !(sunAltitudeRad < HALF_PI)) {
-    throw new RangeError(`profile angle needs the sun in front of the façade: altitude in (0, π/2) and |γ| < π/2; got α=${sunAltitudeRad}, γ=${shadowAngleRad}`);
+    throw new RangeError(
+      `profile angle needs the sun in front of the façade: altitude in (0, π/2) and |γ| < π/2; got α=${sunAltitudeRad}, γ=${shadowAngleRad}`,
+    );
   }
   return Math.atan(Math.tan(sunAltitudeRad) / c) as Radians;
 }

@@ -295,13 +295,31 @@ export function pointHorizonBand(geo: ShadingGeometry, up: number, vp: number, c
     }
   };
   const setCorners = (
-    u0: number, v0: number, n0: number, u1: number, v1: number, n1: number,
-    u2: number, v2: number, n2: number, u3: number, v3: number, n3: number,
+    u0: number,
+    v0: number,
+    n0: number,
+    u1: number,
+    v1: number,
+    n1: number,
+    u2: number,
+    v2: number,
+    n2: number,
+    u3: number,
+    v3: number,
+    n3: number,
   ): void => {
-    corners[0] = u0; corners[1] = v0; corners[2] = n0;
-    corners[3] = u1; corners[4] = v1; corners[5] = n1;
-    corners[6] = u2; corners[7] = v2; corners[8] = n2;
-    corners[9] = u3; corners[10] = v3; corners[11] = n3;
+    corners[0] = u0;
+    corners[1] = v0;
+    corners[2] = n0;
+    corners[3] = u1;
+    corners[4] = v1;
+    corners[5] = n1;
+    corners[6] = u2;
+    corners[7] = v2;
+    corners[8] = n2;
+    corners[9] = u3;
+    corners[10] = v3;
+    corners[11] = n3;
   };
   const far = (x: number): number => (x === Number.POSITIVE_INFINITY ? FAR_M : x === Number.NEGATIVE_INFINITY ? -FAR_M : x);
   if (geo.p > 0) {

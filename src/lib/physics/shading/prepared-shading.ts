@@ -4,14 +4,7 @@
  * beam-finite-devices.ts) and the diffuse reduction factors once per surface
  * (diffuse-view-factors.ts). Geometry and frame: device-specs.ts.
  */
-import {
-  sunAlongNormal,
-  sunAlongWidth,
-  sunUpSlope,
-  sunVectorEnu,
-  surfaceFrame,
-  type SurfaceOrientation,
-} from "../surface-geometry";
+import { sunAlongNormal, sunAlongWidth, sunUpSlope, sunVectorEnu, surfaceFrame, type SurfaceOrientation } from "../surface-geometry";
 import { finiteSunlitFraction, FIN_IN, P_COUNT, P_E, P_EL, P_ER, P_H, P_INV_AREA, P_V0, P_VB, P_VT, P_W } from "./beam-finite-devices";
 import {
   checkExtension,
@@ -93,10 +86,7 @@ export class PreparedShading {
     this.invArea = 1 / (w * h);
     this.noDevices = p === 0 && f === 0;
     this.allInfinite =
-      el === Number.POSITIVE_INFINITY &&
-      er === Number.POSITIVE_INFINITY &&
-      below === Number.POSITIVE_INFINITY &&
-      above === Number.POSITIVE_INFINITY;
+      el === Number.POSITIVE_INFINITY && er === Number.POSITIVE_INFINITY && below === Number.POSITIVE_INFINITY && above === Number.POSITIVE_INFINITY;
     const params = new Float64Array(P_COUNT);
     params[P_W] = w;
     params[P_H] = h;
@@ -206,12 +196,7 @@ export function prepareShading(spec: ShadingSpec): PreparedShading {
  * @param sunAltitudeRad α [rad]; @param sunAzimuthRad γ, clockwise from north [rad]
  * @throws RangeError naming the quantity for bad angles or a tilt that differs from the spec
  */
-export function sunlitFractionAt(
-  shading: PreparedShading,
-  surface: SurfaceOrientation,
-  sunAltitudeRad: number,
-  sunAzimuthRad: number,
-): number {
+export function sunlitFractionAt(shading: PreparedShading, surface: SurfaceOrientation, sunAltitudeRad: number, sunAzimuthRad: number): number {
   if (Math.abs(surface.tiltRad - shading.spec.surfaceTiltRad) > 1e-12) {
     throw new RangeError(`surface tilt ${surface.tiltRad} rad differs from the shading spec's ${shading.spec.surfaceTiltRad} rad`);
   }

@@ -6,7 +6,10 @@ import { relations, sql } from "drizzle-orm";
 import { doublePrecision, index, integer, pgTable, primaryKey, text, timestamp, check } from "drizzle-orm/pg-core";
 import { member, organization, user } from "./auth-schema";
 
-const id = () => text("id").primaryKey().$defaultFn(() => crypto.randomUUID());
+const id = () =>
+  text("id")
+    .primaryKey()
+    .$defaultFn(() => crypto.randomUUID());
 const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
 const updatedAt = () =>
   timestamp("updated_at", { withTimezone: true })

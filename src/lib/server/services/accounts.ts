@@ -47,7 +47,8 @@ export async function signUp(input: SignUpRequest): Promise<{ headers: Headers; 
     }
   }
   const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, input.email));
-  if (existing.length) throw new ConflictError("An account with this e-mail already exists; sign in instead", [fieldError("email", "already registered")]);
+  if (existing.length)
+    throw new ConflictError("An account with this e-mail already exists; sign in instead", [fieldError("email", "already registered")]);
 
   const { headers, response } = await auth.api.signUpEmail({
     body: { name: input.name, email: input.email, password: input.password },

@@ -72,18 +72,17 @@ async function ownerCount(organizationId: string, exceptMemberId?: string): Prom
   const rows = await db
     .select({ id: member.id })
     .from(member)
-    .where(
-      and(
-        eq(member.organizationId, organizationId),
-        eq(member.role, "owner"),
-        exceptMemberId ? ne(member.id, exceptMemberId) : undefined,
-      ),
-    );
+    .where(and(eq(member.organizationId, organizationId), eq(member.role, "owner"), exceptMemberId ? ne(member.id, exceptMemberId) : undefined));
   return rows.length;
 }
 
 async function memberOf(organizationId: string, memberId: string) {
-  const m = (await db.select().from(member).where(and(eq(member.id, memberId), eq(member.organizationId, organizationId))))[0];
+  const m = (
+    await db
+      .select()
+      .from(member)
+      .where(and(eq(member.id, memberId), eq(member.organizationId, organizationId)))
+  )[0];
   if (!m) throw new NotFoundError("No such member in this organisation");
   return m;
 }
@@ -137,8 +136,7 @@ export async function invitationSummary(invitationId: string): Promise<Invitatio
   )[0];
   if (!row) return null;
   const role = isRoleName(row.role) ? row.role : "client";
-  const status =
-    row.status === "pending" && row.expiresAt < new Date() ? "expired" : (row.status as InvitationSummary["status"]);
+  const status = row.status === "pending" && row.expiresAt < new Date() ? "expired" : (row.status as InvitationSummary["status"]);
   return { ...row, role, status };
 }
 
@@ -154,9 +152,13 @@ export async function acceptInvitation(userId: string, userEmail: string, invita
     throw new ForbiddenError(`This invitation is addressed to ${inv.email}; sign in with that address to accept it`);
   }
   await db.transaction(async (tx) => {
-    const existing = await tx.select({ id: member.id }).from(member).where(and(eq(member.userId, userId), eq(member.organizationId, inv.organizationId)));
+    const existing = await tx
+      .select({ id: member.id })
+      .from(member)
+      .where(and(eq(member.userId, userId), eq(member.organizationId, inv.organizationId)));
     if (existing.length) await tx.update(member).set({ role: inv.role }).where(eq(member.id, existing[0]!.id));
-    else await tx.insert(member).values({ id: crypto.randomUUID(), userId, organizationId: inv.organizationId, role: inv.role, createdAt: new Date() });
+    else
+      await tx.insert(member).values({ id: crypto.randomUUID(), userId, organizationId: inv.organizationId, role: inv.role, createdAt: new Date() });
     await tx.update(invitation).set({ status: "accepted" }).where(eq(invitation.id, invitationId));
   });
   return { ...inv, status: "accepted" };

@@ -47,7 +47,10 @@ export async function facadesOf(projectId: string): Promise<FacadeRow[]> {
 export async function createProject(input: ProjectCreateRequest, userId: string): Promise<ProjectRow> {
   const { facades, organizationId, ...fields } = input;
   return db.transaction(async (tx) => {
-    const [row] = await tx.insert(project).values({ ...fields, organizationId, createdById: userId }).returning();
+    const [row] = await tx
+      .insert(project)
+      .values({ ...fields, organizationId, createdById: userId })
+      .returning();
     if (facades.length) {
       await tx.insert(facade).values(facades.map(({ id: _id, ...f }, i) => ({ ...f, projectId: row!.id, position: i })));
     }
@@ -69,14 +72,19 @@ export async function updateProject(projectId: string, input: ProjectUpdateReque
       const existing = await tx.select({ id: facade.id }).from(facade).where(eq(facade.projectId, projectId));
       const existingIds = new Set(existing.map((f) => f.id));
       for (const f of facades) {
-        if (f.id && !existingIds.has(f.id)) throw new InvalidError("facades", "unknown façade id", `Façade id "${f.id}" does not belong to this project`);
+        if (f.id && !existingIds.has(f.id))
+          throw new InvalidError("facades", "unknown façade id", `Façade id "${f.id}" does not belong to this project`);
       }
       const keep = facades.flatMap((f) => (f.id ? [f.id] : []));
       await tx
         .delete(facade)
         .where(keep.length ? and(eq(facade.projectId, projectId), notInArray(facade.id, keep)) : eq(facade.projectId, projectId));
       for (const [i, { id, ...f }] of facades.entries()) {
-        if (id) await tx.update(facade).set({ ...f, position: i }).where(eq(facade.id, id));
+        if (id)
+          await tx
+            .update(facade)
+            .set({ ...f, position: i })
+            .where(eq(facade.id, id));
         else await tx.insert(facade).values({ ...f, projectId, position: i });
       }
     }
@@ -101,13 +109,16 @@ export async function sharesOf(p: ProjectRow): Promise<ShareRow[]> {
   const shared = new Set(
     (await db.select({ memberId: projectShare.memberId }).from(projectShare).where(eq(projectShare.projectId, p.id))).map((s) => s.memberId),
   );
-  return members
-    .filter((m) => !roleCan(m.role, { project: ["readAll"] }))
-    .map((m) => ({ ...m, shared: shared.has(m.memberId) }));
+  return members.filter((m) => !roleCan(m.role, { project: ["readAll"] })).map((m) => ({ ...m, shared: shared.has(m.memberId) }));
 }
 
 export async function shareProject(p: ProjectRow, memberId: string, byUserId: string): Promise<void> {
-  const target = (await db.select().from(member).where(and(eq(member.id, memberId), eq(member.organizationId, p.organizationId))))[0];
+  const target = (
+    await db
+      .select()
+      .from(member)
+      .where(and(eq(member.id, memberId), eq(member.organizationId, p.organizationId)))
+  )[0];
   if (!target) throw new NotFoundError("No such member in this project's organisation", [fieldError("memberId", "unknown member")]);
   await db.insert(projectShare).values({ projectId: p.id, memberId, sharedById: byUserId }).onConflictDoNothing();
 }

@@ -21,10 +21,7 @@ export async function seedDemo(): Promise<string[]> {
     for (const demo of DEMO_USERS) {
       let u = (await tx.select().from(user).where(eq(user.email, demo.email)))[0];
       if (!u) {
-        [u] = await tx
-          .insert(user)
-          .values({ id: crypto.randomUUID(), name: demo.name, email: demo.email, emailVerified: true })
-          .returning();
+        [u] = await tx.insert(user).values({ id: crypto.randomUUID(), name: demo.name, email: demo.email, emailVerified: true }).returning();
         await tx.insert(account).values({
           id: crypto.randomUUID(),
           accountId: u!.id,
@@ -34,7 +31,12 @@ export async function seedDemo(): Promise<string[]> {
         });
         created.push(demo.email);
       }
-      let m = (await tx.select().from(member).where(and(eq(member.userId, u!.id), eq(member.organizationId, orgId))))[0];
+      let m = (
+        await tx
+          .select()
+          .from(member)
+          .where(and(eq(member.userId, u!.id), eq(member.organizationId, orgId)))
+      )[0];
       if (!m) {
         [m] = await tx
           .insert(member)
