@@ -1,6 +1,6 @@
 // Response headers and cross-origin writes, against the built server (scripts/server.mjs).
 import { expect, test, type APIRequestContext, type Page } from "@playwright/test";
-import { DEMO_ORGANIZATION, DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+import { DEMO_ORGANIZATION, DEMO_PASSWORD, DEMO_PROJECTS, demoUser, signIn } from "./helpers";
 
 const origin = () => new URL(test.info().project.use.baseURL!).origin;
 
@@ -52,6 +52,7 @@ test("every main page renders under its Content-Security-Policy: no violations, 
     expect(csp, path).not.toContain("unsafe-inline");
     await page.waitForLoadState("load");
     const islands = await expectIslandsHydrated(page);
+    expect(violations, `policy violations on ${path}`).toEqual([]);
     return islands;
   };
 
@@ -61,7 +62,7 @@ test("every main page renders under its Content-Security-Policy: no violations, 
 
   await signIn(page, demoUser("owner").email, DEMO_PASSWORD);
   const list = await (await page.request.get("/api/v1/projects")).json();
-  const projectId: string = list.organizations[0].projects[0].id;
+  const projectId: string = list.organizations[0].projects.find((p: { name: string }) => p.name === DEMO_PROJECTS[0].name).id;
   for (const path of ["/dashboard", "/glazing", `/projects/${projectId}`, `/projects/${projectId}/sun`, `/orgs/${DEMO_ORGANIZATION.slug}/members`]) {
     expect(await visit(path), path).toBeGreaterThan(0);
   }
