@@ -21,7 +21,7 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: "node dist/server/entry.mjs",
+    command: "node scripts/server.mjs",
     url: `${baseURL}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,

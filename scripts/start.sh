@@ -67,7 +67,7 @@ if [ -n "$DEV" ]; then
   MODE=" (development server: reloads on change)"
 else
   build_if_stale
-  NODE_ENV=production node dist/server/entry.mjs &
+  NODE_ENV=production node scripts/server.mjs &
   MODE=""
 fi
 PIDS+=("$!")

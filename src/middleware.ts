@@ -1,6 +1,8 @@
 import { defineMiddleware } from "astro:middleware";
 import { auth } from "@/lib/server/auth";
 import { problem } from "@/lib/server/http";
+import { serverEnv } from "@/lib/server/env";
+import { crossSiteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
@@ -8,9 +10,16 @@ const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$
 /** API routes open to anonymous callers. */
 const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, /^\/api\/v1\/invitations\/[^/]+$/];
 
+let trusted: ReadonlySet<string> | undefined;
+const TRUSTED = () => (trusted ??= trustedOrigins(serverEnv()));
+
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
   const path = context.url.pathname;
+  if (isApiWrite(context.request.method, path)) {
+    const refusal = crossSiteRefusal(context.request.headers, TRUSTED());
+    if (refusal) return problem(403, refusal);
+  }
   if (path.startsWith("/api/auth/") || path === "/api/health") {
     context.locals.user = null;
     context.locals.session = null;
@@ -34,14 +43,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
       return context.redirect(`/signin?next=${encodeURIComponent(path + context.url.search)}`, 303);
     }
   }
-  const response = await next();
-  if (!response.headers.has("x-content-type-options")) {
-    try {
-      response.headers.set("x-content-type-options", "nosniff");
-      response.headers.set("referrer-policy", "same-origin");
-    } catch {
-      /* immutable (e.g. redirect) responses keep their headers */
-    }
-  }
-  return response;
+  // Headers every response carries (nosniff, referrer, opener, permissions) are set by the server in
+  // front of Astro, scripts/server.mjs, so that static files get them too.
+  return next();
 });

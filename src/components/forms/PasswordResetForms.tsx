@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { z } from "zod";
+import { z } from "@/lib/contracts/zod";
 import { email, password } from "@/lib/contracts/common";
 import { authClient } from "@/lib/client/auth-client";
 import { Field, FormMessage } from "./Field";

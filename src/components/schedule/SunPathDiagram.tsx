@@ -117,13 +117,17 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
       <ul className="flex flex-wrap gap-x-4 gap-y-1 text-xs">
         {DAYS.map((d) => (
           <li key={d.md} className="flex items-center gap-1.5">
-            <span className="inline-block h-1 w-5" style={{ background: d.color }} />
+            <svg className="h-1 w-5" viewBox="0 0 20 4" aria-hidden="true">
+              <rect width="20" height="4" fill={d.color} />
+            </svg>
             {d.label}
           </li>
         ))}
         {facades.map((f, k) => (
           <li key={`${f.name}-${k}`} className="flex items-center gap-1.5">
-            <span className="inline-block h-2 w-2 rounded-full" style={{ background: FACADE_COLORS[k % FACADE_COLORS.length] }} />
+            <svg className="h-2 w-2" viewBox="0 0 8 8" aria-hidden="true">
+              <circle cx="4" cy="4" r="4" fill={FACADE_COLORS[k % FACADE_COLORS.length]} />
+            </svg>
             {f.name}
           </li>
         ))}

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { email, password, rowId, text } from "./common";
 import { ASSIGNABLE_ROLES } from "@/lib/auth/roles";
 

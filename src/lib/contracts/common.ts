@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 
 /** Trimmed, non-empty text with a length limit. */
 export const text = (label: string, max: number) =>

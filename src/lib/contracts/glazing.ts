@@ -2,7 +2,7 @@
  * Request and response of POST /api/v1/calc/glazing. The same schema validates the make-up form.
  * Layers are listed from outdoors inwards and alternate pane, gap, pane, …; 1 to 6 panes.
  */
-import { z } from "zod";
+import { z } from "./zod";
 import { bounded, fraction } from "./numbers";
 
 export const MAX_PANES = 6;

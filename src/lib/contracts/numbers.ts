@@ -2,7 +2,7 @@
  * Number fields of every request: finite (NaN, Infinity and strings refused) and in range, with
  * messages that name the field.
  */
-import { z } from "zod";
+import { z } from "./zod";
 
 const finiteNumber = (label: string) => z.number({ error: `${label} must be a number` }).refine(Number.isFinite, `${label} must be a finite number`);
 

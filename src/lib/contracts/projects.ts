@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { z } from "./zod";
 import { optionalText, rowId, text, timeZone } from "./common";
 import { finite } from "./numbers";
 

@@ -2,7 +2,7 @@
  * Request and response of POST /api/v1/calc/schedule: hour-by-hour sun, irradiance and transmitted
  * solar energy for each surface (façade orientation + glazing make-up) of a site.
  */
-import { z } from "zod";
+import { z } from "./zod";
 import { isIanaTimeZone } from "./common";
 import { GlazingRequest } from "./glazing";
 import { finite, positive } from "./numbers";
