@@ -1,6 +1,7 @@
 import { defineMiddleware } from "astro:middleware";
 import { auth } from "@/lib/server/auth";
-import { problem } from "@/lib/server/http";
+import { isDatabaseUnavailable } from "@/lib/server/db/unavailable";
+import { problem, unavailable } from "@/lib/server/http";
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
@@ -8,25 +9,31 @@ const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$
 /** API routes open to anonymous callers. */
 const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, /^\/api\/v1\/invitations\/[^/]+$/];
 
+/** The branded 503 page that page requests get while the database cannot be reached. */
+const UNAVAILABLE_PAGE = "/unavailable";
+
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
   const path = context.url.pathname;
-  if (path.startsWith("/api/auth/") || path === "/api/health") {
+  if (path.startsWith("/api/auth/") || path === "/api/health" || path === UNAVAILABLE_PAGE) {
     context.locals.user = null;
     context.locals.session = null;
     return next();
   }
   let session: Awaited<ReturnType<typeof auth.api.getSession>> = null;
+  let reroute: string | undefined;
   try {
     session = await auth.api.getSession({ headers: context.request.headers });
   } catch (err) {
     console.error("[auth] session lookup failed:", (err as Error).message);
-    if (path.startsWith("/api/")) return problem(503, "The session store is unavailable; try again shortly");
+    if (path.startsWith("/api/"))
+      return unavailable("The session store is unavailable at the moment; nothing was changed. Try again in a few seconds.");
+    reroute = UNAVAILABLE_PAGE;
   }
   context.locals.user = session?.user ?? null;
   context.locals.session = session?.session ?? null;
 
-  if (!context.locals.user) {
+  if (!context.locals.user && !reroute) {
     if (path.startsWith("/api/") && !PUBLIC_API.some((r) => r.test(path))) {
       return problem(401, "Sign in to use this endpoint");
     }
@@ -34,7 +41,17 @@ export const onRequest = defineMiddleware(async (context, next) => {
       return context.redirect(`/signin?next=${encodeURIComponent(path + context.url.search)}`, 303);
     }
   }
-  const response = await next();
+  let response: Response;
+  try {
+    response = await (reroute ? next(reroute) : next());
+  } catch (err) {
+    // A page's loader lost the database: the branded 503 page instead of a bare 500.
+    if (reroute || path.startsWith("/api/") || !isDatabaseUnavailable(err)) throw err;
+    console.error(`[page] ${path}: database unavailable:`, (err as Error).message);
+    context.locals.user = null;
+    context.locals.session = null;
+    return context.rewrite(UNAVAILABLE_PAGE);
+  }
   if (!response.headers.has("x-content-type-options")) {
     try {
       response.headers.set("x-content-type-options", "nosniff");
