@@ -33,17 +33,15 @@ pool.on("connect", (client) => {
  * write of a library, say) is logged instead of ending the process. Any other unhandled rejection
  * is rethrown, which keeps Node's default of ending the process for real bugs.
  */
+export function survivingLostConnections(reason: unknown): void {
+  if (!isDatabaseUnavailable(reason)) throw reason;
+  console.error("[db] unhandled rejection while the database is unavailable:", (reason as Error).message);
+}
 const GUARD = Symbol.for("paneray.db.unhandledRejectionGuard");
 const registry = globalThis as { [GUARD]?: true };
 if (!registry[GUARD]) {
   registry[GUARD] = true;
-  process.on("unhandledRejection", (reason) => {
-    if (isDatabaseUnavailable(reason)) {
-      console.error("[db] unhandled rejection while the database is unavailable:", (reason as Error).message);
-      return;
-    }
-    throw reason;
-  });
+  process.on("unhandledRejection", survivingLostConnections);
 }
 
 export const db = drizzle(pool, { schema });
