@@ -276,6 +276,7 @@ describe("database outage under write load (built server)", () => {
       const { rows } = await client.query<{ name: string }>("select name from project where name like 'outage-w%'");
       const stored = new Set(rows.map((r) => r.name));
       expect(acknowledged.filter((n) => !stored.has(n))).toEqual([]);
+      console.log(`[fault] ${calls.length} writes in all; ${acknowledged.length} acknowledged, all of them stored (${stored.size} rows)`);
     } finally {
       await client.end();
     }
