@@ -253,7 +253,7 @@ async function outageCycle(mode: "fast" | "immediate") {
   const slowest = Math.max(...during.map((c) => c.end - c.start));
   console.log(
     `[fault] ${mode} stop: ${during.length} writes answered 503 during the outage (slowest ${slowest} ms); ` +
-      `PostgreSQL back after ${back - restart} ms; first acknowledged write ${firstAck - back} ms after that`,
+      `first acknowledged write ${firstAck - restart} ms after the restart began (pg_ctl start took ${back - restart} ms)`,
   );
 }
 

@@ -32,7 +32,6 @@ const MESSAGES = [
   /connection terminated/i,
   /timeout exceeded when trying to connect/i,
   /client has encountered a connection error/i,
-  /connection (was )?closed/i,
   /the database system is (shutting down|starting up|in recovery mode)/i,
   /terminating connection due to/i,
   /query read timeout/i,
