@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # scripts/pg.sh up DATADIR PORT   -> PostgreSQL on 127.0.0.1:PORT (initialised on first use); prints its bin dir
-# scripts/pg.sh down DATADIR      -> fast, clean shutdown
+# scripts/pg.sh down DATADIR [MODE] -> shutdown: fast and clean by default; MODE immediate aborts (crash-like, recovery on next start)
 # Installs Debian's postgresql when its server binaries are missing. initdb/pg_ctl refuse to run
 # as root, so as root they run as the postgres user that the Debian package creates.
 set -euo pipefail
@@ -27,6 +27,6 @@ case "$1" in
       -o "-h 127.0.0.1 -p $PORT -k $DATA/sock -c fsync=${PG_FSYNC:-on}" start >/dev/null
     echo "$BIN" ;;
   down)
-    if [ -f "$DATA/postmaster.pid" ]; then "${AS[@]}" "$BIN/pg_ctl" -D "$DATA" -m fast -w stop >/dev/null || true; fi ;;
-  *) echo "usage: pg.sh up DATADIR PORT | pg.sh down DATADIR" >&2; exit 2 ;;
+    if [ -f "$DATA/postmaster.pid" ]; then "${AS[@]}" "$BIN/pg_ctl" -D "$DATA" -m "${3:-fast}" -w stop >/dev/null || true; fi ;;
+  *) echo "usage: pg.sh up DATADIR PORT | pg.sh down DATADIR [fast|immediate]" >&2; exit 2 ;;
 esac

@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
 # npm test: the same set-up as npm start on a throwaway database, mail folder and ports; then type check,
-# lint (ESLint) and format check (Prettier), unit and server tests (Vitest), a fresh build and the browser
+# lint (ESLint) and format check (Prettier), unit and server tests (Vitest), a fresh build, the fault suite
+# (tests/fault: the built server through a PostgreSQL outage, on a database of its own) and the browser
 # tests (Playwright + Debian's chromium).
-# Ends with one line "N passed, M failed" (totals of both runners, plus lint and format as one check
+# Ends with one line "N passed, M failed" (totals of all runs: Vitest twice, Playwright, plus lint and format as one check
 # each); exits non-zero on any failure.
 # Leaves nothing running and nothing behind.
 set -euo pipefail
@@ -57,6 +58,9 @@ npx vitest run --reporter=default --reporter=json --outputFile.json="$TMP/vitest
 log "building…"
 npx astro build >"$TMP/build.log" 2>&1 || { cat "$TMP/build.log" >&2; exit 1; }
 
+log "fault tests (database outage against the built server)…"
+npx vitest run --config vitest.fault.config.ts --reporter=default --reporter=json --outputFile.json="$TMP/fault.json" || status=1
+
 log "browser tests (playwright)…"
 CI_REPORT_JSON="$TMP/playwright.json" npx playwright test || status=1
 
@@ -64,12 +68,15 @@ node -e '
   const fs = require("fs");
   const read = (f) => { try { return JSON.parse(fs.readFileSync(f, "utf8")); } catch { return null; } };
   const v = read(process.argv[1]), p = read(process.argv[2]);   // argv 3, 4: lint and format checks passed, failed
+  const f = read(process.argv[5]);   // the fault suite (a second Vitest run)
   let passed = Number(process.argv[3]), failed = Number(process.argv[4]), skipped = 0;
-  if (v) { passed += v.numPassedTests; failed += v.numFailedTests; skipped += v.numPendingTests + (v.numTodoTests || 0); }
-  else failed += 1;   // the runner produced no report: count it as a failure
+  for (const r of [v, f]) {
+    if (r) { passed += r.numPassedTests; failed += r.numFailedTests; skipped += r.numPendingTests + (r.numTodoTests || 0); }
+    else failed += 1;   // the runner produced no report: count it as a failure
+  }
   if (p) { passed += p.stats.expected + p.stats.flaky; failed += p.stats.unexpected; skipped += p.stats.skipped; }
   else failed += 1;
   console.log(`${passed} passed, ${failed} failed` + (skipped ? `, ${skipped} skipped` : ""));
   if (failed) process.exitCode = 1;
-' "$TMP/vitest.json" "$TMP/playwright.json" "$checks_passed" "$checks_failed" || status=1
+' "$TMP/vitest.json" "$TMP/playwright.json" "$checks_passed" "$checks_failed" "$TMP/fault.json" || status=1
 exit $status

@@ -1,8 +1,9 @@
 import { defineMiddleware } from "astro:middleware";
 import { auth } from "@/lib/server/auth";
-import { problem } from "@/lib/server/http";
+import { problem, unavailable } from "@/lib/server/http";
 import { serverEnv } from "@/lib/server/env";
 import { crossSiteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
+import { isDatabaseUnavailable } from "@/lib/server/db/unavailable";
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
@@ -13,6 +14,9 @@ const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, 
 let trusted: ReadonlySet<string> | undefined;
 const TRUSTED = () => (trusted ??= trustedOrigins(serverEnv()));
 
+/** The branded 503 page that page requests get while the database cannot be reached. */
+const UNAVAILABLE_PAGE = "/unavailable";
+
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
   const path = context.url.pathname;
@@ -20,22 +24,25 @@ export const onRequest = defineMiddleware(async (context, next) => {
     const refusal = crossSiteRefusal(context.request.headers, TRUSTED());
     if (refusal) return problem(403, refusal);
   }
-  if (path.startsWith("/api/auth/") || path === "/api/health") {
+  if (path.startsWith("/api/auth/") || path === "/api/health" || path === UNAVAILABLE_PAGE) {
     context.locals.user = null;
     context.locals.session = null;
     return next();
   }
   let session: Awaited<ReturnType<typeof auth.api.getSession>> = null;
+  let reroute: string | undefined;
   try {
     session = await auth.api.getSession({ headers: context.request.headers });
   } catch (err) {
     console.error("[auth] session lookup failed:", (err as Error).message);
-    if (path.startsWith("/api/")) return problem(503, "The session store is unavailable; try again shortly");
+    if (path.startsWith("/api/"))
+      return unavailable("The session store is unavailable at the moment; nothing was changed. Try again in a few seconds.");
+    reroute = UNAVAILABLE_PAGE;
   }
   context.locals.user = session?.user ?? null;
   context.locals.session = session?.session ?? null;
 
-  if (!context.locals.user) {
+  if (!context.locals.user && !reroute) {
     if (path.startsWith("/api/") && !PUBLIC_API.some((r) => r.test(path))) {
       return problem(401, "Sign in to use this endpoint");
     }
@@ -43,7 +50,18 @@ export const onRequest = defineMiddleware(async (context, next) => {
       return context.redirect(`/signin?next=${encodeURIComponent(path + context.url.search)}`, 303);
     }
   }
+  let response: Response;
+  try {
+    response = await (reroute ? next(reroute) : next());
+  } catch (err) {
+    // A page's loader lost the database: the branded 503 page instead of a bare 500.
+    if (reroute || path.startsWith("/api/") || !isDatabaseUnavailable(err)) throw err;
+    console.error(`[page] ${path}: database unavailable:`, (err as Error).message);
+    context.locals.user = null;
+    context.locals.session = null;
+    return context.rewrite(UNAVAILABLE_PAGE);
+  }
   // Headers every response carries (nosniff, referrer, opener, permissions) are set by the server in
   // front of Astro, scripts/server.mjs, so that static files get them too.
-  return next();
+  return response;
 });

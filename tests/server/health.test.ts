@@ -39,7 +39,17 @@ describe("health endpoint", () => {
     const t0 = Date.now();
     const res = await callHealth();
     expect(res.status).toBe(503);
+    expect(res.headers.get("retry-after")).toMatch(/^\d+$/);
     expect(await res.json()).toMatchObject({ database: "down" });
     expect(Date.now() - t0).toBeLessThan(5000);
+  });
+
+  it("does not reveal where the database is when it is unreachable", async () => {
+    const port = await closedPort();
+    process.env.DATABASE_URL = `postgres://postgres@127.0.0.1:${port}/nothing`;
+    const text = await (await callHealth()).text();
+    expect(text).not.toContain(String(port));
+    expect(text).not.toContain("127.0.0.1");
+    expect(text).not.toMatch(/ECONNREFUSED|postgres:/);
   });
 });

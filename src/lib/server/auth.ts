@@ -28,6 +28,9 @@ export const auth = betterAuth({
     .filter(Boolean),
   database: drizzleAdapter(db, { provider: "pg", schema }),
   telemetry: { enabled: false },
+  // Failures that are not better-auth's own refusals reach our route (src/pages/api/auth/[...all].ts),
+  // which answers a lost database 503 with Retry-After instead of a bare 500.
+  onAPIError: { throw: true },
   rateLimit: { enabled: env.AUTH_RATE_LIMIT !== "off" },
   advanced: { ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] } },
   emailAndPassword: {

@@ -8,6 +8,7 @@ import { z, type ZodType } from "zod";
 import type { FieldError, Problem } from "@/lib/contracts/problem";
 import { permissionFor, PERMISSION_PHRASES, type PermissionKey } from "@/lib/auth/roles";
 import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError } from "@/lib/server/errors";
+import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from "@/lib/server/db/unavailable";
 import type { Membership, ProjectRow } from "@/lib/server/services/access";
 
 /** The access rules, loaded on first use so that this module (and its tests) need no database. */
@@ -36,6 +37,13 @@ export function problem(status: number, detail: string, extra: { errors?: FieldE
     status,
     headers: { "content-type": "application/problem+json; charset=utf-8", "cache-control": "no-store" },
   });
+}
+
+/** 503 with Retry-After: the database (or the session store in it) cannot be reached right now. */
+export function unavailable(detail = "The database is unavailable at the moment; nothing was changed. Try again in a few seconds."): Response {
+  const res = problem(503, detail, { retryAfterSeconds: RETRY_AFTER_SECONDS });
+  res.headers.set("retry-after", String(RETRY_AFTER_SECONDS));
+  return res;
 }
 
 /** Thrown at the edge (size limits, content types) to answer with a problem response. */
@@ -168,7 +176,8 @@ export function problemFor(err: unknown, engineField?: string): HttpError | null
 
 /**
  * Runs a handler so that every failure becomes a problem response: known errors with their
- * status (see problemFor), anything else a logged 500 without internals.
+ * status (see problemFor), a lost or refused database connection 503 with Retry-After (see
+ * isDatabaseUnavailable), anything else a logged 500 without internals.
  */
 export function withProblems(fn: (ctx: APIContext) => Promise<Response> | Response, engineField?: string): APIRoute {
   return async (ctx) => {
@@ -177,6 +186,10 @@ export function withProblems(fn: (ctx: APIContext) => Promise<Response> | Respon
     } catch (err) {
       const known = problemFor(err, engineField);
       if (known) return known.toResponse();
+      if (isDatabaseUnavailable(err)) {
+        console.error(`[api] ${ctx.request.method} ${ctx.url.pathname}: database unavailable:`, (err as Error).message);
+        return unavailable();
+      }
       console.error(`[api] ${ctx.request.method} ${ctx.url.pathname} failed:`, err);
       return problem(500, "Something went wrong on our side; nothing was changed by the failed step.");
     }
