@@ -59,7 +59,7 @@ function stringLeaves(value: unknown, path: (string | number)[] = []): (string |
 function withValue(value: unknown, path: (string | number)[], leaf: string): unknown {
   if (!path.length) return leaf;
   const [head, ...rest] = path;
-  const copy: Record<string | number, unknown> = Array.isArray(value) ? [...value] : { ...(value as object) };
+  const copy = (Array.isArray(value) ? [...value] : { ...(value as object) }) as Record<string | number, unknown>;
   copy[head!] = withValue((value as Record<string | number, unknown>)[head!], rest, leaf);
   return copy;
 }
