@@ -31,7 +31,8 @@ interface VisibleQuery {
 
 /**
  * One page of the projects the user may see, most recently changed first (ties by id), with their
- * façade counts: a single grouped query, `limit + 1` rows to know whether another page follows.
+ * façade counts: a single query (the page's `limit + 1` rows in a subquery, to know whether another
+ * page follows, joined to their façades and grouped).
  */
 async function visibleProjects(userId: string, q: VisibleQuery): Promise<Page<ProjectListRow & { memberId: string }>> {
   const sharedWithMember = db
@@ -44,11 +45,11 @@ async function visibleProjects(userId: string, q: VisibleQuery): Promise<Page<Pr
         and(eq(project.updatedAt, sql`${q.cursor.key}::timestamptz`), gt(project.id, q.cursor.id)),
       )
     : undefined;
-  const rows = await db
-    .select({ project, memberId: member.id, facadeCount: count(facade.id), sortKey: updatedKey })
+  // The page's rows first (limit + 1, on the sort order), then the façade counts of just those rows.
+  const pageRows = db
+    .select({ id: project.id, memberId: sql<string>`${member.id}`.as("member_id") })
     .from(project)
     .innerJoin(member, and(eq(member.organizationId, project.organizationId), eq(member.userId, userId)))
-    .leftJoin(facade, eq(facade.projectId, project.id))
     .where(
       and(
         or(inArray(member.role, rolesThat("readAll")), and(inArray(member.role, rolesThat("readShared")), exists(sharedWithMember))),
@@ -56,9 +57,16 @@ async function visibleProjects(userId: string, q: VisibleQuery): Promise<Page<Pr
         after,
       ),
     )
-    .groupBy(project.id, member.id)
     .orderBy(desc(project.updatedAt), asc(project.id))
-    .limit(q.limit + 1);
+    .limit(q.limit + 1)
+    .as("page_rows");
+  const rows = await db
+    .select({ project, memberId: pageRows.memberId, facadeCount: count(facade.id), sortKey: updatedKey })
+    .from(pageRows)
+    .innerJoin(project, eq(project.id, pageRows.id))
+    .leftJoin(facade, eq(facade.projectId, project.id))
+    .groupBy(project.id, pageRows.memberId)
+    .orderBy(desc(project.updatedAt), asc(project.id));
   const page = pageOf(rows, q.limit, (r) => ({ key: r.sortKey, id: r.project.id }));
   return { items: page.items.map((r) => ({ ...r.project, facadeCount: r.facadeCount, memberId: r.memberId })), nextCursor: page.nextCursor };
 }
