@@ -3,7 +3,8 @@
 # SMTP fake (unless SMTP_URL is given), migrates, seeds the demo, builds when stale, and serves the app.
 # npm run dev (scripts/start.sh --dev): the same set-up, then `astro dev` (reloads on change) instead
 # of the built server.
-# Ctrl-C / SIGTERM stops the server, the SMTP fake and PostgreSQL cleanly.
+# Ctrl-C / SIGTERM stops the server, the SMTP fake and PostgreSQL cleanly (only the PostgreSQL this start started).
+# A second start in the same data folder refuses while the first runs.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib.sh
@@ -16,6 +17,11 @@ case "${1:-}" in
 esac
 
 DATA=${PANERAY_DATA:-$PWD/.data}
+if [ -z "${DATABASE_URL:-}" ] && running=$(scripts/pg.sh status "$DATA/pg" 2>/dev/null); then
+  read -r rpid rport <<<"$running"
+  log "Paneray is already running from this folder (PostgreSQL pid $rpid on port $rport); stop it first or set PANERAY_DATA to another folder"
+  exit 3
+fi
 mkdir -p "$DATA"
 export HOST=${HOST:-127.0.0.1} PORT=${PORT:-4321}
 export BETTER_AUTH_URL=${BETTER_AUTH_URL:-http://$HOST:$PORT}
@@ -30,6 +36,7 @@ fi
 ensure_node_modules
 
 PIDS=()
+# Set only once this start has started PostgreSQL itself: cleanup never stops a server it did not start.
 PGDIR=""
 cleanup() {
   trap - EXIT INT TERM
@@ -42,9 +49,12 @@ trap 'exit 130' INT
 trap 'exit 143' TERM
 
 if [ -z "${DATABASE_URL:-}" ]; then
-  PGDIR="$DATA/pg"
   PGPORT=$(free_port "${PGPORT:-5433}")
-  BIN=$(scripts/pg.sh up "$PGDIR" "$PGPORT")
+  BIN=$(scripts/pg.sh up "$DATA/pg" "$PGPORT") || {
+    log "PostgreSQL did not start on $DATA/pg; if another Paneray runs from this folder, stop it first or set PANERAY_DATA to another folder"
+    exit 1
+  }
+  PGDIR="$DATA/pg"
   log "PostgreSQL on 127.0.0.1:$PGPORT (data in $PGDIR)"
   "$BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -tAc "select 1 from pg_database where datname='paneray'" | grep -q 1 \
     || "$BIN/createdb" -h 127.0.0.1 -p "$PGPORT" -U postgres paneray

@@ -1,14 +1,14 @@
 import { z } from "./zod";
-import { email, password, rowId, text } from "./common";
+import { email, name, password, plainString, rowId } from "./common";
 import { ASSIGNABLE_ROLES } from "@/lib/auth/roles";
 
 export const SignUpRequest = z
   .object({
-    name: text("name", 120),
+    name: name("name", 120),
     email,
     password,
     /** Required unless the sign-up accepts an invitation. */
-    organizationName: text("organizationName", 120).optional(),
+    organizationName: name("organizationName", 120).optional(),
     invitationId: rowId.optional(),
   })
   .refine((v) => v.organizationName || v.invitationId, {
@@ -17,7 +17,10 @@ export const SignUpRequest = z
   });
 export type SignUpRequest = z.infer<typeof SignUpRequest>;
 
-export const SignInRequest = z.object({ email, password: z.string().min(1, "password is required").max(128) });
+export const SignInRequest = z.object({
+  email,
+  password: plainString("password").pipe(z.string().min(1, "password is required").max(128, "password must be at most 128 characters")),
+});
 
 /** A role an owner may give; the parsed value is a `RoleName`. */
 export const role = z.enum(ASSIGNABLE_ROLES, {

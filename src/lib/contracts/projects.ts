@@ -1,24 +1,24 @@
 import { z } from "./zod";
-import { optionalText, rowId, text, timeZone } from "./common";
+import { name, optionalText, rowId, timeZone } from "./common";
 import { finite } from "./numbers";
 
 export const FacadeInput = z.object({
   id: rowId.optional(),
-  name: text("name", 120),
+  name: name("name", 120),
   azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
   tiltDeg: finite("tiltDeg", 0, 180).default(90),
 });
 
 const projectFields = {
-  name: text("name", 200),
+  name: name("name", 200),
   reference: optionalText("reference", 60),
   buildingName: optionalText("buildingName", 200),
-  siteName: text("siteName", 200),
+  siteName: name("siteName", 200),
   latitudeDeg: finite("latitudeDeg", -90, 90),
   longitudeDeg: finite("longitudeDeg", -180, 180),
   timeZone,
   elevationM: finite("elevationM", -500, 9000),
-  description: optionalText("description", 5000),
+  description: optionalText("description", 5000, { multiline: true }),
   facades: z.array(FacadeInput).max(48, "a project has at most 48 façades"),
 };
 

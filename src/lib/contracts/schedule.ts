@@ -3,7 +3,7 @@
  * solar energy for each surface (façade orientation + glazing make-up) of a site.
  */
 import { z } from "./zod";
-import { isIanaTimeZone } from "./common";
+import { name, plainString, timeZone } from "./common";
 import { GlazingRequest } from "./glazing";
 import { finite, positive } from "./numbers";
 
@@ -24,7 +24,7 @@ const localDate = (label: string) =>
 export const Site = z.object({
   latitudeDeg: finite("latitudeDeg", -90, 90),
   longitudeDeg: finite("longitudeDeg", -180, 180),
-  timeZone: z.string({ error: "timeZone must be text" }).refine(isIanaTimeZone, "timeZone must be an IANA time-zone name such as Europe/Lisbon"),
+  timeZone,
   elevationM: finite("elevationM", -500, 9000).optional().default(0),
 });
 
@@ -62,16 +62,17 @@ export const Sky = z
 
 export const WeatherRow = z.object({
   /** ISO-8601 instant with offset or Z: the midpoint of the hour the values stand for. */
-  time: z
-    .string()
-    .refine((t) => /[zZ]|[+-]\d{2}:?\d{2}$/.test(t) && !Number.isNaN(Date.parse(t)), "time must be an ISO-8601 instant with a UTC offset"),
+  time: plainString("time").refine(
+    (t) => /[zZ]|[+-]\d{2}:?\d{2}$/.test(t) && !Number.isNaN(Date.parse(t)),
+    "time must be an ISO-8601 instant with a UTC offset",
+  ),
   ghi: finite("ghi", 0, 1500),
   dni: finite("dni", 0, 1500),
   dhi: finite("dhi", 0, 1000),
 });
 
 export const ScheduleSurface = z.object({
-  name: z.string({ error: "name must be text" }).trim().min(1, "name is required").max(120),
+  name: name("name", 120),
   azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
   tiltDeg: finite("tiltDeg", 0, 180),
   layers: z.array(z.unknown()),

@@ -42,6 +42,8 @@ export const project = pgTable(
   },
   (t) => [
     index("project_organization_idx").on(t.organizationId),
+    /** The projects list's order (most recently changed first, ties by id) within an organisation: pages read it in order. */
+    index("project_organization_updated_idx").on(t.organizationId, t.updatedAt.desc().nullsFirst(), t.id),
     check("project_latitude_range", sql`${t.latitudeDeg} between -90 and 90`),
     check("project_longitude_range", sql`${t.longitudeDeg} between -180 and 180`),
   ],

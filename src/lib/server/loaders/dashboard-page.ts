@@ -3,6 +3,7 @@ import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
 import { ForbiddenError } from "@/lib/server/errors";
 import { membershipsOf, type ProjectRow } from "@/lib/server/services/access";
 import { projectsForUser } from "@/lib/server/services/projects";
+import { decodeCursor, DEFAULT_PAGE_LIMIT, isCursorInstant } from "@/lib/contracts/pagination";
 
 interface PageUser {
   id: string;
@@ -16,13 +17,30 @@ export interface DashboardOrganization {
   canCreate: boolean;
   /** Sees every project of the organisation (otherwise only those shared with them). */
   seesAll: boolean;
+  /** At most DASHBOARD_PAGE projects, most recently changed first. */
   projects: (ProjectRow & { facadeCount: number })[];
+  /** Cursor of the next projects (the "more" link), null when these are the last. */
+  nextCursor: string | null;
+  /** These projects continue the list from a cursor (the page offers a way back to the first ones). */
+  isContinuation: boolean;
 }
 
-export async function loadDashboardPage(user: PageUser): Promise<{ organizations: DashboardOrganization[] }> {
-  const groups = await projectsForUser(user.id);
+/** Projects shown per organisation on one dashboard page. */
+export const DASHBOARD_PAGE = DEFAULT_PAGE_LIMIT;
+
+/**
+ * The user's organisations with the first DASHBOARD_PAGE projects of each; `from` (the page's
+ * `?org=…&cursor=…`) continues one organisation's list. A cursor that is not ours shows the first page.
+ */
+export async function loadDashboardPage(
+  user: PageUser,
+  from: { organizationId: string; cursor: string } | null = null,
+): Promise<{ organizations: DashboardOrganization[] }> {
+  const cursor = from ? decodeCursor(from.cursor) : null;
+  const start = from && cursor && isCursorInstant(cursor.key) ? { organizationId: from.organizationId, cursor } : undefined;
+  const groups = await projectsForUser(user.id, { limit: DASHBOARD_PAGE, from: start });
   return {
-    organizations: groups.map(({ membership: m, projects }) => ({
+    organizations: groups.map(({ membership: m, projects, nextCursor }) => ({
       organizationId: m.organizationId,
       organizationName: m.organizationName,
       role: m.role,
@@ -30,6 +48,8 @@ export async function loadDashboardPage(user: PageUser): Promise<{ organizations
       canCreate: roleCan(m.role, { project: ["create"] }),
       seesAll: roleCan(m.role, { project: ["readAll"] }),
       projects,
+      nextCursor,
+      isContinuation: start?.organizationId === m.organizationId,
     })),
   };
 }

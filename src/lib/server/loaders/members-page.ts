@@ -3,7 +3,8 @@ import { roleCan } from "@/lib/auth/roles";
 import type { InvitationEntry, MemberEntry } from "@/lib/contracts/auth";
 import { ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { membershipsOf } from "@/lib/server/services/access";
-import { membersOf, pendingInvitationsOf } from "@/lib/server/services/members";
+import { DEFAULT_PAGE_LIMIT } from "@/lib/contracts/pagination";
+import { invitationsPage, membersPage } from "@/lib/server/services/members";
 
 /** Dates as ISO strings, as the island receives them. */
 type Serialised<T> = { [K in keyof T]: T[K] extends Date ? string : T[K] };
@@ -13,8 +14,11 @@ const serialise = <T extends object>(row: T): Serialised<T> =>
 export interface MembersPage {
   organizationId: string;
   organizationName: string;
+  /** The first page (50) of members and of pending invitations. */
   members: MemberEntry[];
   invitations: InvitationEntry[];
+  /** More members or invitations exist than the page shows. */
+  hasMore: boolean;
 }
 
 /** NotFoundError when the user is not a member of the organisation; ForbiddenError unless an owner. */
@@ -22,11 +26,16 @@ export async function loadMembersPage(user: { id: string }, slug: string | undef
   const membership = (await membershipsOf(user.id)).find((m) => m.organizationSlug === slug);
   if (!membership) throw new NotFoundError("No such organisation, or you are not a member of it");
   if (!roleCan(membership.role, { member: ["update"] })) throw ForbiddenError.forRole(membership.role, "manage members");
-  const [members, invitations] = await Promise.all([membersOf(membership.organizationId), pendingInvitationsOf(membership.organizationId)]);
+  const first = { limit: DEFAULT_PAGE_LIMIT };
+  const [members, invitations] = await Promise.all([
+    membersPage(membership.organizationId, first),
+    invitationsPage(membership.organizationId, first),
+  ]);
   return {
     organizationId: membership.organizationId,
     organizationName: membership.organizationName,
-    members: members.map(serialise),
-    invitations: invitations.map(serialise),
+    members: members.items.map(serialise),
+    invitations: invitations.items.map(serialise),
+    hasMore: members.nextCursor !== null || invitations.nextCursor !== null,
   };
 }

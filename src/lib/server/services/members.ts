@@ -1,4 +1,5 @@
-import { and, asc, eq, gt, ne } from "drizzle-orm";
+import { and, asc, eq, gt, ne, sql, type AnyColumn } from "drizzle-orm";
+import { DEFAULT_PAGE_LIMIT, pageOf, type Cursor, type Page } from "@/lib/contracts/pagination";
 import { auth } from "@/lib/server/auth";
 import { db } from "@/lib/server/db/client";
 import { invitation, member, organization, user } from "@/lib/server/db/schema";
@@ -23,17 +24,43 @@ export interface InvitationView {
   inviterName: string | null;
 }
 
-export async function membersOf(organizationId: string): Promise<MemberView[]> {
-  return db
-    .select({ memberId: member.id, userId: user.id, name: user.name, email: user.email, role: member.role, joinedAt: member.createdAt })
+/**
+ * A creation time as a cursor's sort key, to the microsecond. better-auth's tables store UTC times
+ * as `timestamp` without zone, so the key is written and read back without any zone conversion.
+ */
+const createdKey = (column: AnyColumn) => sql<string>`to_char(${column}, 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`;
+const afterRow = (column: AnyColumn, id: AnyColumn, cursor?: Cursor) =>
+  cursor ? sql`(${column}, ${id}) > (${cursor.key}::timestamp, ${cursor.id})` : undefined;
+
+/** One page of an organisation's members, oldest membership first (ties by member id): one query. */
+export async function membersPage(organizationId: string, q: { limit: number; cursor?: Cursor }): Promise<Page<MemberView>> {
+  const rows = await db
+    .select({
+      memberId: member.id,
+      userId: user.id,
+      name: user.name,
+      email: user.email,
+      role: member.role,
+      joinedAt: member.createdAt,
+      sortKey: createdKey(member.createdAt),
+    })
     .from(member)
     .innerJoin(user, eq(user.id, member.userId))
-    .where(eq(member.organizationId, organizationId))
-    .orderBy(asc(member.createdAt));
+    .where(and(eq(member.organizationId, organizationId), afterRow(member.createdAt, member.id, q.cursor)))
+    .orderBy(asc(member.createdAt), asc(member.id))
+    .limit(q.limit + 1);
+  const page = pageOf(rows, q.limit, (r) => ({ key: r.sortKey, id: r.memberId }));
+  return { items: page.items.map(({ sortKey: _k, ...m }) => m), nextCursor: page.nextCursor };
 }
 
-export async function pendingInvitationsOf(organizationId: string): Promise<InvitationView[]> {
-  return db
+/** The first page of members (the endpoints' answers after a change). */
+export async function membersOf(organizationId: string, limit = DEFAULT_PAGE_LIMIT): Promise<MemberView[]> {
+  return (await membersPage(organizationId, { limit })).items;
+}
+
+/** One page of an organisation's pending, unexpired invitations, oldest first (ties by id): one query. */
+export async function invitationsPage(organizationId: string, q: { limit: number; cursor?: Cursor }): Promise<Page<InvitationView>> {
+  const rows = await db
     .select({
       id: invitation.id,
       email: invitation.email,
@@ -41,11 +68,27 @@ export async function pendingInvitationsOf(organizationId: string): Promise<Invi
       status: invitation.status,
       expiresAt: invitation.expiresAt,
       inviterName: user.name,
+      sortKey: createdKey(invitation.createdAt),
     })
     .from(invitation)
     .leftJoin(user, eq(user.id, invitation.inviterId))
-    .where(and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())))
-    .orderBy(asc(invitation.createdAt));
+    .where(
+      and(
+        eq(invitation.organizationId, organizationId),
+        eq(invitation.status, "pending"),
+        gt(invitation.expiresAt, new Date()),
+        afterRow(invitation.createdAt, invitation.id, q.cursor),
+      ),
+    )
+    .orderBy(asc(invitation.createdAt), asc(invitation.id))
+    .limit(q.limit + 1);
+  const page = pageOf(rows, q.limit, (r) => ({ key: r.sortKey, id: r.id }));
+  return { items: page.items.map(({ sortKey: _k, ...i }) => i), nextCursor: page.nextCursor };
+}
+
+/** The first page of pending invitations. */
+export async function pendingInvitationsOf(organizationId: string, limit = DEFAULT_PAGE_LIMIT): Promise<InvitationView[]> {
+  return (await invitationsPage(organizationId, { limit })).items;
 }
 
 /** Sends an invitation e-mail (through better-auth, which records it and calls our mailer). */

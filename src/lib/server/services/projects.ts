@@ -1,43 +1,113 @@
-import { and, asc, count, desc, eq, exists, inArray, notInArray, or, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, exists, gt, inArray, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { facade, member, project, projectShare, user } from "@/lib/server/db/schema";
 import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { ROLE_NAMES, roleCan } from "@/lib/auth/roles";
 import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
+import { DEFAULT_PAGE_LIMIT, pageOf, type Cursor, type Page } from "@/lib/contracts/pagination";
 import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
 
 export type FacadeRow = typeof facade.$inferSelect;
 
+export type ProjectListRow = ProjectRow & { facadeCount: number };
+
 export interface OrganizationProjects {
   membership: Membership;
-  projects: (ProjectRow & { facadeCount: number })[];
+  projects: ProjectListRow[];
+  /** Cursor of this organisation's next page; null when `projects` holds the last ones. */
+  nextCursor: string | null;
 }
 
 const rolesThat = (action: "readAll" | "readShared") => ROLE_NAMES.filter((r) => roleCan(r, { project: [action] }));
 
+/** The change time as the cursor's sort key, to the microsecond (a JavaScript Date keeps only milliseconds). */
+const updatedKey = sql<string>`to_char(${project.updatedAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`;
+
+interface VisibleQuery {
+  organizationId?: string;
+  limit: number;
+  cursor?: Cursor;
+}
+
 /**
- * Every project the user may see, grouped per organisation (for the dashboard): one query for the
- * memberships and one grouped query for the visible projects with their façade counts.
+ * One page of the projects the user may see, most recently changed first (ties by id), with their
+ * façade counts: a single query (the page's `limit + 1` rows in a subquery, to know whether another
+ * page follows, joined to their façades and grouped).
  */
-export async function projectsForUser(userId: string): Promise<OrganizationProjects[]> {
-  const memberships = await membershipsOf(userId);
-  if (!memberships.length) return [];
+async function visibleProjects(userId: string, q: VisibleQuery): Promise<Page<ProjectListRow & { memberId: string }>> {
   const sharedWithMember = db
     .select({ one: sql`1` })
     .from(projectShare)
     .where(and(eq(projectShare.projectId, project.id), eq(projectShare.memberId, member.id)));
-  const rows = await db
-    .select({ project, memberId: member.id, facadeCount: count(facade.id) })
+  const after = q.cursor
+    ? or(
+        lt(project.updatedAt, sql`${q.cursor.key}::timestamptz`),
+        and(eq(project.updatedAt, sql`${q.cursor.key}::timestamptz`), gt(project.id, q.cursor.id)),
+      )
+    : undefined;
+  // The page's rows first (limit + 1, on the sort order), then the façade counts of just those rows.
+  const pageRows = db
+    .select({ id: project.id, memberId: sql<string>`${member.id}`.as("member_id") })
     .from(project)
     .innerJoin(member, and(eq(member.organizationId, project.organizationId), eq(member.userId, userId)))
+    .where(
+      and(
+        or(inArray(member.role, rolesThat("readAll")), and(inArray(member.role, rolesThat("readShared")), exists(sharedWithMember))),
+        q.organizationId ? eq(project.organizationId, q.organizationId) : undefined,
+        after,
+      ),
+    )
+    .orderBy(desc(project.updatedAt), asc(project.id))
+    .limit(q.limit + 1)
+    .as("page_rows");
+  const rows = await db
+    .select({ project, memberId: pageRows.memberId, facadeCount: count(facade.id), sortKey: updatedKey })
+    .from(pageRows)
+    .innerJoin(project, eq(project.id, pageRows.id))
     .leftJoin(facade, eq(facade.projectId, project.id))
-    .where(or(inArray(member.role, rolesThat("readAll")), and(inArray(member.role, rolesThat("readShared")), exists(sharedWithMember))))
-    .groupBy(project.id, member.id)
+    .groupBy(project.id, pageRows.memberId)
     .orderBy(desc(project.updatedAt), asc(project.id));
-  return memberships.map((m) => ({
-    membership: m,
-    projects: rows.filter((r) => r.memberId === m.memberId).map((r) => ({ ...r.project, facadeCount: r.facadeCount })),
-  }));
+  const page = pageOf(rows, q.limit, (r) => ({ key: r.sortKey, id: r.project.id }));
+  return { items: page.items.map((r) => ({ ...r.project, facadeCount: r.facadeCount, memberId: r.memberId })), nextCursor: page.nextCursor };
+}
+
+const withoutMemberId = ({ memberId: _m, ...row }: ProjectListRow & { memberId: string }): ProjectListRow => row;
+
+/**
+ * The first page (`limit`, default 50) of each of the user's organisations, for the dashboard: one
+ * query for the memberships and one per organisation. `from` starts one organisation's list at a
+ * cursor instead (its "more" link).
+ */
+export async function projectsForUser(
+  userId: string,
+  opts: { limit?: number; from?: { organizationId: string; cursor: Cursor } } = {},
+): Promise<OrganizationProjects[]> {
+  const memberships = await membershipsOf(userId);
+  const limit = opts.limit ?? DEFAULT_PAGE_LIMIT;
+  return Promise.all(
+    memberships.map(async (m) => {
+      const cursor = opts.from?.organizationId === m.organizationId ? opts.from.cursor : undefined;
+      const page = await visibleProjects(userId, { organizationId: m.organizationId, limit, cursor });
+      return { membership: m, projects: page.items.map(withoutMemberId), nextCursor: page.nextCursor };
+    }),
+  );
+}
+
+/**
+ * One page of every project the user may see (optionally of one organisation), grouped per
+ * organisation; every membership is listed, with the page's projects of that organisation.
+ */
+export async function projectsPage(
+  userId: string,
+  q: VisibleQuery,
+): Promise<{ organizations: { membership: Membership; projects: ProjectListRow[] }[]; nextCursor: string | null }> {
+  const [memberships, page] = await Promise.all([membershipsOf(userId), visibleProjects(userId, q)]);
+  return {
+    organizations: memberships
+      .filter((m) => !q.organizationId || m.organizationId === q.organizationId)
+      .map((m) => ({ membership: m, projects: page.items.filter((r) => r.memberId === m.memberId).map(withoutMemberId) })),
+    nextCursor: page.nextCursor,
+  };
 }
 
 export async function facadesOf(projectId: string): Promise<FacadeRow[]> {
@@ -98,18 +168,37 @@ export async function deleteProject(projectId: string): Promise<void> {
 
 export type ShareRow = ShareEntry;
 
-/** Members of the project's organisation who see projects only when shared, and whether they see this one. */
-export async function sharesOf(p: ProjectRow): Promise<ShareRow[]> {
-  const members = await db
-    .select({ memberId: member.id, name: user.name, email: user.email, role: member.role })
+/**
+ * One page of the members of the project's organisation who see projects only when shared, by name
+ * (ties by member id), and whether they see this one: a single query.
+ */
+export async function sharesPage(p: ProjectRow, q: { limit: number; cursor?: Cursor }): Promise<Page<ShareRow>> {
+  const rows = await db
+    .select({
+      memberId: member.id,
+      name: user.name,
+      email: user.email,
+      role: member.role,
+      shared: sql<boolean>`${projectShare.memberId} is not null`,
+    })
     .from(member)
     .innerJoin(user, eq(user.id, member.userId))
-    .where(eq(member.organizationId, p.organizationId))
-    .orderBy(asc(user.name));
-  const shared = new Set(
-    (await db.select({ memberId: projectShare.memberId }).from(projectShare).where(eq(projectShare.projectId, p.id))).map((s) => s.memberId),
-  );
-  return members.filter((m) => !roleCan(m.role, { project: ["readAll"] })).map((m) => ({ ...m, shared: shared.has(m.memberId) }));
+    .leftJoin(projectShare, and(eq(projectShare.projectId, p.id), eq(projectShare.memberId, member.id)))
+    .where(
+      and(
+        eq(member.organizationId, p.organizationId),
+        notInArray(member.role, rolesThat("readAll")),
+        q.cursor ? sql`(${user.name}, ${member.id}) > (${q.cursor.key}, ${q.cursor.id})` : undefined,
+      ),
+    )
+    .orderBy(asc(user.name), asc(member.id))
+    .limit(q.limit + 1);
+  return pageOf(rows, q.limit, (r) => ({ key: r.name, id: r.memberId }));
+}
+
+/** The first page of shares (the project page and the answers of the share endpoints). */
+export async function sharesOf(p: ProjectRow, limit = DEFAULT_PAGE_LIMIT): Promise<ShareRow[]> {
+  return (await sharesPage(p, { limit })).items;
 }
 
 export async function shareProject(p: ProjectRow, memberId: string, byUserId: string): Promise<void> {

@@ -1,12 +1,21 @@
+import { rowId } from "@/lib/contracts/common";
+import { InstantPageQuery, queryOf } from "@/lib/contracts/pagination";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import { endpoint, json } from "@/lib/server/http";
-import { createProject, projectsForUser } from "@/lib/server/services/projects";
+import { createProject, projectsPage } from "@/lib/server/services/projects";
 
-/** The caller's projects, grouped per organisation. */
-export const GET = endpoint({ auth: "user" }, async ({ user }) => {
-  const groups = await projectsForUser(user.id);
+const ListQuery = InstantPageQuery.extend({ organizationId: rowId.optional() });
+
+/**
+ * One page of the caller's projects (`?limit=`, `?cursor=`, optionally `?organizationId=`), most
+ * recently changed first, grouped per organisation; `nextCursor` fetches the next page (null at the end).
+ */
+export const GET = endpoint({ auth: "user" }, async ({ user, context }) => {
+  const q = ListQuery.parse(queryOf(context.url));
+  const page = await projectsPage(user.id, q);
   return json({
-    organizations: groups.map((g) => ({
+    nextCursor: page.nextCursor,
+    organizations: page.organizations.map((g) => ({
       organizationId: g.membership.organizationId,
       organizationName: g.membership.organizationName,
       role: g.membership.role,

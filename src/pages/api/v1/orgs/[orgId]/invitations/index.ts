@@ -1,8 +1,18 @@
 import { z } from "zod";
 import { InvitationRequest } from "@/lib/contracts/auth";
 import { rowId } from "@/lib/contracts/common";
+import { InstantPageQuery, queryOf } from "@/lib/contracts/pagination";
 import { endpoint, json } from "@/lib/server/http";
-import { inviteMember, pendingInvitationsOf } from "@/lib/server/services/members";
+import { invitationsPage, inviteMember, pendingInvitationsOf } from "@/lib/server/services/members";
+
+/** One page (`?limit=`, `?cursor=`) of the pending invitations, oldest first (owners only). */
+export const GET = endpoint(
+  { auth: { org: "orgId", permission: "member:update" }, params: z.object({ orgId: rowId }) },
+  async ({ params, context }) => {
+    const page = await invitationsPage(params.orgId, InstantPageQuery.parse(queryOf(context.url)));
+    return json({ invitations: page.items, nextCursor: page.nextCursor });
+  },
+);
 
 /** Invites someone by e-mail with a role; the e-mail carries the link to join. */
 export const POST = endpoint(

@@ -1,21 +1,26 @@
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
+import { DEFAULT_PAGE_LIMIT, queryOf, TextPageQuery } from "@/lib/contracts/pagination";
 import { ShareRequest } from "@/lib/contracts/projects";
 import { endpoint, json } from "@/lib/server/http";
-import { shareProject, sharesOf } from "@/lib/server/services/projects";
+import { shareProject, sharesPage } from "@/lib/server/services/projects";
 
 const params = z.object({ id: rowId });
 
-/** Members who see only shared projects, and whether each sees this one. */
+/** One page (`?limit=`, `?cursor=`) of the members who see only shared projects, by name, and whether each sees this one. */
 export const GET = endpoint(
   { auth: { project: "id", permission: "project:share", action: "manage who sees this project" }, params },
-  async ({ project }) => json({ shares: await sharesOf(project) }),
+  async ({ project, context }) => {
+    const page = await sharesPage(project, TextPageQuery.parse(queryOf(context.url)));
+    return json({ shares: page.items, nextCursor: page.nextCursor });
+  },
 );
 
 export const POST = endpoint(
   { auth: { project: "id", permission: "project:share" }, params, body: ShareRequest },
   async ({ project, body, user }) => {
     await shareProject(project, body.memberId, user.id);
-    return json({ shares: await sharesOf(project) }, 201);
+    const page = await sharesPage(project, { limit: DEFAULT_PAGE_LIMIT });
+    return json({ shares: page.items, nextCursor: page.nextCursor }, 201);
   },
 );

@@ -1,0 +1,1 @@
+CREATE INDEX "project_organization_updated_idx" ON "project" USING btree ("organization_id","updated_at" DESC NULLS FIRST,"id");
