@@ -3,6 +3,7 @@
  * with the response body as UTF-8 (its buffer transferred, not copied) or { id, ok: false, error }
  * with the error's name, message and whether it is a RangeError. The build bundles this file into dist/server/calc-worker.mjs.
  */
+import { constants, setPriority } from "node:os";
 import { parentPort } from "node:worker_threads";
 import { isCalcTaskName, runCalcTask } from "./tasks";
 import type { WorkerReply, WorkerRequest } from "./protocol";
@@ -10,6 +11,14 @@ import type { WorkerReply, WorkerRequest } from "./protocol";
 const port = parentPort;
 if (!port) throw new Error("calc worker: must run in a worker thread");
 const encoder = new TextEncoder();
+
+// Lower this thread's scheduling priority (on Linux the nice value is per thread, so the main thread
+// keeps its own): when the cores are busy, health checks and page requests go before long calculations.
+try {
+  setPriority(constants.priority.PRIORITY_BELOW_NORMAL);
+} catch {
+  // not permitted here: run at the normal priority
+}
 
 port.on("message", (msg: WorkerRequest) => {
   let reply: WorkerReply;
