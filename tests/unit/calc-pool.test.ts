@@ -170,4 +170,21 @@ describe("calculation pool", () => {
       await own.close();
     }
   });
+
+  it("fails calls with a 500-type error, without restarting endlessly, when the worker file cannot start", async () => {
+    const err = console.error;
+    console.error = () => {};
+    const none = new CalcPool({ workers: 2, queueLimit: 2, workerFile: new URL("./fixtures/no-such-worker.mjs", import.meta.url) });
+    try {
+      const req = GlazingRequest.parse(glazings[0]);
+      const first = await Promise.allSettled([none.run("glazing", req), none.run("glazing", req), none.run("glazing", req)]);
+      expect(first.map((r) => r.status)).toEqual(["rejected", "rejected", "rejected"]);
+      for (const r of first) expect((r as PromiseRejectedResult).reason).not.toBeInstanceOf(RangeError);
+      expect(none.size).toBe(0);
+      await expect(none.run("glazing", req)).rejects.toThrow(/no calculation worker could start/);
+    } finally {
+      console.error = err;
+      await none.close();
+    }
+  });
 });

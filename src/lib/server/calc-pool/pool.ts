@@ -40,6 +40,8 @@ interface Slot {
   worker: Worker;
   job: Job | null;
   startedAt: number;
+  /** The entry module loaded and said so; a worker that never gets that far is not replaced. */
+  online: boolean;
 }
 
 /**
@@ -57,6 +59,8 @@ export class CalcPool {
   private readonly queue: Job[] = [];
   private nextId = 1;
   private closed = false;
+  /** Why no worker is left, once every one failed to start. */
+  private broken: Error | null = null;
   /** Smoothed duration of one calculation [ms], for Retry-After. */
   private meanMs = 500;
 
@@ -65,6 +69,7 @@ export class CalcPool {
     for (let i = 0; i < options.workers; i++) this.slots.push(this.spawn());
   }
 
+  /** Worker threads (fewer than asked for only when some could not start). */
   get size(): number {
     return this.slots.length;
   }
@@ -80,6 +85,7 @@ export class CalcPool {
   /** Runs a calculation in a worker; resolves with the response body (UTF-8 JSON). */
   run<K extends CalcTaskName>(task: K, input: CalcTasks[K]): Promise<Uint8Array> {
     if (this.closed) return Promise.reject(new Error("CalcPool: closed"));
+    if (this.broken) return Promise.reject(this.broken);
     const free = this.slots.find((s) => !s.job);
     if (!free && this.queue.length >= this.options.queueLimit) {
       const waves = (this.queue.length + this.slots.length) / this.slots.length;
@@ -108,9 +114,13 @@ export class CalcPool {
 
   private spawn(): Slot {
     const worker = new Worker(this.options.workerFile, { name: "paneray-calc" });
-    const slot: Slot = { worker, job: null, startedAt: 0 };
+    const slot: Slot = { worker, job: null, startedAt: 0, online: false };
     worker.unref(); // an idle pool does not keep the process alive
     worker.on("message", (reply: WorkerReply) => {
+      if ("ready" in reply) {
+        slot.online = true;
+        return;
+      }
       const job = slot.job;
       if (!job || job.id !== reply.id) return;
       this.finished(slot);
@@ -154,6 +164,16 @@ export class CalcPool {
     if (this.closed) return;
     slot.worker.removeAllListeners();
     void slot.worker.terminate();
+    if (!slot.online) {
+      // The entry module cannot start (a missing or broken file): replacing it would only fail again.
+      this.slots.splice(i, 1);
+      console.error("[calc] a calculation worker could not start:", err);
+      if (this.slots.length === 0) {
+        this.broken = new Error(`no calculation worker could start: ${err.message}`);
+        for (const waiting of this.queue.splice(0)) waiting.reject(this.broken);
+      }
+      return;
+    }
     const fresh = this.spawn();
     this.slots[i] = fresh;
     const next = this.queue.shift();

@@ -5,7 +5,7 @@ export interface WorkerRequest {
   input: unknown;
 }
 
-export type WorkerReply = { id: number; ok: true; bytes: Uint8Array } | { id: number; ok: false; error: WorkerError };
+export type WorkerReply = { ready: true } | { id: number; ok: true; bytes: Uint8Array } | { id: number; ok: false; error: WorkerError };
 
 /** An error thrown in the worker; `range` keeps `instanceof RangeError` (subclasses included) across the thread boundary. */
 export interface WorkerError {

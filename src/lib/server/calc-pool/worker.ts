@@ -1,5 +1,5 @@
 /**
- * Entry of a calculation worker thread: receives { id, task, input }, answers { id, ok: true, bytes }
+ * Entry of a calculation worker thread: says { ready: true } once loaded, then receives { id, task, input }, answers { id, ok: true, bytes }
  * with the response body as UTF-8 (its buffer transferred, not copied) or { id, ok: false, error }
  * with the error's name, message and whether it is a RangeError. The build bundles this file into dist/server/calc-worker.mjs.
  */
@@ -34,3 +34,6 @@ port.on("message", (msg: WorkerRequest) => {
   }
   port.postMessage(reply);
 });
+
+// Loaded and listening: the pool replaces this worker if it dies from now on.
+port.postMessage({ ready: true } satisfies WorkerReply);
