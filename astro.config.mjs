@@ -4,6 +4,8 @@ import node from "@astrojs/node";
 import react from "@astrojs/react";
 import tailwindcss from "@tailwindcss/vite";
 import { setBaseHeaders } from "./scripts/security-headers.mjs";
+import { build as esbuild } from "esbuild";
+import { fileURLToPath } from "node:url";
 
 /** The development server sets the same headers on every response as scripts/server.mjs does in production. */
 const baseHeaders = {
@@ -17,6 +19,32 @@ const baseHeaders = {
   },
 };
 
+/**
+ * The calculation worker runs in its own thread from a file of its own, which Vite's server bundle
+ * does not contain: after the build, bundle it with esbuild into dist/server/calc-worker.mjs (next to
+ * entry.mjs, where src/lib/server/calc-pool looks for it). Dev and tests run it from the sources.
+ */
+/** @type {import("astro").AstroIntegration} */
+const calcWorker = {
+  name: "paneray-calc-worker",
+  hooks: {
+    "astro:build:done": async ({ logger }) => {
+      const outfile = fileURLToPath(new URL("./dist/server/calc-worker.mjs", import.meta.url));
+      await esbuild({
+        entryPoints: [fileURLToPath(new URL("./src/lib/server/calc-pool/worker.ts", import.meta.url))],
+        outfile,
+        bundle: true,
+        platform: "node",
+        format: "esm",
+        target: "node20",
+        tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
+        logLevel: "warning",
+      });
+      logger.info(`calculation worker bundled into ${outfile}`);
+    },
+  },
+};
+
 /** Extra host names the server answers for (comma-separated), e.g. a production domain. */
 const extraHosts = (process.env.PANERAY_HOSTS ?? "")
   .split(",")
@@ -27,7 +55,7 @@ const extraHosts = (process.env.PANERAY_HOSTS ?? "")
 export default defineConfig({
   output: "server",
   adapter: node({ mode: "standalone" }),
-  integrations: [react()],
+  integrations: [react(), calcWorker],
   security: {
     // Without this the node adapter distrusts the Host header: request.url becomes
     // http://localhost/… and same-origin form posts are refused.

@@ -82,6 +82,24 @@ test("bad input: 400 naming the field; too much work: 413", async ({ request }) 
   expect((await tooMuch.json()).detail).toMatch(/limit/);
 });
 
+test("the work limit is six surfaces for a whole leap year, computed by the built server's worker pool", async ({ request }) => {
+  await signInApi(request);
+  const leapYear = (n: number) => ({
+    site,
+    from: "2028-01-01",
+    to: "2028-12-31",
+    surfaces: Array.from({ length: n }, (_, k) => ({ ...surface, name: `S${k + 1}`, azimuthDeg: k * 60 })),
+  });
+  const six = await request.post("/api/v1/calc/schedule", { data: leapYear(6), timeout: 25_000 });
+  expect(six.status()).toBe(200);
+  const body = await six.json();
+  expect(body.rowsPerSurface).toBe(8784);
+  expect(body.surfaces.map((s: { rows: unknown[] }) => s.rows.length)).toEqual(Array(6).fill(8784));
+  const seven = await request.post("/api/v1/calc/schedule", { data: leapYear(7) });
+  expect(seven.status()).toBe(413);
+  expect((await seven.json()).detail).toContain("61,488");
+});
+
 test("the project's sun page shows the sun path and a façade's year", async ({ page }) => {
   await signIn(page, demoUser("architect").email, DEMO_PASSWORD);
   await page.getByRole("link", { name: DEMO_PROJECTS[0].name }).click();

@@ -125,12 +125,6 @@ export const ScheduleRequest = z
 export type ScheduleRequest = z.output<typeof ScheduleRequest>;
 export type ScheduleRequestInput = z.input<typeof ScheduleRequest>;
 
-/** Estimated number of rows (surfaces × steps) before building anything, for the work limit. */
-export function estimatedScheduleRows(req: Pick<ScheduleRequest, "from" | "to" | "stepMinutes" | "surfaces">): number {
-  const days = (Date.parse(`${req.to}T00:00:00Z`) - Date.parse(`${req.from}T00:00:00Z`)) / 86_400_000 + 1;
-  return Math.ceil(days * (1440 / req.stepMinutes) + 1) * req.surfaces.length;
-}
-
 export interface ScheduleRow {
   time: string;
   sunAltitudeDeg: number;

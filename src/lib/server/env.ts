@@ -6,7 +6,16 @@
  */
 import { z } from "zod";
 
+/** The worker pool of the heavy calculations (read on its own too: the pool needs no database). */
+const CalcEnv = z.object({
+  /** Worker threads for the schedule and glazing calculations; unset: cores − 1 (at least 1); 0: on the main thread. */
+  CALC_WORKERS: z.coerce.number().int("CALC_WORKERS must be a whole number").min(0).max(64).optional(),
+  /** Calculations that may wait for a free worker; past it the answer is 503 with Retry-After. */
+  CALC_QUEUE_LIMIT: z.coerce.number().int("CALC_QUEUE_LIMIT must be a whole number").min(0).max(10_000).default(16),
+});
+
 const Env = z.object({
+  ...CalcEnv.shape,
   DATABASE_URL: z.string().min(1, "DATABASE_URL is required (postgres://…)"),
   BETTER_AUTH_URL: z.url().default("http://127.0.0.1:4321"),
   BETTER_AUTH_SECRET: z.string().min(32).optional(),
@@ -33,4 +42,19 @@ export function serverEnv(): ServerEnv {
     cached = parsed.data;
   }
   return cached;
+}
+
+let cachedCalc: z.infer<typeof CalcEnv> | undefined;
+
+/** CALC_WORKERS and CALC_QUEUE_LIMIT, checked (they are also part of serverEnv()). */
+export function calcEnv(): z.infer<typeof CalcEnv> {
+  if (!cachedCalc) {
+    const parsed = CalcEnv.safeParse(process.env);
+    if (!parsed.success) {
+      const msg = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+      throw new Error(`Paneray configuration error: ${msg}`);
+    }
+    cachedCalc = parsed.data;
+  }
+  return cachedCalc;
 }

@@ -1,6 +1,6 @@
 import { GlazingRequest } from "@/lib/contracts/glazing";
-import { calculateGlazing } from "@/lib/calc/glazing";
-import { endpoint, json } from "@/lib/server/http";
+import { calcResponse } from "@/lib/server/calc-pool";
+import { endpoint } from "@/lib/server/http";
 
 /** Solar optics at each angle, hemispherical values, g-values and the U-value of a make-up. */
 export const POST = endpoint(
@@ -12,5 +12,6 @@ export const POST = endpoint(
     // The physics core refuses combinations the schema cannot see (e.g. measured values no pane can have).
     engineErrorsField: "layers",
   },
-  ({ body }) => json(calculateGlazing(body)),
+  // Computed in the worker pool (503 with Retry-After when its queue is full).
+  ({ body }) => calcResponse("glazing", body),
 );

@@ -1,6 +1,7 @@
-import { estimatedScheduleRows, MAX_SCHEDULE_ROWS, ScheduleRequest } from "@/lib/contracts/schedule";
-import { scheduleResponse } from "@/lib/calc/schedule-response";
-import { endpoint, HttpError, json } from "@/lib/server/http";
+import { MAX_SCHEDULE_ROWS, ScheduleRequest } from "@/lib/contracts/schedule";
+import { scheduleRowCount } from "@/lib/calc/schedule-rows";
+import { calcResponse } from "@/lib/server/calc-pool";
+import { endpoint, HttpError } from "@/lib/server/http";
 
 /** Hour-by-hour sun, irradiance and transmitted solar energy for each surface of a site. */
 export const POST = endpoint(
@@ -12,7 +13,7 @@ export const POST = endpoint(
     engineErrorsField: "(body)",
   },
   ({ body }) => {
-    const rows = estimatedScheduleRows(body);
+    const rows = scheduleRowCount(body, MAX_SCHEDULE_ROWS);
     if (rows > MAX_SCHEDULE_ROWS) {
       throw new HttpError(
         413,
@@ -20,6 +21,7 @@ export const POST = endpoint(
         { errors: [{ field: "surfaces", message: "too much work for one request" }] },
       );
     }
-    return json(scheduleResponse(body));
+    // Computed in the worker pool (503 with Retry-After when its queue is full).
+    return calcResponse("schedule", body);
   },
 );

@@ -1,0 +1,27 @@
+/**
+ * The heavy calculations the API runs, by name: each takes a request already validated by its
+ * contract and returns the response body as JSON text. The same functions run in the worker
+ * threads of the pool and, with the pool switched off, on the main thread.
+ */
+import type { GlazingRequest } from "@/lib/contracts/glazing";
+import type { ScheduleRequest } from "@/lib/contracts/schedule";
+import { calculateGlazing } from "@/lib/calc/glazing";
+import { scheduleResponse } from "@/lib/calc/schedule-response";
+
+export interface CalcTasks {
+  glazing: GlazingRequest;
+  schedule: ScheduleRequest;
+}
+export type CalcTaskName = keyof CalcTasks;
+
+const TASKS: { [K in CalcTaskName]: (input: CalcTasks[K]) => unknown } = {
+  glazing: calculateGlazing,
+  schedule: (req) => scheduleResponse(req),
+};
+
+export const isCalcTaskName = (name: unknown): name is CalcTaskName => typeof name === "string" && Object.hasOwn(TASKS, name);
+
+/** Runs one calculation and serialises its result (the exact text `json(…)` would send). */
+export function runCalcTask<K extends CalcTaskName>(name: K, input: CalcTasks[K]): string {
+  return JSON.stringify(TASKS[name](input));
+}
