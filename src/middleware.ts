@@ -1,6 +1,7 @@
 import { defineMiddleware } from "astro:middleware";
 import { auth } from "@/lib/server/auth";
 import { problem } from "@/lib/server/http";
+import "@/lib/server/client-address"; // records each request's socket address from the first request on
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];

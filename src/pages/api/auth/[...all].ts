@@ -1,21 +1,18 @@
 import type { APIRoute } from "astro";
-import { auth, CLIENT_IP_HEADER } from "@/lib/server/auth";
+import { handleAuthRequest } from "@/lib/server/auth-gate";
+import { clientAddressOf } from "@/lib/server/client-address";
 
 /**
- * better-auth's own routes. The socket's address is passed on in a header of our own (any value the
- * client sent under that name is replaced), so that rate limits apply per client, not to everyone at once.
+ * better-auth's routes, behind the gate of lib/server/auth-gate.ts (allowlist, rate limits). The client
+ * address is the socket's, or a trusted proxy's forwarded value (lib/server/client-address.ts).
  * Not written with `endpoint(…)`: better-auth reads the request and writes its own answers and errors.
  */
-export const ALL: APIRoute = ({ request, clientAddress }) => {
-  const headers = new Headers(request.headers);
-  let ip = "";
+export const ALL: APIRoute = (context) => {
+  let astroAddress: string | undefined;
   try {
-    ip = clientAddress;
+    astroAddress = context.clientAddress;
   } catch {
     /* no socket address (e.g. prerendering) */
   }
-  if (ip) headers.set(CLIENT_IP_HEADER, ip);
-  else headers.delete(CLIENT_IP_HEADER);
-  const forwarded = new Request(request, { headers });
-  return auth.handler(forwarded);
+  return handleAuthRequest(context.request, { clientAddress: clientAddressOf(context.request, astroAddress) });
 };

@@ -1,11 +1,28 @@
 import { SignUpRequest } from "@/lib/contracts/auth";
+import { tooManyRequests } from "@/lib/server/auth-gate";
+import { clientAddressOf } from "@/lib/server/client-address";
 import { endpoint, json } from "@/lib/server/http";
-import { signUp } from "@/lib/server/services/accounts";
+import { AUTH_LIMITS, hit, rateLimitsEnabled } from "@/lib/server/rate-limit";
+import { SIGN_UP_PENDING_MESSAGE, signUp } from "@/lib/server/services/accounts";
 
-/** Creates an account (and its organisation, or joins an invitation's) and signs it in. */
-export const POST = endpoint({ auth: "anonymous", body: SignUpRequest, maxBytes: 16 * 1024 }, async ({ body }) => {
-  const { headers, userId, organizationId } = await signUp(body);
-  const res = json({ userId, organizationId }, 201);
-  for (const c of headers.getSetCookie()) res.headers.append("set-cookie", c);
+/**
+ * Creates an account. Without an invitation: 202 and a confirmation mail (the same answer whether or not the
+ * address already has an account). With an invitation: 201, the new member is signed in (session cookie).
+ */
+export const POST = endpoint({ auth: "anonymous", body: SignUpRequest, maxBytes: 16 * 1024 }, async ({ body, request, context }) => {
+  if (rateLimitsEnabled()) {
+    let astroAddress: string | undefined;
+    try {
+      astroAddress = context.clientAddress;
+    } catch {
+      /* no socket address */
+    }
+    const limit = await hit(AUTH_LIMITS.signUp, clientAddressOf(request, astroAddress));
+    if (!limit.allowed) return tooManyRequests(limit, "Too many sign-ups from this address; wait a while and try again");
+  }
+  const result = await signUp(body);
+  if (result.kind === "pending-verification") return json({ status: "verification-sent", message: SIGN_UP_PENDING_MESSAGE }, 202);
+  const res = json({ userId: result.userId, organizationId: result.organizationId }, 201);
+  for (const c of result.headers.getSetCookie()) res.headers.append("set-cookie", c);
   return res;
 });
