@@ -155,7 +155,7 @@ describe("client address and per-address limits", () => {
         (await postSignUp({ name: "N", email: uniqueEmail("su"), password: "long password", organizationName: `Firm ${i}` }, from)).status,
       );
     }
-    expect(statuses.slice(0, AUTH_LIMITS.signUp.max).every((s) => s === 202)).toBe(true);
+    expect(statuses.slice(0, AUTH_LIMITS.signUp.max).every((s) => s === 201)).toBe(true);
     expect(statuses.at(-1)).toBe(429);
   }, 60_000);
 });
@@ -228,7 +228,7 @@ describe("sign-up and e-mail confirmation", () => {
     const fresh = await postSignUp({ name: "New", email: uniqueEmail("fresh"), password: "long password", organizationName: "Fresh firm" });
     const known = await postSignUp({ name: "Again", email: o.email, password: "other password", organizationName: "Other firm" });
     expect(known.status).toBe(fresh.status);
-    expect(fresh.status).toBe(202);
+    expect(fresh.status).toBe(201);
     expect(await known.text()).toBe(await fresh.text());
     expect(known.headers.getSetCookie()).toEqual([]);
     expect((await mailTo(o.email, /tried to create a Paneray account/)).subject).toMatch(/your address/);

@@ -6,7 +6,7 @@ import { AUTH_LIMITS, hit, rateLimitsEnabled } from "@/lib/server/rate-limit";
 import { SIGN_UP_PENDING_MESSAGE, signUp } from "@/lib/server/services/accounts";
 
 /**
- * Creates an account. Without an invitation: 202 and a confirmation mail (the same answer whether or not the
+ * Creates an account. Without an invitation: 201 and a confirmation mail (the same answer whether or not the
  * address already has an account). With an invitation: 201, the new member is signed in (session cookie).
  */
 export const POST = endpoint({ auth: "anonymous", body: SignUpRequest, maxBytes: 16 * 1024 }, async ({ body, request, context }) => {
@@ -21,7 +21,7 @@ export const POST = endpoint({ auth: "anonymous", body: SignUpRequest, maxBytes:
     if (!limit.allowed) return tooManyRequests(limit, "Too many sign-ups from this address; wait a while and try again");
   }
   const result = await signUp(body);
-  if (result.kind === "pending-verification") return json({ status: "verification-sent", message: SIGN_UP_PENDING_MESSAGE }, 202);
+  if (result.kind === "pending-verification") return json({ status: "verification-sent", message: SIGN_UP_PENDING_MESSAGE }, 201);
   const res = json({ userId: result.userId, organizationId: result.organizationId }, 201);
   for (const c of result.headers.getSetCookie()) res.headers.append("set-cookie", c);
   return res;
