@@ -36,6 +36,8 @@ export async function run(): Promise<void> {
   const k = median(known);
   const u = median(unknown);
   const ratio = Math.max(k, u) / Math.min(k, u);
-  console.log(`password-reset request, median of 20: known address ${k.toFixed(1)} ms, unknown address ${u.toFixed(1)} ms, ratio ${ratio.toFixed(2)}`);
+  console.log(
+    `password-reset request, median of 20: known address ${k.toFixed(1)} ms, unknown address ${u.toFixed(1)} ms, ratio ${ratio.toFixed(2)}`,
+  );
   console.log(`target: ratio ≤ 1.5 → ${ratio <= 1.5 ? "PASS" : "MISS"}`);
 }
