@@ -5,6 +5,7 @@
  */
 import { auth, CLIENT_IP_HEADER } from "./auth";
 import { matchAuthRoute } from "./auth-routes";
+import { clientAddressOf } from "./client-address";
 import { problem } from "./http";
 import { AUTH_LIMITS, hit, peek, rateLimitsEnabled, resetLimit, type LimitResult } from "./rate-limit";
 
@@ -88,4 +89,14 @@ export async function handleAuthRequest(request: Request, opts: AuthGateOptions)
     }
   }
   return forward();
+}
+
+/**
+ * Counts a sign-up from the request's client address; answers 429 past the limit, else null. `astroAddress` is
+ * Astro's clientAddress (used only when no socket address was recorded, see clientAddressOf).
+ */
+export async function limitSignUp(request: Request, astroAddress: string | undefined, rateLimits = rateLimitsEnabled()): Promise<Response | null> {
+  if (!rateLimits) return null;
+  const limit = await hit(AUTH_LIMITS.signUp, clientAddressOf(request, astroAddress));
+  return limit.allowed ? null : tooManyRequests(limit, "Too many sign-ups from this address; wait a while and try again");
 }

@@ -1,8 +1,6 @@
 import { SignUpRequest } from "@/lib/contracts/auth";
-import { tooManyRequests } from "@/lib/server/auth-gate";
-import { clientAddressOf } from "@/lib/server/client-address";
+import { limitSignUp } from "@/lib/server/auth-gate";
 import { endpoint, json } from "@/lib/server/http";
-import { AUTH_LIMITS, hit, rateLimitsEnabled } from "@/lib/server/rate-limit";
 import { SIGN_UP_PENDING_MESSAGE, signUp } from "@/lib/server/services/accounts";
 
 /**
@@ -10,16 +8,14 @@ import { SIGN_UP_PENDING_MESSAGE, signUp } from "@/lib/server/services/accounts"
  * address already has an account). With an invitation: 201, the new member is signed in (session cookie).
  */
 export const POST = endpoint({ auth: "anonymous", body: SignUpRequest, maxBytes: 16 * 1024 }, async ({ body, request, context }) => {
-  if (rateLimitsEnabled()) {
-    let astroAddress: string | undefined;
-    try {
-      astroAddress = context.clientAddress;
-    } catch {
-      /* no socket address */
-    }
-    const limit = await hit(AUTH_LIMITS.signUp, clientAddressOf(request, astroAddress));
-    if (!limit.allowed) return tooManyRequests(limit, "Too many sign-ups from this address; wait a while and try again");
+  let astroAddress: string | undefined;
+  try {
+    astroAddress = context.clientAddress;
+  } catch {
+    /* no socket address */
   }
+  const limited = await limitSignUp(request, astroAddress);
+  if (limited) return limited;
   const result = await signUp(body);
   if (result.kind === "pending-verification") return json({ status: "verification-sent", message: SIGN_UP_PENDING_MESSAGE }, 201);
   const res = json({ userId: result.userId, organizationId: result.organizationId }, 201);
