@@ -4,6 +4,7 @@ import { problem, unavailable } from "@/lib/server/http";
 import { serverEnv } from "@/lib/server/env";
 import { crossSiteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
 import { isDatabaseUnavailable } from "@/lib/server/db/unavailable";
+import "@/lib/server/client-address"; // records each request's socket address from the first request on
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];

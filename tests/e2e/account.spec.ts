@@ -1,6 +1,6 @@
 // Sign-up founds an organisation; password reset by e-mail; a new project through the form.
 import { expect, test } from "@playwright/test";
-import { signIn, uniqueEmail, waitForMail } from "./helpers";
+import { confirmEmail, signIn, uniqueEmail, waitForMail } from "./helpers";
 
 test("sign-up creates an organisation with the new user as owner, who creates a project", async ({ page }) => {
   const email = uniqueEmail("founder");
@@ -13,6 +13,9 @@ test("sign-up creates an organisation with the new user as owner, who creates a 
   await expect(page.locator('[data-field="password"]')).toContainText("at least 8");
   await page.getByLabel("Password").fill("a proper password");
   await page.getByRole("button", { name: "Create account" }).click();
+  // The account is usable once the address is confirmed by the mailed link (which signs in).
+  await expect(page.getByRole("status")).toContainText("Check your inbox");
+  await confirmEmail(page, email);
   await expect(page).toHaveURL(/\/dashboard$/);
   await expect(page.getByRole("heading", { name: "Brask Envelope Studio" })).toBeVisible();
   await expect(page.getByTestId("role-badge")).toHaveText("Owner");
@@ -51,6 +54,7 @@ test("password reset by e-mail", async ({ page, request }) => {
       await request.post("/api/v1/signup", { data: { name: "Pim Forde", email, password: "old password 1", organizationName: "Forde Glass" } })
     ).status(),
   ).toBe(201);
+  await confirmEmail(request, email);
 
   await page.goto("/signin");
   await page.getByRole("link", { name: "Forgot your password?" }).click();
@@ -58,7 +62,7 @@ test("password reset by e-mail", async ({ page, request }) => {
   await page.getByRole("button", { name: "Send me a reset link" }).click();
   await expect(page.getByRole("status")).toContainText("If an account exists");
 
-  const { mail, link } = await waitForMail(email);
+  const { mail, link } = await waitForMail(email, { subject: /reset/i });
   expect(mail.subject).toMatch(/reset/i);
   await page.goto(link);
   await expect(page).toHaveURL(/\/reset-password\?token=/);

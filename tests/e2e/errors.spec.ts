@@ -1,7 +1,7 @@
 // Unknown addresses and refused pages answer with Paneray's own not-found and forbidden pages,
 // the right status and its reason phrase, and a way back.
 import { expect, test } from "@playwright/test";
-import { DEMO_PASSWORD, demoUser, signIn, uniqueEmail } from "./helpers";
+import { confirmEmail, DEMO_PASSWORD, demoUser, signIn, uniqueEmail } from "./helpers";
 
 test("an unknown address answers 404 Not Found with the branded page and a link home", async ({ page }) => {
   const res = await page.goto("/no-such-page/anywhere");
@@ -37,11 +37,14 @@ test("a client opening the new-project page gets 403 Forbidden naming the role",
 test("a project of another organisation answers 404 Not Found with the branded page", async ({ page, playwright }) => {
   const baseURL = test.info().project.use.baseURL!;
   const stranger = await playwright.request.newContext({ baseURL, extraHTTPHeaders: { origin: new URL(baseURL).origin } });
+  const strangerEmail = uniqueEmail("stranger");
   const signup = await stranger.post("/api/v1/signup", {
-    data: { name: "Rui Stranger", email: uniqueEmail("stranger"), password: "stranger password", organizationName: "Elsewhere Glass" },
+    data: { name: "Rui Stranger", email: strangerEmail, password: "stranger password", organizationName: "Elsewhere Glass" },
   });
   expect(signup.status()).toBe(201);
-  const { organizationId } = await signup.json();
+  await confirmEmail(stranger, strangerEmail);
+  const { memberships } = (await (await stranger.get("/api/v1/me")).json()) as { memberships: { organizationId: string }[] };
+  const { organizationId } = memberships[0]!;
   const created = await stranger.post("/api/v1/projects", {
     data: { organizationId, name: "Private tower", siteName: "Plot 1", latitudeDeg: 38.7, longitudeDeg: -9.1, timeZone: "Europe/Lisbon" },
   });

@@ -1,4 +1,4 @@
-import { expect, type Page } from "@playwright/test";
+import { expect, type APIRequestContext, type Page } from "@playwright/test";
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { simpleParser, type ParsedMail } from "mailparser";
@@ -17,10 +17,14 @@ let n = 0;
 export const uniqueEmail = (tag: string) => `${tag}-${Date.now().toString(36)}-${++n}@e2e.example`;
 
 /**
- * Waits for a message to `to` in the SMTP fake's folder (MAIL_DIR) and returns it parsed,
- * with the first link of its text part.
+ * Waits for a message to `to` (and, if given, with a subject matching `subject`) in the SMTP fake's folder
+ * (MAIL_DIR) and returns the newest such message parsed, with the first link of its text part.
  */
-export async function waitForMail(to: string, timeoutMs = 10_000): Promise<{ mail: ParsedMail; link: string }> {
+export async function waitForMail(
+  to: string,
+  options: number | { subject?: RegExp; timeoutMs?: number } = {},
+): Promise<{ mail: ParsedMail; link: string }> {
+  const { subject, timeoutMs = 10_000 } = typeof options === "number" ? { timeoutMs: options } : options;
   const dir = process.env.MAIL_DIR;
   if (!dir) throw new Error("MAIL_DIR is not set: run the tests through npm test");
   const until = Date.now() + timeoutMs;
@@ -34,7 +38,7 @@ export async function waitForMail(to: string, timeoutMs = 10_000): Promise<{ mai
         .flat()
         .flatMap((a) => a?.value ?? [])
         .map((v) => v.address?.toLowerCase());
-      if (rcpt.includes(to.toLowerCase())) {
+      if (rcpt.includes(to.toLowerCase()) && (!subject || subject.test(mail.subject ?? ""))) {
         const link = /https?:\/\/\S+/.exec(mail.text ?? "")?.[0];
         if (!link) throw new Error(`mail to ${to} has no link`);
         return { mail, link };
@@ -43,4 +47,16 @@ export async function waitForMail(to: string, timeoutMs = 10_000): Promise<{ mai
     await new Promise((r) => setTimeout(r, 200));
   }
   throw new Error(`no mail to ${to} within ${timeoutMs} ms`);
+}
+
+export const CONFIRMATION_SUBJECT = /Confirm your e-mail address/;
+
+/**
+ * Follows the link of the sign-up confirmation mail to `email`: in a page (which ends signed in on the
+ * dashboard) or through an API request context (whose cookies then carry the session).
+ */
+export async function confirmEmail(via: Page | APIRequestContext, email: string) {
+  const { link } = await waitForMail(email, { subject: CONFIRMATION_SUBJECT });
+  if ("goto" in via) await via.goto(link);
+  else expect((await via.get(link)).ok()).toBe(true);
 }

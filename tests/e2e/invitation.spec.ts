@@ -1,7 +1,7 @@
 // Invitation by e-mail: the owner invites, the message arrives in the SMTP fake, its link lets the invitee
 // join with the invited role.
 import { expect, test } from "@playwright/test";
-import { DEMO_ORGANIZATION, DEMO_PASSWORD, demoUser, signIn, uniqueEmail, waitForMail } from "./helpers";
+import { confirmEmail, DEMO_ORGANIZATION, DEMO_PASSWORD, demoUser, signIn, uniqueEmail, waitForMail } from "./helpers";
 
 test("an invited architect joins through the e-mailed link with the invited role", async ({ page, browser }) => {
   const invitee = uniqueEmail("new-architect");
@@ -13,7 +13,7 @@ test("an invited architect joins through the e-mailed link with the invited role
   await expect(page.getByRole("status")).toContainText(`Invitation sent to ${invitee}`);
   await expect(page.getByTestId("invitations")).toContainText(invitee);
 
-  const { mail, link } = await waitForMail(invitee);
+  const { mail, link } = await waitForMail(invitee, { subject: /invited you/ });
   expect(mail.subject).toContain(DEMO_ORGANIZATION.name);
   expect(mail.text).toContain("as Architect");
   expect(link).toMatch(/\/invitations\/[A-Za-z0-9_-]+$/);
@@ -49,6 +49,7 @@ test("an existing user accepts an invitation after signing in", async ({ page, b
     data: { name: "Ravi Lund", email, password: "freelance pw 1", organizationName: "Lund Daylighting" },
   });
   expect(signup.status()).toBe(201);
+  await confirmEmail(request, email);
 
   // …is invited as a consultant.
   await signIn(page, demoUser("owner").email, DEMO_PASSWORD);
@@ -57,7 +58,7 @@ test("an existing user accepts an invitation after signing in", async ({ page, b
   await page.getByLabel("Role", { exact: true }).selectOption("consultant");
   await page.getByRole("button", { name: "Send invitation" }).click();
   await expect(page.getByRole("status")).toContainText("Invitation sent");
-  const { link } = await waitForMail(email);
+  const { link } = await waitForMail(email, { subject: /invited you/ });
 
   const ctx = await browser.newContext();
   const p2 = await ctx.newPage();

@@ -1,15 +1,18 @@
 import { expect, test } from "@playwright/test";
-import { uniqueEmail } from "./helpers";
+import { confirmEmail, uniqueEmail } from "./helpers";
 
 test("the dashboard shows 50 projects per organisation and a link to the next ones; a NUL name is refused", async ({ page, baseURL }) => {
   test.setTimeout(90_000);
   const headers = { origin: baseURL!, "content-type": "application/json" };
+  const email = uniqueEmail("paging");
   const signup = await page.request.post("/api/v1/signup", {
     headers,
-    data: { name: "Paging Owner", email: uniqueEmail("paging"), password: "long password", organizationName: "Paging Studio" },
+    data: { name: "Paging Owner", email, password: "long password", organizationName: "Paging Studio" },
   });
   expect(signup.status()).toBe(201);
-  const { organizationId } = (await signup.json()) as { organizationId: string };
+  await confirmEmail(page, email); // the confirmation link signs the new owner in
+  const { memberships } = (await (await page.request.get("/api/v1/me")).json()) as { memberships: { organizationId: string }[] };
+  const { organizationId } = memberships[0]!;
   const project = (name: string) => ({
     organizationId,
     name,

@@ -95,7 +95,10 @@ describe("services throw domain errors", () => {
     expect((last as ConflictError).errors).toEqual([{ field: "role", message: "last owner" }]);
     const invitationId = (await db.select().from(invitation).where(eq(invitation.email, email)))[0]!.id;
     expect(await rejection(acceptInvitation(c.userId, email, invitationId))).toBeInstanceOf(ConflictError);
-    const dup = await rejection(signUp({ name: "Again", email: o.email, password: "long password", organizationName: "Dup" }));
+    const known = await newOwner("known");
+    await inviteMember(o.headers, o.organizationId, known.email, "client");
+    const knownInvitation = (await db.select().from(invitation).where(eq(invitation.email, known.email)))[0]!.id;
+    const dup = await rejection(signUp({ name: "Again", email: known.email, password: "long password", invitationId: knownInvitation }));
     expect(dup).toBeInstanceOf(ConflictError);
     expect(await rejection(cancelInvitation(o.organizationId, "no-such-invitation"))).toBeInstanceOf(NotFoundError);
   });

@@ -25,7 +25,11 @@ export default function SignInForm({ next, email }: { next?: string; email?: str
     const { error } = await authClient.signIn.email({ email: v.email, password: v.password });
     if (error) {
       setFailure(
-        error.status === 401 || error.code === "INVALID_EMAIL_OR_PASSWORD" ? "Wrong e-mail or password." : (error.message ?? "Sign-in failed."),
+        error.status === 401 || error.code === "INVALID_EMAIL_OR_PASSWORD"
+          ? "Wrong e-mail or password."
+          : error.code === "EMAIL_NOT_VERIFIED"
+            ? "Confirm your e-mail address first: we sent you a new link."
+            : (error.message ?? "Sign-in failed."),
       );
       return;
     }

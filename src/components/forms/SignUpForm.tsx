@@ -16,6 +16,7 @@ interface Props {
 export default function SignUpForm({ invitation }: Props) {
   const hydrated = useHydrated();
   const [failure, setFailure] = useState<string | null>(null);
+  const [sent, setSent] = useState<string | null>(null);
   const { register, handleSubmit, formState, setError } = useForm<Values>({
     resolver: zodResolver(SignUpRequest) as never,
     defaultValues: {
@@ -29,14 +30,16 @@ export default function SignUpForm({ invitation }: Props) {
   const onSubmit = handleSubmit(async (v) => {
     setFailure(null);
     try {
-      await api("POST", "/api/v1/signup", invitation ? { ...v, organizationName: undefined } : v);
-      window.location.assign("/dashboard");
+      const res = await api<{ status?: string; message?: string }>("POST", "/api/v1/signup", invitation ? { ...v, organizationName: undefined } : v);
+      if (res?.status === "verification-sent") setSent(res.message ?? "Check your inbox to confirm your e-mail address.");
+      else window.location.assign("/dashboard");
     } catch (e) {
       const err = e instanceof ApiError ? e : new ApiError(0, String(e));
       if (!applyServerErrors(err.errors, ["name", "email", "password", "organizationName"], setError)) setFailure(err.message);
       else setFailure(err.message);
     }
   });
+  if (sent) return <FormMessage kind="ok">{sent}</FormMessage>;
   return (
     <form method="post" onSubmit={onSubmit} className="space-y-4" noValidate>
       {failure && <FormMessage kind="error">{failure}</FormMessage>}

@@ -5,7 +5,7 @@
 import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins";
-import { asc, eq } from "drizzle-orm";
+import { and, asc, eq, like, ne } from "drizzle-orm";
 import { ac, roles, ROLE_LABELS, isRoleName } from "@/lib/auth/roles";
 import { db } from "./db/client";
 import * as schema from "./db/schema";
@@ -16,7 +16,18 @@ const env = serverEnv();
 
 export const INVITATION_TTL_SECONDS = 7 * 24 * 3600;
 
-/** Header through which the auth route hands the socket's client address to better-auth. */
+/** How long the link of a sign-up confirmation mail stays valid. */
+export const EMAIL_VERIFICATION_TTL_SECONDS = 24 * 3600;
+
+/**
+ * Sends a mail without holding up the request: the answer must not take longer for a known address than
+ * for an unknown one. Failures are logged.
+ */
+export function sendInBackground(what: string, task: () => Promise<void>): void {
+  void task().catch((err: unknown) => console.error(`[mail] ${what} failed:`, (err as Error)?.message ?? err));
+}
+
+/** Header through which the auth route hands the client address to better-auth (any value the client sent is replaced). */
 export const CLIENT_IP_HEADER = "x-paneray-client-ip";
 
 export const auth = betterAuth({
@@ -31,27 +42,68 @@ export const auth = betterAuth({
   // Failures that are not better-auth's own refusals reach our route (src/pages/api/auth/[...all].ts),
   // which answers a lost database 503 with Retry-After instead of a bare 500.
   onAPIError: { throw: true },
-  rateLimit: { enabled: env.AUTH_RATE_LIMIT !== "off" },
+  // Limits are counted in PostgreSQL by lib/server/auth-gate.ts and the sign-up endpoint (shared by all servers).
+  rateLimit: { enabled: false },
   advanced: { ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] } },
   emailAndPassword: {
     enabled: true,
     minPasswordLength: 8,
+    // Accounts are created by Paneray's sign-up (services/accounts.ts) and must confirm their address first.
+    disableSignUp: true,
+    requireEmailVerification: true,
     resetPasswordTokenExpiresIn: 3600,
     revokeSessionsOnPasswordReset: true,
-    async sendResetPassword({ user, url }) {
-      await sendMail(
-        actionMail({
-          to: user.email,
-          subject: "Reset your Paneray password",
-          lines: [
-            `Hello ${user.name},`,
-            "Someone (we hope you) asked to reset the password of your Paneray account.",
-            "The link below is valid for one hour. If you did not ask for it, ignore this message.",
-          ],
-          actionLabel: "Choose a new password",
-          url,
-        }),
+    sendResetPassword({ user, url, token }) {
+      sendInBackground("password-reset mail", async () => {
+        // Only the newest link works: earlier reset tokens of this user are dropped.
+        await db
+          .delete(schema.verification)
+          .where(
+            and(
+              eq(schema.verification.value, user.id),
+              like(schema.verification.identifier, "reset-password:%"),
+              ne(schema.verification.identifier, `reset-password:${token}`),
+            ),
+          );
+        await sendMail(
+          actionMail({
+            to: user.email,
+            subject: "Reset your Paneray password",
+            lines: [
+              `Hello ${user.name},`,
+              "Someone (we hope you) asked to reset the password of your Paneray account.",
+              "The link below is valid for one hour. If you did not ask for it, ignore this message.",
+            ],
+            actionLabel: "Choose a new password",
+            url,
+          }),
+        );
+      });
+      return Promise.resolve();
+    },
+  },
+  emailVerification: {
+    sendOnSignUp: false,
+    sendOnSignIn: true,
+    autoSignInAfterVerification: true,
+    expiresIn: EMAIL_VERIFICATION_TTL_SECONDS,
+    sendVerificationEmail({ user, url }) {
+      sendInBackground("address confirmation mail", () =>
+        sendMail(
+          actionMail({
+            to: user.email,
+            subject: "Confirm your e-mail address for Paneray",
+            lines: [
+              `Hello ${user.name},`,
+              "Someone (we hope you) created a Paneray account with this address.",
+              "Confirm the address to start using the account; the link is valid for 24 hours. If it was not you, ignore this message.",
+            ],
+            actionLabel: "Confirm my address",
+            url,
+          }),
+        ),
       );
+      return Promise.resolve();
     },
   },
   databaseHooks: {
@@ -75,6 +127,8 @@ export const auth = betterAuth({
       ac,
       roles,
       creatorRole: "owner",
+      // Organisations are founded by Paneray's sign-up only.
+      allowUserToCreateOrganization: false,
       invitationExpiresIn: INVITATION_TTL_SECONDS,
       cancelPendingInvitationsOnReInvite: true,
       async sendInvitationEmail({ id, email, role, organization: org, inviter }) {

@@ -26,6 +26,11 @@ const Env = z.object({
   MAIL_FROM: z.string().default("Paneray <no-reply@paneray.invalid>"),
   /** "off" switches better-auth's per-client rate limits off (the browser tests sign in often); anything else keeps them. */
   AUTH_RATE_LIMIT: z.string().default("on"),
+  /**
+   * Reverse proxies whose X-Forwarded-For / Forwarded headers are believed (comma-separated IP addresses or
+   * CIDR blocks, e.g. "10.0.0.0/8, ::1"). Default none: the client address is the socket's.
+   */
+  TRUSTED_PROXIES: z.string().default(""),
 });
 
 export type ServerEnv = z.infer<typeof Env>;

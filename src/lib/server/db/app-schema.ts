@@ -106,3 +106,14 @@ export const projectShareRelations = relations(projectShare, ({ one }) => ({
 
 export type Project = typeof project.$inferSelect;
 export type Facade = typeof facade.$inferSelect;
+
+/**
+ * Fixed-window counters of the authentication limits (attempts per client address, failed sign-ins per
+ * account), kept in the database so that every web server counts the same attempts.
+ */
+export const authRateLimit = pgTable("auth_rate_limit", {
+  /** What is counted and for whom, e.g. "sign-in:ip:203.0.113.7" or "sign-in-failed:email:a@b.example". */
+  key: text("key").primaryKey(),
+  count: integer("count").notNull(),
+  windowStartedAt: timestamp("window_started_at", { withTimezone: true }).notNull(),
+});

@@ -3,7 +3,7 @@ import { DEFAULT_PAGE_LIMIT, pageOf, type Cursor, type Page } from "@/lib/contra
 import { auth } from "@/lib/server/auth";
 import { db } from "@/lib/server/db/client";
 import { invitation, member, organization, user } from "@/lib/server/db/schema";
-import { ConflictError, fieldError, ForbiddenError, NotFoundError } from "@/lib/server/errors";
+import { ConflictError, fieldError, ForbiddenError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { isRoleName, type RoleName } from "@/lib/auth/roles";
 
 export interface MemberView {
@@ -93,6 +93,7 @@ export async function pendingInvitationsOf(organizationId: string, limit = DEFAU
 
 /** Sends an invitation e-mail (through better-auth, which records it and calls our mailer). */
 export async function inviteMember(headers: Headers, organizationId: string, email: string, role: RoleName) {
+  requireRole(role);
   const already = await db
     .select({ id: member.id })
     .from(member)
@@ -132,6 +133,7 @@ async function memberOf(organizationId: string, memberId: string) {
 
 /** Changes a member's role; an organisation always keeps at least one owner. */
 export async function changeRole(organizationId: string, memberId: string, role: RoleName): Promise<void> {
+  requireRole(role);
   const m = await memberOf(organizationId, memberId);
   if (m.role === "owner" && role !== "owner" && (await ownerCount(organizationId, memberId)) === 0) {
     throw new ConflictError("An organisation needs at least one owner: make someone else owner first", [fieldError("role", "last owner")]);
@@ -194,15 +196,35 @@ export async function acceptInvitation(userId: string, userEmail: string, invita
   if (inv.email.toLowerCase() !== userEmail.toLowerCase()) {
     throw new ForbiddenError(`This invitation is addressed to ${inv.email}; sign in with that address to accept it`);
   }
-  await db.transaction(async (tx) => {
-    const existing = await tx
-      .select({ id: member.id })
-      .from(member)
-      .where(and(eq(member.userId, userId), eq(member.organizationId, inv.organizationId)));
-    if (existing.length) await tx.update(member).set({ role: inv.role }).where(eq(member.id, existing[0]!.id));
-    else
-      await tx.insert(member).values({ id: crypto.randomUUID(), userId, organizationId: inv.organizationId, role: inv.role, createdAt: new Date() });
-    await tx.update(invitation).set({ status: "accepted" }).where(eq(invitation.id, invitationId));
-  });
+  await db.transaction((tx) => joinByInvitation(tx, userId, userEmail, invitationId, inv));
   return { ...inv, status: "accepted" };
+}
+
+type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
+
+/**
+ * Inside a transaction: makes the user a member in the invited role and marks the invitation accepted. The
+ * invitation is checked again under a row lock, so that it is used once.
+ */
+export async function joinByInvitation(tx: Tx, userId: string, userEmail: string, invitationId: string, checked?: InvitationSummary): Promise<void> {
+  const row = (await tx.select().from(invitation).where(eq(invitation.id, invitationId)).for("update"))[0];
+  if (!row || row.status !== "pending" || row.expiresAt < new Date())
+    throw new ConflictError("This invitation is no longer valid", [fieldError("invitationId", "not pending")]);
+  if (row.email.toLowerCase() !== userEmail.toLowerCase())
+    throw new ForbiddenError(`This invitation is addressed to ${row.email}; sign in with that address to accept it`);
+  const role = requireRole(checked?.role ?? row.role);
+  const existing = await tx
+    .select({ id: member.id })
+    .from(member)
+    .where(and(eq(member.userId, userId), eq(member.organizationId, row.organizationId)));
+  if (existing.length) await tx.update(member).set({ role }).where(eq(member.id, existing[0]!.id));
+  else await tx.insert(member).values({ id: crypto.randomUUID(), userId, organizationId: row.organizationId, role, createdAt: new Date() });
+  await tx.update(invitation).set({ status: "accepted" }).where(eq(invitation.id, invitationId));
+}
+
+/** A role as stored: exactly one of the four (anything else is refused, never written). */
+export function requireRole(role: unknown): RoleName {
+  if (typeof role !== "string" || !isRoleName(role))
+    throw new InvalidError("role", "is not one of the roles", "The role must be one of owner, consultant, architect, client");
+  return role;
 }

@@ -1,28 +1,26 @@
 import type { APIRoute } from "astro";
-import { auth, CLIENT_IP_HEADER } from "@/lib/server/auth";
+import { handleAuthRequest } from "@/lib/server/auth-gate";
+import { clientAddressOf } from "@/lib/server/client-address";
 import { isDatabaseUnavailable } from "@/lib/server/db/unavailable";
 import { problem, unavailable } from "@/lib/server/http";
 
 /**
- * better-auth's own routes. The socket's address is passed on in a header of our own (any value the
- * client sent under that name is replaced), so that rate limits apply per client, not to everyone at once.
+ * better-auth's routes, behind the gate of lib/server/auth-gate.ts (allowlist, rate limits). The client
+ * address is the socket's, or a trusted proxy's forwarded value (lib/server/client-address.ts).
  * Not written with `endpoint(…)`: better-auth reads the request and writes its own answers and errors;
  * what it throws besides those (its database gone, or a bug) is answered here: 503 with Retry-After
  * for a lost database, 500 without internals otherwise.
  */
-export const ALL: APIRoute = async ({ request, clientAddress, url }) => {
-  const headers = new Headers(request.headers);
-  let ip = "";
+export const ALL: APIRoute = async (context) => {
+  let astroAddress: string | undefined;
   try {
-    ip = clientAddress;
+    astroAddress = context.clientAddress;
   } catch {
     /* no socket address (e.g. prerendering) */
   }
-  if (ip) headers.set(CLIENT_IP_HEADER, ip);
-  else headers.delete(CLIENT_IP_HEADER);
-  const forwarded = new Request(request, { headers });
+  const { request, url } = context;
   try {
-    return await auth.handler(forwarded);
+    return await handleAuthRequest(request, { clientAddress: clientAddressOf(request, astroAddress) });
   } catch (err) {
     if (isDatabaseUnavailable(err)) {
       console.error(`[auth] ${request.method} ${url.pathname}: database unavailable:`, (err as Error).message);
