@@ -26,7 +26,7 @@ export const baseUrl = () => test.info().project.use.baseURL!;
 
 export const ANONYMOUS: Caller = { actor: "anonymous", cookie: null };
 
-/** One request; `body` is sent as JSON (a string is sent as it is). */
+/** One request; `body` is sent as JSON (a string or bytes are sent as they are). */
 export async function call(caller: Caller, method: string, path: string, body?: unknown, timeoutMs = 15_000): Promise<Answer> {
   const base = baseUrl();
   const headers: Record<string, string> = { origin: new URL(base).origin, accept: "application/json" };
@@ -35,7 +35,12 @@ export async function call(caller: Caller, method: string, path: string, body?: 
   const res = await fetch(base + path, {
     method,
     headers,
-    body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
+    body:
+      body === undefined
+        ? undefined
+        : typeof body === "string" || body instanceof Uint8Array
+          ? (body as string | Uint8Array<ArrayBuffer>)
+          : JSON.stringify(body),
     redirect: "manual",
     signal: AbortSignal.timeout(timeoutMs),
   });
