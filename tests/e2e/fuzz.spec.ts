@@ -69,7 +69,20 @@ const HOSTILE_STRINGS = [
 ];
 const HOSTILE_VALUES: unknown[] = [null, true, false, 0, -0, -1, 1e308, -1e308, 2 ** 53 + 1, 0.1 + 0.2, [], {}, [null], { a: 1 }, "0", "1"];
 
-const hostile = fc.oneof(fc.constantFrom(...HOSTILE_STRINGS), fc.constantFrom(...HOSTILE_VALUES), fc.string({ unit: "binary", maxLength: 40 }));
+/** Ordinary text with one character that has no business in a field: controls, a lone surrogate, bidi overrides. */
+const spiked = fc
+  .tuple(
+    fc.string({ maxLength: 12 }),
+    fc.constantFrom("\u0000", "\u0008", "\u001b", "\u007f", "\uD83D", "\uDE00", "\u202E", "\u2028", "\uFFFF"),
+    fc.string({ maxLength: 12 }),
+  )
+  .map(([a, c, b]) => a + c + b);
+const hostile = fc.oneof(
+  { arbitrary: fc.constantFrom(...HOSTILE_STRINGS), weight: 2 },
+  { arbitrary: spiked, weight: 2 },
+  { arbitrary: fc.constantFrom(...HOSTILE_VALUES), weight: 1 },
+  { arbitrary: fc.string({ unit: "binary", maxLength: 40 }), weight: 1 },
+);
 
 /** An object with an own `__proto__` (or `constructor`) key, as JSON.parse makes from a body. */
 const withPoisonKey = (obj: Record<string, unknown>, key: string, value: unknown) => {
@@ -128,6 +141,9 @@ function placesIn(value: unknown, path: (string | number)[] = []): (string | num
   return out;
 }
 
+const valueAt = (value: unknown, path: (string | number)[]): unknown =>
+  path.reduce<unknown>((v, k) => (v && typeof v === "object" ? (v as Record<string | number, unknown>)[k] : undefined), value);
+
 /** `value` with the value at `path` replaced (a copy; the rest shared). */
 function replaceAt(value: unknown, path: (string | number)[], by: unknown): unknown {
   if (path.length === 0) return by;
@@ -139,13 +155,18 @@ function replaceAt(value: unknown, path: (string | number)[], by: unknown): unkn
 
 /** A valid-looking body with exactly one value replaced by a hostile one, or one poisoned key added. */
 const oneHostileValue = (valid: fc.Arbitrary<unknown>) =>
-  fc.tuple(valid, fc.nat(), hostile, fc.nat(4), fc.constantFrom("__proto__", "constructor", "prototype")).map(([body, pick, bad, poisonDie, key]) => {
-    const places = placesIn(body);
-    const place = places[1 + (pick % Math.max(1, places.length - 1))] ?? [];
-    if (poisonDie === 0 && body && typeof body === "object" && !Array.isArray(body))
-      return withPoisonKey(body as Record<string, unknown>, key, { polluted: true });
-    return replaceAt(body, place, bad);
-  });
+  fc
+    .tuple(valid, fc.nat(), fc.boolean(), hostile, fc.nat(4), fc.constantFrom("__proto__", "constructor", "prototype"))
+    .map(([body, pick, textOnly, bad, poisonDie, key]) => {
+      // Half of the time the hostile value replaces text, where stored strings come from.
+      const all = placesIn(body).slice(1);
+      const texts = all.filter((p) => typeof valueAt(body, p) === "string");
+      const places = textOnly && texts.length ? texts : all;
+      const place = places[pick % Math.max(1, places.length)] ?? [];
+      if (poisonDie === 0 && body && typeof body === "object" && !Array.isArray(body))
+        return withPoisonKey(body as Record<string, unknown>, key, { polluted: true });
+      return replaceAt(body, place, bad);
+    });
 
 function plainFromSchema(s: JsonSchema, ctx: Ctx, mixed: boolean, depth: number): fc.Arbitrary<unknown> {
   if (s.const !== undefined) return fc.constant(s.const);
@@ -200,6 +221,21 @@ function plainFromSchema(s: JsonSchema, ctx: Ctx, mixed: boolean, depth: number)
       return fc.oneof(hostile, fc.jsonValue({ maxDepth: 2 }));
   }
 }
+
+/** A valid-looking body with one control or otherwise unwelcome character put into one of its texts. */
+const CONTROL = fc.oneof(
+  { arbitrary: fc.constant("\u0000"), weight: 3 },
+  { arbitrary: fc.constantFrom("\u0001", "\u0008", "\u001b", "\u007f", "\uD800", "\u202E"), weight: 6 },
+);
+const oneSpikedText = (valid: fc.Arbitrary<unknown>) =>
+  fc.tuple(valid, fc.nat(), fc.nat(), CONTROL).map(([body, pick, at, c]) => {
+    const texts = placesIn(body).filter((p) => p.length > 0 && typeof valueAt(body, p) === "string");
+    if (!texts.length) return body;
+    const place = texts[pick % texts.length]!;
+    const text = valueAt(body, place) as string;
+    const i = at % (text.length + 1);
+    return replaceAt(body, place, text.slice(0, i) + c + text.slice(i));
+  });
 
 /** Whole bodies no schema describes: broken JSON, deep nesting, wrong top-level types, raw bytes. */
 const HOSTILE_BODIES: fc.Arbitrary<string | Uint8Array> = fc.constantFrom<string | Uint8Array>(
@@ -375,6 +411,7 @@ for (const route of FUZZED) {
     const bodies = fc.oneof(
       { arbitrary: json(valid), weight: 2 },
       { arbitrary: json(oneHostileValue(valid)), weight: 6 },
+      { arbitrary: json(oneSpikedText(valid)), weight: 3 },
       { arbitrary: json(fromSchema(jsonSchema, ctx, true)), weight: 2 },
       { arbitrary: HOSTILE_BODIES, weight: 1 },
     );
