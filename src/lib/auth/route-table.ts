@@ -1,0 +1,148 @@
+/**
+ * Every API route of Paneray and who may call it: one row per (file under src/pages/api, exported method).
+ *
+ * The rule of each row is the `auth` the endpoint declares to `endpoint(…)` (src/lib/server/http.ts), written
+ * here once more so that tests can derive the expected answer for every role from `lib/auth/roles.ts`:
+ * tests/unit/route-table.test.ts fails for a route file or method without a row, and the browser test
+ * tests/e2e/matrix.spec.ts calls every row as each role and as a member of another organisation.
+ *
+ * Pure (no I/O): readable by the server, the browser and the tests.
+ */
+import type { PermissionKey } from "./roles";
+
+export type RouteMethod = "GET" | "POST" | "PUT" | "PATCH" | "DELETE" | "ALL";
+
+/**
+ * Who may call a route:
+ * - "anonymous": anyone, signed in or not;
+ * - "user": any signed-in user (anonymous callers get 401);
+ * - project: the project named by a route parameter must be visible to the caller (owners, consultants and
+ *   architects see every project of their organisation, clients only those shared with them; anyone else gets
+ *   404), and the caller's role must hold `permission` when given (403 otherwise);
+ * - org: the caller must be a member of the organisation named by a route parameter or a body field (404
+ *   otherwise) and their role must hold `permission` (403 otherwise);
+ * - "better-auth": the request goes to better-auth, which answers for itself (an allowlist of its paths).
+ */
+export type RouteAuth =
+  | "anonymous"
+  | "user"
+  | { readonly project: string; readonly permission?: PermissionKey }
+  | { readonly org: string; readonly from?: "params" | "body"; readonly permission: PermissionKey }
+  | "better-auth";
+
+export interface RouteEntry {
+  /** The file under src/pages/api that serves the route. */
+  readonly file: string;
+  /** The URL pattern, parameters as `:name`. */
+  readonly path: string;
+  readonly method: RouteMethod;
+  readonly auth: RouteAuth;
+  /** The status of a successful call. */
+  readonly ok: 200 | 201 | 204;
+  /** Whether the route changes stored data (the fuzz tests send hostile bodies to these). */
+  readonly writes: boolean;
+}
+
+export const ROUTES: readonly RouteEntry[] = [
+  { file: "health.ts", path: "/api/health", method: "GET", auth: "anonymous", ok: 200, writes: false },
+  { file: "auth/[...all].ts", path: "/api/auth/:path*", method: "ALL", auth: "better-auth", ok: 200, writes: true },
+  { file: "v1/me.ts", path: "/api/v1/me", method: "GET", auth: "user", ok: 200, writes: false },
+  { file: "v1/signup.ts", path: "/api/v1/signup", method: "POST", auth: "anonymous", ok: 201, writes: true },
+  { file: "v1/calc/glazing.ts", path: "/api/v1/calc/glazing", method: "POST", auth: "user", ok: 200, writes: false },
+  { file: "v1/calc/schedule.ts", path: "/api/v1/calc/schedule", method: "POST", auth: "user", ok: 200, writes: false },
+  { file: "v1/invitations/[id]/index.ts", path: "/api/v1/invitations/:id", method: "GET", auth: "anonymous", ok: 200, writes: false },
+  { file: "v1/invitations/[id]/accept.ts", path: "/api/v1/invitations/:id/accept", method: "POST", auth: "user", ok: 200, writes: true },
+  {
+    file: "v1/orgs/[orgId]/members/index.ts",
+    path: "/api/v1/orgs/:orgId/members",
+    method: "GET",
+    auth: { org: "orgId", permission: "member:update" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/orgs/[orgId]/members/[memberId].ts",
+    path: "/api/v1/orgs/:orgId/members/:memberId",
+    method: "PATCH",
+    auth: { org: "orgId", permission: "member:update" },
+    ok: 200,
+    writes: true,
+  },
+  {
+    file: "v1/orgs/[orgId]/members/[memberId].ts",
+    path: "/api/v1/orgs/:orgId/members/:memberId",
+    method: "DELETE",
+    auth: { org: "orgId", permission: "member:delete" },
+    ok: 200,
+    writes: true,
+  },
+  {
+    file: "v1/orgs/[orgId]/invitations/index.ts",
+    path: "/api/v1/orgs/:orgId/invitations",
+    method: "POST",
+    auth: { org: "orgId", permission: "invitation:create" },
+    ok: 201,
+    writes: true,
+  },
+  {
+    file: "v1/orgs/[orgId]/invitations/[invitationId].ts",
+    path: "/api/v1/orgs/:orgId/invitations/:invitationId",
+    method: "DELETE",
+    auth: { org: "orgId", permission: "invitation:cancel" },
+    ok: 200,
+    writes: true,
+  },
+  { file: "v1/projects/index.ts", path: "/api/v1/projects", method: "GET", auth: "user", ok: 200, writes: false },
+  {
+    file: "v1/projects/index.ts",
+    path: "/api/v1/projects",
+    method: "POST",
+    auth: { org: "organizationId", from: "body", permission: "project:create" },
+    ok: 201,
+    writes: true,
+  },
+  { file: "v1/projects/[id]/index.ts", path: "/api/v1/projects/:id", method: "GET", auth: { project: "id" }, ok: 200, writes: false },
+  {
+    file: "v1/projects/[id]/index.ts",
+    path: "/api/v1/projects/:id",
+    method: "PATCH",
+    auth: { project: "id", permission: "project:update" },
+    ok: 200,
+    writes: true,
+  },
+  {
+    file: "v1/projects/[id]/index.ts",
+    path: "/api/v1/projects/:id",
+    method: "DELETE",
+    auth: { project: "id", permission: "project:delete" },
+    ok: 204,
+    writes: true,
+  },
+  {
+    file: "v1/projects/[id]/shares/index.ts",
+    path: "/api/v1/projects/:id/shares",
+    method: "GET",
+    auth: { project: "id", permission: "project:share" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/projects/[id]/shares/index.ts",
+    path: "/api/v1/projects/:id/shares",
+    method: "POST",
+    auth: { project: "id", permission: "project:share" },
+    ok: 201,
+    writes: true,
+  },
+  {
+    file: "v1/projects/[id]/shares/[memberId].ts",
+    path: "/api/v1/projects/:id/shares/:memberId",
+    method: "DELETE",
+    auth: { project: "id", permission: "project:share" },
+    ok: 200,
+    writes: true,
+  },
+];
+
+/** "METHOD /path" of a row, for messages and test titles. */
+export const routeKey = (r: Pick<RouteEntry, "method" | "path">) => `${r.method} ${r.path}`;

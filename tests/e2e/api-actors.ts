@@ -1,0 +1,102 @@
+// API callers for the matrix and fuzz tests: plain fetch with an explicit session cookie (no cookie jar, so a
+// response that signs someone else in never changes who the next request is from), an Origin header as a
+// browser sends, a per-request timeout and no redirects followed.
+import { expect, test } from "@playwright/test";
+import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
+import type { RoleName } from "@/lib/auth/roles";
+import { uniqueEmail } from "./helpers";
+
+export type Actor = "anonymous" | RoleName | "outsider";
+export const ACTORS: readonly Actor[] = ["anonymous", "outsider", "client", "architect", "consultant", "owner"];
+
+export interface Caller {
+  actor: Actor;
+  /** The Cookie header of the session, or null when anonymous. */
+  cookie: string | null;
+}
+
+export interface Answer {
+  status: number;
+  body: unknown;
+  text: string;
+  headers: Headers;
+}
+
+export const baseUrl = () => test.info().project.use.baseURL!;
+
+export const ANONYMOUS: Caller = { actor: "anonymous", cookie: null };
+
+/** One request; `body` is sent as JSON (a string or bytes are sent as they are). */
+export async function call(caller: Caller, method: string, path: string, body?: unknown, timeoutMs = 15_000): Promise<Answer> {
+  const base = baseUrl();
+  const headers: Record<string, string> = { origin: new URL(base).origin, accept: "application/json" };
+  if (caller.cookie) headers.cookie = caller.cookie;
+  if (body !== undefined) headers["content-type"] = "application/json";
+  const res = await fetch(base + path, {
+    method,
+    headers,
+    body:
+      body === undefined
+        ? undefined
+        : typeof body === "string" || body instanceof Uint8Array
+          ? (body as string | Uint8Array<ArrayBuffer>)
+          : JSON.stringify(body),
+    redirect: "manual",
+    signal: AbortSignal.timeout(timeoutMs),
+  });
+  const text = await res.text();
+  let parsed: unknown = null;
+  try {
+    parsed = text ? JSON.parse(text) : null;
+  } catch {
+    parsed = null;
+  }
+  return { status: res.status, body: parsed, text, headers: res.headers };
+}
+
+export const cookieOf = (res: Answer) =>
+  res.headers
+    .getSetCookie()
+    .map((c) => c.split(";")[0])
+    .join("; ");
+
+export async function signInAs(actor: Actor, email: string, password: string): Promise<Caller> {
+  const res = await call(ANONYMOUS, "POST", "/api/auth/sign-in/email", { email, password });
+  expect(res.status, `sign-in of ${email}`).toBe(200);
+  return { actor, cookie: cookieOf(res) };
+}
+
+export const signInDemo = (role: RoleName) => signInAs(role, demoUser(role).email, DEMO_PASSWORD);
+
+export interface Outsider extends Caller {
+  email: string;
+  password: string;
+  organizationId: string;
+}
+
+/**
+ * A new account that owns a new organisation of its own, signed in: a member of another organisation than
+ * the demo's. The one place that creates accounts for these tests.
+ */
+export async function createOutsider(tag = "outsider"): Promise<Outsider> {
+  const email = uniqueEmail(tag);
+  const password = "outsider-pass-2026";
+  const res = await call(ANONYMOUS, "POST", "/api/v1/signup", { name: "Outside Member", email, password, organizationName: `Elsewhere ${email}` });
+  expect(res.status, `sign-up of ${email}: ${res.text.slice(0, 200)}`).toBe(201);
+  return { actor: "outsider", cookie: cookieOf(res), email, password, organizationId: (res.body as { organizationId: string }).organizationId };
+}
+
+/**
+ * Makes a new account a member of an organisation with `role`: the owner invites a fresh address and the
+ * invitee signs up through the invitation. Returns the new member's id.
+ */
+export async function addMember(owner: Caller, organizationId: string, role: RoleName): Promise<{ memberId: string; email: string }> {
+  const email = uniqueEmail(`member-${role}`);
+  const inv = await call(owner, "POST", `/api/v1/orgs/${organizationId}/invitations`, { email, role });
+  expect(inv.status, inv.text.slice(0, 200)).toBe(201);
+  const invitationId = (inv.body as { invitation: { id: string } }).invitation.id;
+  const res = await call(ANONYMOUS, "POST", "/api/v1/signup", { name: "Added Member", email, password: "added-member-2026", invitationId });
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  const members = (await call(owner, "GET", `/api/v1/orgs/${organizationId}/members`)).body as { members: { memberId: string; email: string }[] };
+  return { memberId: members.members.find((m) => m.email === email)!.memberId, email };
+}

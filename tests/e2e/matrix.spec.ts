@@ -1,0 +1,329 @@
+// The authorization matrix: every row of the route table (src/lib/auth/route-table.ts) called by an anonymous
+// visitor, each demo role and a member of another organisation, against the status the table's rule and the
+// role table (src/lib/auth/roles.ts) give. Bodies are valid, so the answers are about access, not validation.
+// Writes that succeed go to throwaway rows (fresh projects, members and invitations), which are removed after.
+import { expect, test } from "@playwright/test";
+import { permissionFor, roleCan } from "@/lib/auth/roles";
+import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
+import { ACTORS, ANONYMOUS, addMember, call, createOutsider, signInAs, signInDemo, type Actor, type Caller, type Outsider } from "./api-actors";
+import { uniqueEmail } from "./helpers";
+
+/**
+ * The better-auth paths the app serves, relative to /api/auth (the shape of an allowlist `AUTH_ROUTES`:
+ * method and path, parameters as `:name`). Each comes with a request that reaches it and the answer every
+ * caller gets.
+ */
+const AUTH_ROUTES = [
+  { method: "POST", path: "/sign-in/email" },
+  { method: "POST", path: "/sign-out" },
+  { method: "GET", path: "/get-session" },
+  { method: "POST", path: "/request-password-reset" },
+  { method: "POST", path: "/reset-password" },
+  { method: "GET", path: "/reset-password/:token" },
+  { method: "GET", path: "/verify-email" },
+] as const;
+
+const AUTH_PROBES: Record<string, { url: string; body?: unknown; status: number }> = {
+  "POST /sign-in/email": { url: "/sign-in/email", body: { email: "nobody@e2e.example", password: "not-a-password" }, status: 401 },
+  "POST /sign-out": { url: "/sign-out", body: {}, status: 200 },
+  "GET /get-session": { url: "/get-session", status: 200 },
+  "POST /request-password-reset": {
+    url: "/request-password-reset",
+    body: { email: "nobody@e2e.example", redirectTo: "/reset-password" },
+    status: 200,
+  },
+  "POST /reset-password": { url: "/reset-password", body: { token: "not-a-token", newPassword: "another-pass-2026" }, status: 400 },
+  "GET /reset-password/:token": { url: "/reset-password/not-a-token?callbackURL=/reset-password", status: 302 },
+  "GET /verify-email": { url: "/verify-email?token=not-a-token", status: 401 },
+};
+
+/** Fixtures shared by the cases, made once per worker. */
+interface World {
+  callers: Record<Actor, Caller>;
+  outsider: Outsider;
+  orgId: string;
+  clientMemberId: string;
+  /** Ids of throwaway rows to remove afterwards. */
+  projects: string[];
+  members: string[];
+  invitations: string[];
+  outsiderInvitationId: string;
+}
+let w: World;
+
+type Target = "shared" | "unshared";
+interface Prepared {
+  path: string;
+  body?: unknown;
+}
+interface Case {
+  method: RouteEntry["method"];
+  path: string;
+  /** For project routes: whether the project is shared with the demo client. */
+  target?: Target;
+  prepare: (actor: Actor) => Promise<Prepared>;
+  /** Overrides the rule's answer for signed-in callers where the resource itself decides (and says why). */
+  signedIn?: { status: number; why: string };
+  after?: (actor: Actor, status: number, body: unknown) => void;
+}
+
+/** The status the route table's rule and the role table give `actor`. */
+function expectedStatus(route: RouteEntry, actor: Actor, target?: Target): number {
+  const rule = route.auth;
+  if (rule === "anonymous" || rule === "better-auth") return route.ok;
+  if (actor === "anonymous") return 401;
+  if (rule === "user") return route.ok;
+  if (actor === "outsider") return 404;
+  if ("project" in rule) {
+    const visible = roleCan(actor, { project: ["readAll"] }) || (target === "shared" && roleCan(actor, { project: ["readShared"] }));
+    if (!visible) return 404;
+  }
+  if (rule.permission && !roleCan(actor, permissionFor(rule.permission))) return 403;
+  return route.ok;
+}
+
+const consultant = () => w.callers.consultant;
+const owner = () => w.callers.owner;
+
+/** A fresh project in the demo organisation, made by the consultant, shared with the demo client or not. */
+async function throwawayProject(target: Target): Promise<string> {
+  const res = await call(consultant(), "POST", "/api/v1/projects", {
+    organizationId: w.orgId,
+    name: `Matrix throwaway (${target})`,
+    siteName: "Test site",
+    latitudeDeg: 50,
+    longitudeDeg: 5,
+    timeZone: "UTC",
+  });
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  const id = (res.body as { project: { id: string } }).project.id;
+  w.projects.push(id);
+  if (target === "shared")
+    expect((await call(consultant(), "POST", `/api/v1/projects/${id}/shares`, { memberId: w.clientMemberId })).status).toBe(201);
+  return id;
+}
+
+async function throwawayInvitation(): Promise<string> {
+  const res = await call(owner(), "POST", `/api/v1/orgs/${w.orgId}/invitations`, { email: uniqueEmail("matrix-invite"), role: "architect" });
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  const id = (res.body as { invitation: { id: string } }).invitation.id;
+  w.invitations.push(id);
+  return id;
+}
+
+const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
+const air16 = { kind: "gap", widthMm: 16, gas: "air" };
+const fixed = (path: string, body?: unknown) => async (): Promise<Prepared> => ({ path, body });
+
+const projectCases = (target: Target): Case[] => [
+  { method: "GET", path: "/api/v1/projects/:id", target, prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}` }) },
+  {
+    method: "PATCH",
+    path: "/api/v1/projects/:id",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}`, body: { description: "Checked by the access matrix" } }),
+  },
+  { method: "DELETE", path: "/api/v1/projects/:id", target, prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}` }) },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/shares",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}/shares` }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/shares",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}/shares`, body: { memberId: w.clientMemberId } }),
+  },
+  {
+    method: "DELETE",
+    path: "/api/v1/projects/:id/shares/:memberId",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}/shares/${w.clientMemberId}` }),
+  },
+];
+
+const CASES: Case[] = [
+  { method: "GET", path: "/api/health", prepare: fixed("/api/health") },
+  { method: "GET", path: "/api/v1/me", prepare: fixed("/api/v1/me") },
+  {
+    method: "POST",
+    path: "/api/v1/signup",
+    prepare: async () => ({
+      path: "/api/v1/signup",
+      body: { name: "Matrix Signup", email: uniqueEmail("matrix-signup"), password: "matrix-pass-2026", organizationName: "Matrix Signup Ltd" },
+    }),
+  },
+  { method: "POST", path: "/api/v1/calc/glazing", prepare: fixed("/api/v1/calc/glazing", { layers: [pane6, air16, pane6] }) },
+  {
+    method: "POST",
+    path: "/api/v1/calc/schedule",
+    prepare: fixed("/api/v1/calc/schedule", {
+      site: { latitudeDeg: 38.7, longitudeDeg: -9.17, timeZone: "Europe/Lisbon" },
+      from: "2026-06-21",
+      to: "2026-06-21",
+      surfaces: [{ name: "South", azimuthDeg: 180, tiltDeg: 90, layers: [pane6, air16, pane6] }],
+    }),
+  },
+  { method: "GET", path: "/api/v1/invitations/:id", prepare: async () => ({ path: `/api/v1/invitations/${w.outsiderInvitationId}` }) },
+  {
+    method: "POST",
+    path: "/api/v1/invitations/:id/accept",
+    prepare: async () => ({ path: `/api/v1/invitations/${w.outsiderInvitationId}/accept` }),
+    signedIn: { status: 403, why: "the invitation is addressed to another e-mail address" },
+  },
+  { method: "GET", path: "/api/v1/orgs/:orgId/members", prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/members` }) },
+  {
+    method: "PATCH",
+    path: "/api/v1/orgs/:orgId/members/:memberId",
+    // The client keeps the role they have, so a successful call changes nothing other tests see.
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/members/${w.clientMemberId}`, body: { role: "client" } }),
+  },
+  {
+    method: "DELETE",
+    path: "/api/v1/orgs/:orgId/members/:memberId",
+    prepare: async () => {
+      const { memberId } = await addMember(owner(), w.orgId, "architect");
+      w.members.push(memberId);
+      return { path: `/api/v1/orgs/${w.orgId}/members/${memberId}` };
+    },
+  },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/invitations",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/invitations`, body: { email: uniqueEmail("matrix-invite"), role: "architect" } }),
+    after: (_a, status, body) => {
+      if (status === 201) w.invitations.push((body as { invitation: { id: string } }).invitation.id);
+    },
+  },
+  {
+    method: "DELETE",
+    path: "/api/v1/orgs/:orgId/invitations/:invitationId",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/invitations/${await throwawayInvitation()}` }),
+  },
+  { method: "GET", path: "/api/v1/projects", prepare: fixed("/api/v1/projects") },
+  {
+    method: "POST",
+    path: "/api/v1/projects",
+    prepare: async () => ({
+      path: "/api/v1/projects",
+      body: { organizationId: w.orgId, name: "Matrix throwaway (created)", siteName: "Test site", latitudeDeg: 50, longitudeDeg: 5, timeZone: "UTC" },
+    }),
+    after: (_a, status, body) => {
+      if (status === 201) w.projects.push((body as { project: { id: string } }).project.id);
+    },
+  },
+  ...projectCases("shared"),
+  ...projectCases("unshared"),
+];
+
+const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);
+
+test.beforeAll(async () => {
+  const callers = { anonymous: ANONYMOUS } as Record<Actor, Caller>;
+  for (const role of ["owner", "consultant", "architect", "client"] as const) callers[role] = await signInDemo(role);
+  const outsider = await createOutsider("matrix-outsider");
+  callers.outsider = outsider;
+  const me = (await call(callers.owner, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
+  const orgId = me.memberships[0]!.organizationId;
+  const members = (await call(callers.owner, "GET", `/api/v1/orgs/${orgId}/members`)).body as { members: { memberId: string; role: string }[] };
+  const inv = await call(outsider, "POST", `/api/v1/orgs/${outsider.organizationId}/invitations`, {
+    email: uniqueEmail("matrix-invitee"),
+    role: "client",
+  });
+  expect(inv.status).toBe(201);
+  w = {
+    callers,
+    outsider,
+    orgId,
+    clientMemberId: members.members.find((m) => m.role === "client")!.memberId,
+    projects: [],
+    members: [],
+    invitations: [],
+    outsiderInvitationId: (inv.body as { invitation: { id: string } }).invitation.id,
+  };
+});
+
+test.afterAll(async () => {
+  if (!w) return;
+  for (const id of w.projects) await call(w.callers.consultant, "DELETE", `/api/v1/projects/${id}`);
+  for (const id of w.members) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/members/${id}`);
+  for (const id of w.invitations) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/invitations/${id}`);
+});
+
+test("every route in the table has a case, and every case a route", () => {
+  const covered = new Set(CASES.map((c) => routeKey(c)));
+  const missing = ROUTES.filter((r) => r.auth !== "better-auth" && !covered.has(routeKey(r))).map(routeKey);
+  expect(missing, "routes of src/lib/auth/route-table.ts without a case in this matrix").toEqual([]);
+  expect(CASES.filter((c) => !routeOf(c)).map((c) => routeKey(c))).toEqual([]);
+  expect(ROUTES.filter((r) => r.auth === "better-auth").map(routeKey)).toEqual(["ALL /api/auth/:path*"]);
+  expect(AUTH_ROUTES.map((r) => `${r.method} ${r.path}`).sort()).toEqual(Object.keys(AUTH_PROBES).sort());
+});
+
+for (const c of CASES) {
+  test(`${routeKey(c)}${c.target ? ` (${c.target} project)` : ""}`, async () => {
+    const route = routeOf(c)!;
+    const rows: string[] = [];
+    // Least rights first, so a successful destructive call by a later role cannot hide a refusal.
+    for (const actor of ACTORS) {
+      const { path, body } = await c.prepare(actor);
+      const res = await call(w.callers[actor], c.method, path, body);
+      c.after?.(actor, res.status, res.body);
+      const want = actor !== "anonymous" && c.signedIn ? c.signedIn.status : expectedStatus(route, actor, c.target);
+      rows.push(`${actor.padEnd(10)} ${res.status} (expected ${want})`);
+      expect.soft(res.status, `${actor}: ${c.method} ${path} answered ${res.text.slice(0, 160)}`).toBe(want);
+      if (res.status >= 400)
+        expect.soft(res.headers.get("content-type") ?? "", `${actor}: refusals are problem+json`).toContain("application/problem+json");
+    }
+    test.info().annotations.push({ type: "matrix", description: rows.join("\n") });
+  });
+}
+
+test.describe("better-auth routes on the allowlist", () => {
+  for (const r of AUTH_ROUTES) {
+    const key = `${r.method} ${r.path}`;
+    test(`${r.method} /api/auth${r.path}`, async () => {
+      const probe = AUTH_PROBES[key]!;
+      for (const actor of ACTORS) {
+        // Signing out ends the session: sign out a second session of the same user.
+        let caller = w.callers[actor];
+        if (key === "POST /sign-out" && caller.cookie) {
+          caller =
+            actor === "outsider"
+              ? await signInAs(actor, w.outsider.email, w.outsider.password)
+              : await signInDemo(actor as Exclude<Actor, "anonymous" | "outsider">);
+        }
+        const res = await call(caller, r.method, `/api/auth${probe.url}`, probe.body);
+        expect.soft(res.status, `${actor}: ${res.text.slice(0, 160)}`).toBe(probe.status);
+      }
+    });
+  }
+});
+
+// Everything else better-auth could serve is closed: these answer 404 to everyone. The requests are harmless if
+// they were served (no organisation is created, the role change keeps the client's role).
+test.describe("better-auth routes outside the allowlist", () => {
+  const closed = [
+    { method: "GET", url: "/organization/list-members", body: undefined as (() => unknown) | undefined },
+    {
+      method: "POST",
+      url: "/organization/update-member-role",
+      body: () => ({ memberId: w.clientMemberId, role: "client", organizationId: w.orgId }),
+    },
+    { method: "POST", url: "/organization/create", body: () => ({}) },
+    {
+      method: "POST",
+      url: "/sign-up/email",
+      body: () => ({ name: "Direct Signup", email: uniqueEmail("direct-signup"), password: "direct-pass-2026" }),
+    },
+  ];
+  for (const r of closed) {
+    test(`${r.method} /api/auth${r.url} answers 404`, async () => {
+      for (const actor of ACTORS) {
+        const res = await call(w.callers[actor], r.method, `/api/auth${r.url}`, r.body?.());
+        expect.soft(res.status, `${actor}: ${res.text.slice(0, 160)}`).toBe(404);
+      }
+    });
+  }
+});

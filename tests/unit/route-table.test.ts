@@ -1,0 +1,91 @@
+// The route table (src/lib/auth/route-table.ts) against the route files: every file under src/pages/api and
+// every method it exports has exactly one row, and each row's rule is the one the endpoint declares.
+import { readdirSync, readFileSync } from "node:fs";
+import { join, relative } from "node:path";
+import { describe, expect, it } from "vitest";
+import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
+
+const API_DIR = join(import.meta.dirname, "../../src/pages/api");
+const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE", "OPTIONS", "HEAD", "ALL"];
+
+function routeFiles(dir: string): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+    e.isDirectory() ? routeFiles(join(dir, e.name)) : /\.(ts|js|mjs)$/.test(e.name) ? [join(dir, e.name)] : [],
+  );
+}
+
+/** The exported methods of a route file, each with the source of its export statement. */
+export function exportedMethods(source: string): Map<string, string> {
+  const out = new Map<string, string>();
+  const parts = source.split(/^export\s+(?:const|async\s+function|function)\s+/m).slice(1);
+  for (const part of parts) {
+    const name = /^([A-Z]+)\b/.exec(part)?.[1];
+    if (name && METHODS.includes(name)) out.set(name, part);
+  }
+  for (const m of source.matchAll(/^export\s*\{([^}]*)\}/gm)) {
+    for (const n of m[1]!.split(",").map((s) =>
+      s
+        .trim()
+        .split(/\s+as\s+/)
+        .pop()!,
+    ))
+      if (METHODS.includes(n)) out.set(n, "");
+  }
+  return out;
+}
+
+const files = routeFiles(API_DIR).map((f) => ({ file: relative(API_DIR, f).split("\\").join("/"), source: readFileSync(f, "utf8") }));
+const found = files.flatMap(({ file, source }) => [...exportedMethods(source)].map(([method, code]) => ({ file, method, code })));
+const rowOf = (file: string, method: string) => ROUTES.filter((r) => r.file === file && r.method === method);
+
+describe("route table", () => {
+  it("finds the route files", () => {
+    expect(files.length).toBeGreaterThan(10);
+  });
+
+  it("has one row for every (file, method) under src/pages/api", () => {
+    const missing = found.filter((f) => rowOf(f.file, f.method).length !== 1).map((f) => `${f.method} ${f.file}`);
+    expect(missing, "routes without exactly one row in src/lib/auth/route-table.ts").toEqual([]);
+  });
+
+  it("has no row for a route that does not exist", () => {
+    const stale = ROUTES.filter((r) => !found.some((f) => f.file === r.file && f.method === r.method)).map(routeKey);
+    expect(stale).toEqual([]);
+  });
+
+  it("gives each row the path its file serves", () => {
+    for (const r of ROUTES) {
+      const fromFile =
+        "/api/" +
+        r.file
+          .replace(/\.(ts|js|mjs)$/, "")
+          .replace(/(^|\/)index$/, "")
+          .replace(/\[\.\.\.(\w+)\]/g, ":path*")
+          .replace(/\[(\w+)\]/g, ":$1");
+      expect(r.path, r.file).toBe(fromFile.replace(/\/$/, ""));
+    }
+  });
+
+  it("states the rule each endpoint declares", () => {
+    const declared = (r: RouteEntry) => found.find((f) => f.file === r.file && f.method === r.method)!.code;
+    for (const r of ROUTES) {
+      const code = declared(r);
+      const key = routeKey(r);
+      if (r.auth === "better-auth") expect(code, key).toMatch(/auth\.handler\(/);
+      else if (r.file === "health.ts") expect(code, key).not.toMatch(/endpoint\(/);
+      else if (r.auth === "anonymous" || r.auth === "user") expect(code, key).toMatch(new RegExp(`auth:\\s*"${r.auth}"`));
+      else {
+        const a = r.auth;
+        const [name, value] = "project" in a ? ["project", a.project] : ["org", a.org];
+        expect(code, key).toMatch(new RegExp(`auth:\\s*\\{\\s*${name}:\\s*"${value}"`));
+        if (a.permission) expect(code, key).toMatch(new RegExp(`permission:\\s*"${a.permission}"`));
+        else expect(code, key).not.toMatch(/permission:/);
+        if ("org" in a && a.from === "body") expect(code, key).toMatch(/from:\s*"body"/);
+      }
+    }
+  });
+
+  it("notices a route file with a method the table does not list", () => {
+    expect([...exportedMethods('export const GET = endpoint({ auth: "user" }, h);\nexport const PUT = x;').keys()]).toEqual(["GET", "PUT"]);
+  });
+});
