@@ -4,7 +4,7 @@
 import { expect, test } from "@playwright/test";
 import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
 import type { RoleName } from "@/lib/auth/roles";
-import { uniqueEmail } from "./helpers";
+import { CONFIRMATION_SUBJECT, uniqueEmail, waitForMail } from "./helpers";
 
 export type Actor = "anonymous" | RoleName | "outsider";
 export const ACTORS: readonly Actor[] = ["anonymous", "outsider", "client", "architect", "consultant", "owner"];
@@ -83,7 +83,13 @@ export async function createOutsider(tag = "outsider"): Promise<Outsider> {
   const password = "outsider-pass-2026";
   const res = await call(ANONYMOUS, "POST", "/api/v1/signup", { name: "Outside Member", email, password, organizationName: `Elsewhere ${email}` });
   expect(res.status, `sign-up of ${email}: ${res.text.slice(0, 200)}`).toBe(201);
-  return { actor: "outsider", cookie: cookieOf(res), email, password, organizationId: (res.body as { organizationId: string }).organizationId };
+  // The account is usable once its address is confirmed through the mailed link.
+  const { link } = await waitForMail(email, { subject: CONFIRMATION_SUBJECT });
+  const confirmed = await fetch(link, { redirect: "manual", signal: AbortSignal.timeout(15_000) });
+  expect(confirmed.status, `confirmation link of ${email}`).toBeLessThan(400);
+  const { cookie } = await signInAs("outsider", email, password);
+  const me = (await call({ actor: "outsider", cookie }, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
+  return { actor: "outsider", cookie, email, password, organizationId: me.memberships[0]!.organizationId };
 }
 
 /**

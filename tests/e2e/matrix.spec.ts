@@ -6,23 +6,11 @@ import { expect, test } from "@playwright/test";
 import { permissionFor, roleCan } from "@/lib/auth/roles";
 import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
 import { ACTORS, ANONYMOUS, addMember, call, createOutsider, signInAs, signInDemo, type Actor, type Caller, type Outsider } from "./api-actors";
+import { AUTH_ROUTES } from "@/lib/server/auth-routes";
 import { uniqueEmail } from "./helpers";
 
-/**
- * The better-auth paths the app serves, relative to /api/auth (the shape of an allowlist `AUTH_ROUTES`:
- * method and path, parameters as `:name`). Each comes with a request that reaches it and the answer every
- * caller gets.
- */
-const AUTH_ROUTES = [
-  { method: "POST", path: "/sign-in/email" },
-  { method: "POST", path: "/sign-out" },
-  { method: "GET", path: "/get-session" },
-  { method: "POST", path: "/request-password-reset" },
-  { method: "POST", path: "/reset-password" },
-  { method: "GET", path: "/reset-password/:token" },
-  { method: "GET", path: "/verify-email" },
-] as const;
-
+// A request that reaches each better-auth path the app serves (AUTH_ROUTES, relative to /api/auth), and the
+// answer every caller gets.
 const AUTH_PROBES: Record<string, { url: string; body?: unknown; status: number }> = {
   "POST /sign-in/email": { url: "/sign-in/email", body: { email: "nobody@e2e.example", password: "not-a-password" }, status: 401 },
   "POST /sign-out": { url: "/sign-out", body: {}, status: 200 },

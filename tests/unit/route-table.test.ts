@@ -71,7 +71,7 @@ describe("route table", () => {
     for (const r of ROUTES) {
       const code = declared(r);
       const key = routeKey(r);
-      if (r.auth === "better-auth") expect(code, key).toMatch(/auth\.handler\(/);
+      if (r.auth === "better-auth") expect(code, key).toMatch(/handleAuthRequest\(/);
       else if (r.file === "health.ts") expect(code, key).not.toMatch(/endpoint\(/);
       else if (r.auth === "anonymous" || r.auth === "user") expect(code, key).toMatch(new RegExp(`auth:\\s*"${r.auth}"`));
       else {

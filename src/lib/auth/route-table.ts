@@ -79,6 +79,14 @@ export const ROUTES: readonly RouteEntry[] = [
   {
     file: "v1/orgs/[orgId]/invitations/index.ts",
     path: "/api/v1/orgs/:orgId/invitations",
+    method: "GET",
+    auth: { org: "orgId", permission: "member:update" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/orgs/[orgId]/invitations/index.ts",
+    path: "/api/v1/orgs/:orgId/invitations",
     method: "POST",
     auth: { org: "orgId", permission: "invitation:create" },
     ok: 201,
