@@ -67,7 +67,7 @@ async function startStack(): Promise<Stack> {
     execFileSync("bash", ["-c", "source scripts/lib.sh && build_if_stale"], { stdio: ["ignore", "ignore", "inherit"] });
     const port = lib("free_port");
     const base = `http://127.0.0.1:${port}`;
-    server = spawn("node", ["dist/server/entry.mjs"], {
+    server = spawn("node", ["scripts/server.mjs"], {
       env: {
         ...process.env,
         HOST: "127.0.0.1",
@@ -112,20 +112,35 @@ function rssSampler(pid: number | null) {
   };
 }
 
-async function signUpOwner(base: string): Promise<{ cookie: string; userId: string; organizationId: string }> {
+async function signUpOwner(base: string, databaseUrl: string): Promise<{ cookie: string; userId: string; organizationId: string }> {
   const email = `load-${Date.now().toString(36)}@bench.example`;
+  const password = "load-bench-2026";
+  const headers = { "content-type": "application/json", origin: base };
   const res = await fetch(`${base}/api/v1/signup`, {
     method: "POST",
-    headers: { "content-type": "application/json", origin: base },
-    body: JSON.stringify({ name: "Load Bench", email, password: "load-bench-2026", organizationName: `Load bench ${email}` }),
+    headers,
+    body: JSON.stringify({ name: "Load Bench", email, password, organizationName: `Load bench ${email}` }),
   });
   if (res.status !== 201) throw new Error(`sign-up answered ${res.status}: ${(await res.text()).slice(0, 200)}`);
-  const { userId, organizationId } = (await res.json()) as { userId: string; organizationId: string };
-  const cookie = res.headers
+  // The bench has no mailbox: confirm the address in the database instead of following the mailed link.
+  const client = new pg.Client({ connectionString: databaseUrl });
+  await client.connect();
+  try {
+    await client.query(`update "user" set email_verified = true where email = $1`, [email]);
+  } finally {
+    await client.end();
+  }
+  const signIn = await fetch(`${base}/api/auth/sign-in/email`, { method: "POST", headers, body: JSON.stringify({ email, password }) });
+  if (signIn.status !== 200) throw new Error(`sign-in answered ${signIn.status}: ${(await signIn.text()).slice(0, 200)}`);
+  const cookie = signIn.headers
     .getSetCookie()
     .map((c) => c.split(";")[0])
     .join("; ");
-  return { cookie, userId, organizationId };
+  const me = (await (await fetch(`${base}/api/v1/me`, { headers: { cookie } })).json()) as {
+    user: { id: string };
+    memberships: { organizationId: string }[];
+  };
+  return { cookie, userId: me.user.id, organizationId: me.memberships[0]!.organizationId };
 }
 
 async function seedProjects(databaseUrl: string, organizationId: string, userId: string, n: number) {
@@ -186,7 +201,7 @@ export async function run(): Promise<void> {
   const rss = rssSampler(stack.pid);
   try {
     const { base } = stack;
-    const owner = await signUpOwner(base);
+    const owner = await signUpOwner(base, stack.databaseUrl);
     await seedProjects(stack.databaseUrl, owner.organizationId, owner.userId, PROJECTS);
     const headers = { cookie: owner.cookie, origin: base };
     const list = (await (await fetch(`${base}/api/v1/projects`, { headers })).json()) as { organizations: { projects: unknown[] }[] };

@@ -177,6 +177,7 @@ const CASES: Case[] = [
       return { path: `/api/v1/orgs/${w.orgId}/members/${memberId}` };
     },
   },
+  { method: "GET", path: "/api/v1/orgs/:orgId/invitations", prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/invitations` }) },
   {
     method: "POST",
     path: "/api/v1/orgs/:orgId/invitations",
