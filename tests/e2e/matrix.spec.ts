@@ -62,7 +62,7 @@ function expectedStatus(route: RouteEntry, actor: Actor, target?: Target): numbe
   if (actor === "anonymous") return 401;
   if (rule === "user") return route.ok;
   if (actor === "outsider") return 404;
-  if ("project" in rule) {
+  if ("project" in rule || "option" in rule) {
     const visible = roleCan(actor, { project: ["readAll"] }) || (target === "shared" && roleCan(actor, { project: ["readShared"] }));
     if (!visible) return 404;
   }

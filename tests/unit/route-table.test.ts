@@ -76,7 +76,16 @@ describe("route table", () => {
       else if (r.auth === "anonymous" || r.auth === "user") expect(code, key).toMatch(new RegExp(`auth:\\s*"${r.auth}"`));
       else {
         const a = r.auth;
-        const [name, value] = "project" in a ? ["project", a.project] : ["org", a.org];
+        const [name, value] =
+          "project" in a
+            ? ["project", a.project]
+            : "option" in a
+              ? ["option", a.option]
+              : "makeup" in a
+                ? ["makeup", a.makeup]
+                : "pane" in a
+                  ? ["pane", a.pane]
+                  : ["org", a.org];
         expect(code, key).toMatch(new RegExp(`auth:\\s*\\{\\s*${name}:\\s*"${value}"`));
         if (a.permission) expect(code, key).toMatch(new RegExp(`permission:\\s*"${a.permission}"`));
         else expect(code, key).not.toMatch(/permission:/);

@@ -16,9 +16,13 @@ export const statements = {
   ...defaultStatements,
   /** readAll: every project of the organisation; readShared: only projects shared with the member. */
   project: ["create", "readAll", "readShared", "update", "delete", "share"],
-  glazing: ["create", "update", "delete"],
+  /** The organisation's glazing library (saved panes and make-ups). */
+  glazing: ["read", "create", "update", "delete"],
+  /** assign: add, rename, re-point and remove a façade's options; review: approve or reject them. */
   option: ["assign", "review"],
   comment: ["create"],
+  /** Issuing a lettered schedule revision. */
+  revision: ["issue"],
   export: ["create", "receive"],
 } as const;
 
@@ -26,9 +30,10 @@ export const ac = createAccessControl(statements);
 
 const projectWork = {
   project: ["create", "readAll", "readShared", "update", "delete", "share"],
-  glazing: ["create", "update", "delete"],
+  glazing: ["read", "create", "update", "delete"],
   option: ["assign"],
   comment: ["create"],
+  revision: ["issue"],
   export: ["create", "receive"],
 } as const;
 
@@ -42,6 +47,7 @@ export const consultant = ac.newRole({ ...projectWork });
 
 export const architect = ac.newRole({
   project: ["readAll", "readShared"],
+  glazing: ["read"],
   option: ["review"],
   comment: ["create"],
   export: ["receive"],
@@ -94,6 +100,16 @@ export const PERMISSION_PHRASES: Partial<Record<PermissionKey, string>> = {
   "member:delete": "remove members",
   "invitation:create": "invite members",
   "invitation:cancel": "cancel invitations",
+  "project:readAll": "see drafts, options and comments",
+  "glazing:read": "read the glazing library",
+  "glazing:create": "add to the glazing library",
+  "glazing:update": "edit the glazing library",
+  "glazing:delete": "delete from the glazing library",
+  "option:assign": "change façade options",
+  "option:review": "approve or reject options",
+  "comment:create": "comment on options",
+  "revision:issue": "issue schedule revisions",
+  "export:create": "export or send schedules",
 };
 
 /** The permission object for a "resource:action" key. */

@@ -21,6 +21,9 @@ export type RouteMethod = "GET" | "POST" | "PUT" | "PATCH" | "DELETE" | "ALL";
  *   404), and the caller's role must hold `permission` when given (403 otherwise);
  * - org: the caller must be a member of the organisation named by a route parameter or a body field (404
  *   otherwise) and their role must hold `permission` (403 otherwise);
+ * - option: the façade option named by a route parameter; the rule of its project applies (as `project`);
+ * - makeup / pane: the saved library item named by a route parameter; the rule of its organisation applies
+ *   (as `org`: not a member of the item's organisation → 404, role without `permission` → 403);
  * - "better-auth": the request goes to better-auth, which answers for itself (an allowlist of its paths).
  */
 export type RouteAuth =
@@ -28,6 +31,9 @@ export type RouteAuth =
   | "user"
   | { readonly project: string; readonly permission?: PermissionKey }
   | { readonly org: string; readonly from?: "params" | "body"; readonly permission: PermissionKey }
+  | { readonly option: string; readonly permission?: PermissionKey }
+  | { readonly makeup: string; readonly permission: PermissionKey }
+  | { readonly pane: string; readonly permission: PermissionKey }
   | "better-auth";
 
 export interface RouteEntry {

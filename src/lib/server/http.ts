@@ -10,6 +10,7 @@ import { permissionFor, PERMISSION_PHRASES, type PermissionKey } from "@/lib/aut
 import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from "@/lib/server/db/unavailable";
 import type { Membership, ProjectRow } from "@/lib/server/services/access";
+import type { FacadeOption } from "@/lib/server/db/workspace-schema";
 
 /** The access rules, loaded on first use so that this module (and its tests) need no database. */
 const access = () => import("@/lib/server/services/access");
@@ -214,19 +215,31 @@ export interface OrgAuth {
   action?: string;
 }
 
+/** A façade option named by a route parameter: its project's rule applies (as ProjectAuth). */
+export interface OptionAuth {
+  option: string;
+  permission?: PermissionKey;
+  action?: string;
+}
+
+/** A saved make-up or pane named by a route parameter: its organisation's rule applies (as OrgAuth). */
+export type LibraryAuth = ({ makeup: string } | { pane: string }) & { permission: PermissionKey; action?: string };
+
 /**
- * Who may call: "anonymous" (anyone), "user" (signed in), or a permission on a project or an
- * organisation (signed in, and the role allows it; not visible → 404, not allowed → 403).
+ * Who may call: "anonymous" (anyone), "user" (signed in), or a permission on a project, an option,
+ * an organisation or a library item (signed in, and the role allows it; not visible → 404, not allowed → 403).
  */
-export type AuthSpec = "anonymous" | "user" | ProjectAuth | OrgAuth;
+export type AuthSpec = "anonymous" | "user" | ProjectAuth | OrgAuth | OptionAuth | LibraryAuth;
 
 type AuthContext<A extends AuthSpec> = A extends "anonymous"
   ? { user: SignedInUser | null }
   : A extends ProjectAuth
     ? { user: SignedInUser; project: ProjectRow; membership: Membership }
-    : A extends OrgAuth
-      ? { user: SignedInUser; membership: Membership }
-      : { user: SignedInUser };
+    : A extends OptionAuth
+      ? { user: SignedInUser; project: ProjectRow; membership: Membership; option: FacadeOption }
+      : A extends OrgAuth | LibraryAuth
+        ? { user: SignedInUser; membership: Membership }
+        : { user: SignedInUser };
 
 export interface EndpointSpec<A extends AuthSpec, P, B> {
   auth: A;
@@ -247,7 +260,8 @@ export type EndpointInput<A extends AuthSpec, P, B> = {
   body: B;
 } & AuthContext<A>;
 
-const phrase = (auth: ProjectAuth | OrgAuth) => auth.action ?? (auth.permission && PERMISSION_PHRASES[auth.permission]) ?? "do this";
+const phrase = (auth: ProjectAuth | OrgAuth | OptionAuth | LibraryAuth) =>
+  auth.action ?? (auth.permission && PERMISSION_PHRASES[auth.permission]) ?? "do this";
 
 function stringAt(source: unknown, key: string): string {
   const v = source && typeof source === "object" ? (source as Record<string, unknown>)[key] : undefined;
@@ -275,12 +289,19 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
     if (auth !== "anonymous" && !user) throw new HttpError(401, "Sign in to use this endpoint");
     const params = (spec.params ? parseParams(context.params, spec.params) : {}) as P;
 
-    let loaded: { project?: ProjectRow; membership?: Membership } = {};
+    let loaded: { project?: ProjectRow; membership?: Membership; option?: FacadeOption } = {};
     const authorise = async (from: "params" | "body", source: unknown) => {
       if (typeof auth !== "object") return;
       if ("project" in auth && from === "params") {
         const permission = auth.permission ? permissionFor(auth.permission) : undefined;
         loaded = await (await access()).requireProject(user!.id, stringAt(source, auth.project), permission, phrase(auth));
+      } else if ("option" in auth && from === "params") {
+        const permission = auth.permission ? permissionFor(auth.permission) : undefined;
+        loaded = await (await access()).requireOption(user!.id, stringAt(source, auth.option), permission, phrase(auth));
+      } else if (("makeup" in auth || "pane" in auth) && from === "params") {
+        const [kind, key] = "makeup" in auth ? (["makeup", auth.makeup] as const) : (["pane", auth.pane] as const);
+        const r = await (await access()).requireLibraryItem(user!.id, kind, stringAt(source, key), permissionFor(auth.permission), phrase(auth));
+        loaded = { membership: r.membership };
       } else if ("org" in auth && (auth.from ?? "params") === from) {
         loaded = {
           membership: await (await access()).requireOrgPermission(user!.id, stringAt(source, auth.org), permissionFor(auth.permission), phrase(auth)),

@@ -3,7 +3,7 @@
  * invitations are better-auth's tables in auth-schema.ts.
  */
 import { relations, sql } from "drizzle-orm";
-import { doublePrecision, index, integer, pgTable, primaryKey, text, timestamp, check } from "drizzle-orm/pg-core";
+import { doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, check } from "drizzle-orm/pg-core";
 import { member, organization, user } from "./auth-schema";
 
 const id = () =>
@@ -35,6 +35,14 @@ export const project = pgTable(
     /** IANA time-zone name of the site, e.g. Europe/Lisbon. */
     timeZone: text("time_zone").notNull(),
     elevationM: doublePrecision("elevation_m").notNull().default(0),
+    /** Ground reflectance in front of the façades, 0–1. */
+    groundAlbedo: doublePrecision("ground_albedo").notNull().default(0.2),
+    /** Sky-diffuse model of the schedules: "perez", "hay-davies" or "isotropic". */
+    skyModel: text("sky_model", { enum: ["perez", "hay-davies", "isotropic"] })
+      .notNull()
+      .default("perez"),
+    /** Twelve monthly Linke turbidity values (January first); null = the engine's default. */
+    linkeTurbidity: jsonb("linke_turbidity").$type<number[]>(),
     description: text("description"),
     createdById: text("created_by_id").references(() => user.id, { onDelete: "set null" }),
     createdAt: createdAt(),
@@ -62,6 +70,13 @@ export const facade = pgTable(
     azimuthDeg: doublePrecision("azimuth_deg").notNull(),
     /** Tilt from horizontal, degrees: 90 = vertical wall, 0 = flat roof light. */
     tiltDeg: doublePrecision("tilt_deg").notNull().default(90),
+    /** Glazed area of the whole façade, m², for W and kWh totals; null = per m² only. */
+    glazedAreaM2: doublePrecision("glazed_area_m2"),
+    /** The typical window the shading devices are drawn around, m. */
+    windowWidthM: doublePrecision("window_width_m"),
+    windowHeightM: doublePrecision("window_height_m"),
+    /** Shading devices as the schedule engine takes them, without the window: { overhang?, fins?, horizonDeg? }. */
+    shading: jsonb("shading").$type<{ overhang?: unknown; fins?: unknown; horizonDeg?: number }>(),
     position: integer("position").notNull().default(0),
     createdAt: createdAt(),
     updatedAt: updatedAt(),

@@ -1,2 +1,4 @@
 export * from "./auth-schema";
 export * from "./app-schema";
+export * from "./library-schema";
+export * from "./workspace-schema";

@@ -4,7 +4,7 @@
  */
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
-import { member, organization, project, projectShare } from "@/lib/server/db/schema";
+import { facadeOption, libraryPane, makeup, member, organization, project, projectShare, type FacadeOption } from "@/lib/server/db/schema";
 import { ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { roleCan, type Permission, isRoleName, type RoleName } from "@/lib/auth/roles";
 
@@ -81,4 +81,46 @@ export async function requireProject(
   if (!m || !(await canSeeProject(m, p))) throw notFound;
   if (permission && !roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return { project: p, membership: m };
+}
+
+/**
+ * Loads a façade option's project for the user, with the project's rule: NotFoundError when the
+ * option does not exist or its project is not visible to them, ForbiddenError without `permission`.
+ */
+export async function requireOption(
+  userId: string,
+  optionId: string,
+  permission?: Permission,
+  action = "change this option",
+): Promise<{ project: ProjectRow; membership: Membership; option: FacadeOption }> {
+  const o = (await db.select().from(facadeOption).where(eq(facadeOption.id, optionId)))[0];
+  if (!o) throw new NotFoundError("No such option, or its project is not shared with you");
+  try {
+    return { ...(await requireProject(userId, o.projectId, permission, action)), option: o };
+  } catch (err) {
+    if (err instanceof NotFoundError) throw new NotFoundError("No such option, or its project is not shared with you");
+    throw err;
+  }
+}
+
+/**
+ * The caller's membership of the organisation that owns a saved make-up or pane, provided the role
+ * grants `permission`: NotFoundError when the item does not exist or belongs to an organisation the
+ * caller is not a member of, ForbiddenError without the right.
+ */
+export async function requireLibraryItem(
+  userId: string,
+  kind: "makeup" | "pane",
+  itemId: string,
+  permission: Permission,
+  action: string,
+): Promise<{ membership: Membership; organizationId: string }> {
+  const table = kind === "makeup" ? makeup : libraryPane;
+  const row = (await db.select({ organizationId: table.organizationId }).from(table).where(eq(table.id, itemId)))[0];
+  const notFound = new NotFoundError(kind === "makeup" ? "No such make-up in your library" : "No such pane in your library");
+  if (!row) throw notFound;
+  const m = await membershipIn(userId, row.organizationId);
+  if (!m) throw notFound;
+  if (!roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
+  return { membership: m, organizationId: row.organizationId };
 }

@@ -1,0 +1,58 @@
+/**
+ * The brief's requirements: limits a project's options are checked against, entered by the consultant
+ * from the brief or the code they follow. Paneray ships no code values; local codes decide.
+ */
+import { z } from "./zod";
+import { rowId } from "./common";
+import { finite } from "./numbers";
+
+/** Each limit is optional; an absent limit is not checked. */
+export const Limits = z
+  .object({
+    maxGValue: finite("maxGValue", 0, 1),
+    minLightTransmittance: finite("minLightTransmittance", 0, 1),
+    maxUValue: finite("maxUValue", 0, 10),
+    maxPeakTransmittedWm2: finite("maxPeakTransmittedWm2", 0, 1500),
+    maxAnnualSolarGainKWhm2: finite("maxAnnualSolarGainKWhm2", 0, 5000),
+  })
+  .partial()
+  .strict();
+export type Limits = z.infer<typeof Limits>;
+export type RequirementKey = keyof Limits;
+
+export const REQUIREMENT_KEYS = [
+  "maxGValue",
+  "minLightTransmittance",
+  "maxUValue",
+  "maxPeakTransmittedWm2",
+  "maxAnnualSolarGainKWhm2",
+] as const satisfies readonly RequirementKey[];
+
+/** How each requirement is named on screen and in messages. */
+export const REQUIREMENT_LABELS: Record<RequirementKey, string> = {
+  maxGValue: "Maximum g-value",
+  minLightTransmittance: "Minimum light transmittance τv",
+  maxUValue: "Maximum U-value (W/m²K)",
+  maxPeakTransmittedWm2: "Maximum peak transmitted (W/m²)",
+  maxAnnualSolarGainKWhm2: "Maximum annual solar gain (kWh/m²)",
+};
+
+/** PUT /projects/:id/requirements: the project's limits and per-façade overrides (a façade's limits replace the project's key by key). */
+export const RequirementsRequest = z.object({
+  project: Limits.default({}),
+  facades: z.record(rowId, Limits).optional().default({}),
+  /** The version read; a stale one answers 409. Omitted = overwrite. */
+  version: z.number().int().positive().optional(),
+});
+export type RequirementsRequest = z.infer<typeof RequirementsRequest>;
+
+export type FlagStatus = "pass" | "fail" | "unknown";
+
+/** One requirement checked for one option: margin = limit − value for maxima, value − limit for minima (≥ 0 passes); null when unknown. */
+export interface RequirementFlag {
+  requirement: RequirementKey;
+  limit: number;
+  value: number | null;
+  status: FlagStatus;
+  margin: number | null;
+}
