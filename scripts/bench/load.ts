@@ -5,7 +5,11 @@
 // By default it starts its own throwaway PostgreSQL and the built server (dist/, built when stale) on free
 // ports and removes them afterwards. With BENCH_URL and DATABASE_URL (and optionally BENCH_PID, the server's
 // process id, for RSS) it uses a running Paneray instead. LOAD_SECONDS sets each phase's length (default 30),
-// LOAD_PROJECTS the number of projects (default 2000).
+// LOAD_PROJECTS the number of projects (default 2000). SERVER_NODE_ARGS passes flags to the server's node
+// (e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof" to profile it).
+//
+// Besides latency, each phase prints the server's CPU time per request (user + system, all its threads, from
+// /proc): a figure that a busy shared machine disturbs much less than p99, for comparing two versions.
 import autocannon from "autocannon";
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
@@ -67,7 +71,7 @@ async function startStack(): Promise<Stack> {
     execFileSync("bash", ["-c", "source scripts/lib.sh && build_if_stale"], { stdio: ["ignore", "ignore", "inherit"] });
     const port = lib("free_port");
     const base = `http://127.0.0.1:${port}`;
-    server = spawn("node", ["scripts/server.mjs"], {
+    server = spawn("node", [...(process.env.SERVER_NODE_ARGS?.split(/\s+/).filter(Boolean) ?? []), "scripts/server.mjs"], {
       env: {
         ...process.env,
         HOST: "127.0.0.1",
@@ -168,13 +172,34 @@ async function seedProjects(databaseUrl: string, organizationId: string, userId:
   }
 }
 
+/** CPU seconds (user + system, every thread) the process has used so far, or null. */
+function cpuSeconds(pid: number | null): number | null {
+  if (!pid) return null;
+  try {
+    // Fields after the command name (which may hold spaces): utime and stime are the 12th and 13th, in clock ticks (100 Hz).
+    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1]!.split(" ");
+    return (Number(fields[11]) + Number(fields[12])) / 100;
+  } catch {
+    return null;
+  }
+}
+
+/** Server CPU per request over a phase, e.g. "2.9 ms CPU/request". */
+function cpuPerRequest(before: number | null, after: number | null, requests: number): string {
+  if (before === null || after === null || requests === 0) return "CPU n/a";
+  return `${(((after - before) * 1000) / requests).toFixed(2)} ms CPU/request`;
+}
+
+const loadAverage = () => readFileSync("/proc/loadavg", "utf8").split(" ").slice(0, 3).join(" ");
+
 type Result = autocannon.Result;
 
-function report(label: string, r: Result, rss: string, target: string) {
+function report(label: string, r: Result, rss: string, target: string, cpu = "") {
   const errors = r.errors + r.timeouts + r.non2xx;
   console.log(
     `${label}: ${r.requests.average.toFixed(1)} req/s, p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, ` +
-      `errors ${errors} (connection ${r.errors}, timeouts ${r.timeouts}, non-2xx ${r.non2xx}) of ${r.requests.total}, server peak RSS ${rss}   ${target}`,
+      `errors ${errors} (connection ${r.errors}, timeouts ${r.timeouts}, non-2xx ${r.non2xx}) of ${r.requests.total}, server peak RSS ${rss}` +
+      `${cpu ? `, ${cpu}` : ""}, load average ${loadAverage()}   ${target}`,
   );
 }
 
@@ -209,12 +234,15 @@ export async function run(): Promise<void> {
     console.log(`seeded ${PROJECTS} projects in a throwaway organisation; GET /api/v1/projects returns ${listed} of them; ${SECONDS} s per phase`);
 
     rss.reset();
+    const listCpu = cpuSeconds(stack.pid);
     const listing = await autocannon({ url: `${base}/api/v1/projects`, connections: 50, duration: SECONDS, headers });
+    const listCpuUsed = cpuPerRequest(listCpu, cpuSeconds(stack.pid), listing.requests.total);
     report(
       "GET /api/v1/projects, 50 clients",
       listing,
       rss.peak(),
       `target: 0 errors, p99 ≤ ${TARGETS.listP99Ms} ms: ${verdict(listing.errors + listing.timeouts + listing.non2xx === 0 && listing.latency.p99 <= TARGETS.listP99Ms)}`,
+      listCpuUsed,
     );
 
     const pane = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };

@@ -44,7 +44,8 @@ export const auth = betterAuth({
   onAPIError: { throw: true },
   // Limits are counted in PostgreSQL by lib/server/auth-gate.ts and the sign-up endpoint (shared by all servers).
   rateLimit: { enabled: false },
-  advanced: { ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] } },
+  // One query (session joined with its user) per session lookup instead of two.
+  advanced: { ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] }, database: { joins: true } },
   emailAndPassword: {
     enabled: true,
     minPasswordLength: 8,

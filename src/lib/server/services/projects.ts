@@ -1,8 +1,8 @@
 import { and, asc, count, desc, eq, exists, gt, inArray, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
-import { facade, member, project, projectShare, user } from "@/lib/server/db/schema";
+import { facade, member, organization, project, projectShare, user } from "@/lib/server/db/schema";
 import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
-import { ROLE_NAMES, roleCan } from "@/lib/auth/roles";
+import { isRoleName, ROLE_NAMES, roleCan } from "@/lib/auth/roles";
 import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
 import { DEFAULT_PAGE_LIMIT, pageOf, type Cursor, type Page } from "@/lib/contracts/pagination";
 import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
@@ -34,7 +34,10 @@ interface VisibleQuery {
  * façade counts: a single query (the page's `limit + 1` rows in a subquery, to know whether another
  * page follows, joined to their façades and grouped).
  */
-async function visibleProjects(userId: string, q: VisibleQuery): Promise<Page<ProjectListRow & { memberId: string }>> {
+async function visibleProjects(
+  userId: string,
+  q: VisibleQuery,
+): Promise<Page<ProjectListRow & { memberId: string }> & { memberships: Membership[] | null }> {
   const sharedWithMember = db
     .select({ one: sql`1` })
     .from(projectShare)
@@ -60,15 +63,39 @@ async function visibleProjects(userId: string, q: VisibleQuery): Promise<Page<Pr
     .orderBy(desc(project.updatedAt), asc(project.id))
     .limit(q.limit + 1)
     .as("page_rows");
+  // The user's memberships ride along as one uncorrelated subquery (evaluated once, not per row), which
+  // saves the list a round trip to the database; an empty page has no row to carry them.
+  const memberships = sql<
+    MembershipJson[]
+  >`(select coalesce(json_agg(json_build_array(${member.id}, ${member.organizationId}, ${organization.name}, ${organization.slug}, ${member.role}) order by ${member.createdAt}), '[]'::json) from ${member} inner join ${organization} on ${organization.id} = ${member.organizationId} where ${member.userId} = ${userId})`;
   const rows = await db
-    .select({ project, memberId: pageRows.memberId, facadeCount: count(facade.id), sortKey: updatedKey })
+    .select({ project, memberId: pageRows.memberId, facadeCount: count(facade.id), sortKey: updatedKey, memberships })
     .from(pageRows)
     .innerJoin(project, eq(project.id, pageRows.id))
     .leftJoin(facade, eq(facade.projectId, project.id))
     .groupBy(project.id, pageRows.memberId)
     .orderBy(desc(project.updatedAt), asc(project.id));
   const page = pageOf(rows, q.limit, (r) => ({ key: r.sortKey, id: r.project.id }));
-  return { items: page.items.map((r) => ({ ...r.project, facadeCount: r.facadeCount, memberId: r.memberId })), nextCursor: page.nextCursor };
+  return {
+    items: page.items.map((r) => ({ ...r.project, facadeCount: r.facadeCount, memberId: r.memberId })),
+    nextCursor: page.nextCursor,
+    memberships: rows[0] ? membershipsFromJson(rows[0].memberships) : null,
+  };
+}
+
+/** [memberId, organizationId, organizationName, organizationSlug, role] per membership, oldest first. */
+type MembershipJson = [string, string, string, string, string];
+
+function membershipsFromJson(rows: MembershipJson[]): Membership[] {
+  return rows
+    .map(([memberId, organizationId, organizationName, organizationSlug, role]) => ({
+      memberId,
+      organizationId,
+      organizationName,
+      organizationSlug,
+      role,
+    }))
+    .filter((m): m is Membership => isRoleName(m.role));
 }
 
 const withoutMemberId = ({ memberId: _m, ...row }: ProjectListRow & { memberId: string }): ProjectListRow => row;
@@ -101,7 +128,8 @@ export async function projectsPage(
   userId: string,
   q: VisibleQuery,
 ): Promise<{ organizations: { membership: Membership; projects: ProjectListRow[] }[]; nextCursor: string | null }> {
-  const [memberships, page] = await Promise.all([membershipsOf(userId), visibleProjects(userId, q)]);
+  const page = await visibleProjects(userId, q);
+  const memberships = page.memberships ?? (await membershipsOf(userId));
   return {
     organizations: memberships
       .filter((m) => !q.organizationId || m.organizationId === q.organizationId)
