@@ -54,7 +54,8 @@ const extraHosts = (process.env.PANERAY_HOSTS ?? "")
 
 export default defineConfig({
   output: "server",
-  adapter: node({ mode: "standalone" }),
+  // "middleware": the built handler only renders; scripts/server.mjs is the HTTP server (headers, static files).
+  adapter: node({ mode: "middleware" }),
   integrations: [react(), calcWorker],
   security: {
     // Without this the node adapter distrusts the Host header: request.url becomes

@@ -3,7 +3,7 @@
 // 50 ms. Prints health p50/p99, schedules per second, refusals and errors, and the server's peak
 // RSS, first with the calculations on the main thread (CALC_WORKERS=0), then in the worker pool.
 //
-// Starts `node dist/server/entry.mjs` itself on a free loopback port (build first: npx astro build)
+// Starts `node scripts/server.mjs` (the built server) itself on a free loopback port (build first: npx astro build)
 // against DATABASE_URL (a migrated, seeded database, e.g. the one `npm start` runs); or set BENCH_URL
 // to measure a server that is already running (one configuration, RSS not measured). Stops by itself.
 import { spawn, type ChildProcess } from "node:child_process";
@@ -99,7 +99,7 @@ async function startServer(workers: string | undefined): Promise<{ base: string;
     CALC_WORKERS: workers,
   };
   if (workers === undefined) delete env.CALC_WORKERS;
-  const child = spawn(process.execPath, ["dist/server/entry.mjs"], { env, stdio: ["ignore", "ignore", "inherit"] });
+  const child = spawn(process.execPath, ["scripts/server.mjs"], { env, stdio: ["ignore", "ignore", "inherit"] });
   for (let i = 0; i < 150; i++) {
     await new Promise((r) => setTimeout(r, 200));
     if (child.exitCode !== null) throw new Error(`the server exited with code ${child.exitCode}`);
