@@ -5,17 +5,7 @@
 import { relations, sql } from "drizzle-orm";
 import { doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, check } from "drizzle-orm/pg-core";
 import { member, organization, user } from "./auth-schema";
-
-const id = () =>
-  text("id")
-    .primaryKey()
-    .$defaultFn(() => crypto.randomUUID());
-const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
-const updatedAt = () =>
-  timestamp("updated_at", { withTimezone: true })
-    .defaultNow()
-    .$onUpdate(() => new Date())
-    .notNull();
+import { createdAt, id, updatedAt } from "./columns";
 
 /** A building studied for one organisation: its site fixes the sun, its façades the orientations. */
 export const project = pgTable(

@@ -4,19 +4,9 @@
  * an issued schedule keeps the make-up it was issued with however the library changes later.
  */
 import { relations } from "drizzle-orm";
-import { index, integer, jsonb, pgTable, text, timestamp, unique } from "drizzle-orm/pg-core";
+import { index, integer, jsonb, pgTable, text, unique } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth-schema";
-
-const id = () =>
-  text("id")
-    .primaryKey()
-    .$defaultFn(() => crypto.randomUUID());
-const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
-const updatedAt = () =>
-  timestamp("updated_at", { withTimezone: true })
-    .defaultNow()
-    .$onUpdate(() => new Date())
-    .notNull();
+import { createdAt, id, updatedAt } from "./columns";
 
 /** A saved pane; its current content is the revision numbered `revision`. */
 export const libraryPane = pgTable(

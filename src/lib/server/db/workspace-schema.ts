@@ -8,17 +8,7 @@ import { index, integer, jsonb, pgTable, text, timestamp, unique, uniqueIndex, c
 import { user } from "./auth-schema";
 import { facade, project } from "./app-schema";
 import { makeup, makeupRevision } from "./library-schema";
-
-const id = () =>
-  text("id")
-    .primaryKey()
-    .$defaultFn(() => crypto.randomUUID());
-const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
-const updatedAt = () =>
-  timestamp("updated_at", { withTimezone: true })
-    .defaultNow()
-    .$onUpdate(() => new Date())
-    .notNull();
+import { createdAt, id, updatedAt } from "./columns";
 
 export const OPTION_STATUSES = ["proposed", "approved", "rejected"] as const;
 export type OptionStatus = (typeof OPTION_STATUSES)[number];
