@@ -29,7 +29,7 @@ const SOURCE: Record<RequirementKey, { input: keyof FlagInputs; kind: "max" | "m
 };
 
 /** Margins are compared after rounding to 1e-9 so that a value equal to its limit passes despite float noise. */
-const round9 = (x: number) => Math.round(x * 1e9) / 1e9;
+const round9 = (x: number) => Math.round(x * 1e9) / 1e9 + 0; // + 0 turns −0 into 0
 
 /** A façade's limits: the project's, replaced key by key by the façade's overrides. */
 export function effectiveLimits(project: Limits | undefined, facade: Limits | undefined): Limits {
