@@ -54,8 +54,8 @@ let client: Caller;
 let projectId: string;
 let north: string;
 let west: string;
-const mk: Record<string, Awaited<ReturnType<typeof insertMakeup>>> = {};
-const opt: Record<string, string> = {};
+const mk = {} as Record<"clear" | "tinted" | "measured", Awaited<ReturnType<typeof insertMakeup>>>;
+const opt = {} as Record<"northClear" | "northTinted" | "westClear" | "westMeasured", string>;
 
 beforeAll(async () => {
   o = await newOwner("results");
