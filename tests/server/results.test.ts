@@ -211,12 +211,10 @@ describe("project results", () => {
   });
 
   it("flags each option against the project limits with the façade's overrides; τv unknown without measured values", async () => {
-    await db
-      .insert(projectRequirements)
-      .values({
-        projectId,
-        limits: { project: { maxGValue: 0.6, minLightTransmittance: 0.7, maxUValue: 3.5 }, facades: { [west]: { maxGValue: 0.75 } } },
-      });
+    await db.insert(projectRequirements).values({
+      projectId,
+      limits: { project: { maxGValue: 0.6, minLightTransmittance: 0.7, maxUValue: 3.5 }, facades: { [west]: { maxGValue: 0.75 } } },
+    });
     const r = await projectResults(projectId, YEAR);
     const n = optionOf(r, opt.northClear);
     expect(r.facades[0]!.limits).toEqual({ maxGValue: 0.6, minLightTransmittance: 0.7, maxUValue: 3.5 });
