@@ -27,7 +27,7 @@ export function LineChart(props: {
 }) {
   const [ref, W] = useWidth<HTMLDivElement>();
   const H = 260;
-  const M = { top: 12, right: 14, bottom: 40, left: 52 };
+  const M = { top: 12, right: 24, bottom: 40, left: 52 };
   const yMax = Math.max(1e-9, ...props.series.flatMap((s) => s.points.map((p) => p.y)));
   const x = scaleLinear()
     .domain(props.xDomain)
@@ -41,7 +41,7 @@ export function LineChart(props: {
     .y((d) => y(d.y));
   const ticks = W < 420 ? props.xTicks.filter((_, i) => i % 2 === 0) : props.xTicks;
   return (
-    <figure className="space-y-2" ref={ref}>
+    <figure className="min-w-0 space-y-2" ref={ref}>
       <figcaption className="text-sm font-bold">{props.title}</figcaption>
       <svg width={W} height={H} role="img" aria-label={props.title} data-testid={props.testId}>
         {y.ticks(5).map((t) => (
@@ -103,7 +103,7 @@ export function MonthlyBars(props: { title: string; series: { key: string; label
     .nice();
   const names = W < 520 ? MONTHS : MONTH_NAMES;
   return (
-    <figure className="space-y-2" ref={ref}>
+    <figure className="min-w-0 space-y-2" ref={ref}>
       <figcaption className="text-sm font-bold">{props.title}</figcaption>
       <svg width={W} height={H} role="img" aria-label={props.title} data-testid="monthly-bars">
         {y.ticks(5).map((t) => (

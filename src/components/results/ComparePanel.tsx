@@ -83,7 +83,7 @@ export default function ComparePanel({ projectId, optionIds, year }: Props) {
           </tbody>
         </table>
       </div>
-      <div className="grid gap-6 xl:grid-cols-2">
+      <div className="grid min-w-0 grid-cols-1 gap-6 xl:grid-cols-2">
         <LineChart
           title="Solar transmittance τe and g by angle of incidence"
           testId="compare-angular"

@@ -12,7 +12,7 @@ const MARK = { pass: "✓", fail: "✗", unknown: "?" } as const;
 export default function FlagChips({ flags }: { flags: RequirementFlag[] }) {
   if (flags.length === 0) return <span className="text-xs text-slate">no limits set</span>;
   return (
-    <ul className="flex min-w-[14rem] flex-col gap-1">
+    <ul className="flex min-w-[20rem] flex-wrap gap-1">
       {flags.map((f) => (
         <li
           key={f.requirement}

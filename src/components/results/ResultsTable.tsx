@@ -59,7 +59,7 @@ export default function ResultsTable({ results, selected, onToggle, timeZone }: 
           />
         ),
       }),
-      col.accessor("facadeName", { header: "Façade", filterFn: "equals" }),
+      col.accessor("facadeName", { header: "Façade", filterFn: "equals", cell: (c) => <span className="block min-w-[7rem]">{c.getValue()}</span> }),
       col.accessor("name", {
         header: "Option",
         cell: (c) => (

@@ -4,7 +4,7 @@ import { useEffect, useRef, useState } from "react";
  * The pixel width of an element, kept up to date: charts draw at their real size so that their labels stay
  * the size they are written (≥ 10 px) on a phone as on a desktop.
  */
-export function useWidth<T extends HTMLElement>(fallback = 520) {
+export function useWidth<T extends HTMLElement>(fallback = 300) {
   const ref = useRef<T>(null);
   const [width, setWidth] = useState(fallback);
   useEffect(() => {
