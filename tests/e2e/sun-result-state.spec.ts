@@ -31,7 +31,7 @@ test("changed inputs mark the year's figures stale until they are recalculated",
   await expect(results).toHaveAttribute("data-stale", "false");
 
   // Another façade: stale; recalculating gives that façade's figures (a different orientation, different total).
-  const facade = page.getByLabel("Façade");
+  const facade = page.getByLabel("Façade", { exact: true });
   const options = await facade.locator("option").allTextContents();
   await facade.selectOption({ index: 2 });
   await expect(results).toHaveAttribute("data-stale", "true");
