@@ -103,20 +103,18 @@ async function seedProject(databaseUrl: string, organizationId: string, userId: 
         .returning();
       revisions.push(rev!);
     }
-    await db
-      .insert(facadeOption)
-      .values(
-        fs.flatMap((f) =>
-          revisions.map((r, i) => ({
-            projectId: p!.id,
-            facadeId: f.id,
-            makeupId: r.makeupId,
-            makeupRevisionId: r.id,
-            name: MAKEUPS[i]!.name,
-            position: i,
-          })),
-        ),
-      );
+    await db.insert(facadeOption).values(
+      fs.flatMap((f) =>
+        revisions.map((r, i) => ({
+          projectId: p!.id,
+          facadeId: f.id,
+          makeupId: r.makeupId,
+          makeupRevisionId: r.id,
+          name: MAKEUPS[i]!.name,
+          position: i,
+        })),
+      ),
+    );
     return p!.id;
   } finally {
     await pool.end();
