@@ -137,9 +137,12 @@ export default function ResultsTable({ results, selected, onToggle, timeZone }: 
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-3 text-sm">
-        <label className="flex flex-col">
-          <span className="font-bold text-slate">Façade</span>
+        <div className="flex flex-col">
+          <label htmlFor="filter-facadeName" className="font-bold text-slate">
+            Façade
+          </label>
           <select
+            id="filter-facadeName"
             className="rounded border border-line px-2 py-1"
             value={filterOf("facadeName")}
             onChange={(e) => setFilter("facadeName", e.target.value)}
@@ -151,10 +154,17 @@ export default function ResultsTable({ results, selected, onToggle, timeZone }: 
               </option>
             ))}
           </select>
-        </label>
-        <label className="flex flex-col">
-          <span className="font-bold text-slate">Status</span>
-          <select className="rounded border border-line px-2 py-1" value={filterOf("status")} onChange={(e) => setFilter("status", e.target.value)}>
+        </div>
+        <div className="flex flex-col">
+          <label htmlFor="filter-status" className="font-bold text-slate">
+            Status
+          </label>
+          <select
+            id="filter-status"
+            className="rounded border border-line px-2 py-1"
+            value={filterOf("status")}
+            onChange={(e) => setFilter("status", e.target.value)}
+          >
             <option value="">any status</option>
             {Object.entries(STATUS_LABEL).map(([k, v]) => (
               <option key={k} value={k}>
@@ -162,10 +172,17 @@ export default function ResultsTable({ results, selected, onToggle, timeZone }: 
               </option>
             ))}
           </select>
-        </label>
-        <label className="flex flex-col">
-          <span className="font-bold text-slate">Requirements</span>
-          <select className="rounded border border-line px-2 py-1" value={filterOf("overall")} onChange={(e) => setFilter("overall", e.target.value)}>
+        </div>
+        <div className="flex flex-col">
+          <label htmlFor="filter-overall" className="font-bold text-slate">
+            Requirements
+          </label>
+          <select
+            id="filter-overall"
+            className="rounded border border-line px-2 py-1"
+            value={filterOf("overall")}
+            onChange={(e) => setFilter("overall", e.target.value)}
+          >
             <option value="">any result</option>
             {Object.entries(OVERALL_LABEL).map(([k, v]) => (
               <option key={k} value={k}>
@@ -173,7 +190,7 @@ export default function ResultsTable({ results, selected, onToggle, timeZone }: 
               </option>
             ))}
           </select>
-        </label>
+        </div>
         <p className="self-end text-slate" aria-live="polite">
           {shown.length} of {data.length} options
         </p>
