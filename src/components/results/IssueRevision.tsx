@@ -6,6 +6,7 @@ import type { z } from "zod";
 import { RevisionIssueRequest } from "@/lib/contracts/revisions";
 import type { ResultsResponse, RevisionResponse } from "@/lib/contracts/results";
 import { api, ApiError } from "@/lib/client/api";
+import { isConflict } from "@/lib/client/query";
 import { applyServerErrors, Field, FormMessage } from "@/components/forms/Field";
 
 type Input = z.input<typeof RevisionIssueRequest>;
@@ -92,7 +93,24 @@ export default function IssueRevision({ projectId, results }: { projectId: strin
                 <textarea id="issue-note" rows={3} className="w-full rounded border border-line px-2 py-1" {...register("note")} />
               </Field>
               {issue.isError && !(issue.error instanceof ApiError && issue.error.errors.some((e) => e.field === "note")) && (
-                <FormMessage kind="error">{issue.error.message}</FormMessage>
+                <FormMessage kind="error">
+                  {issue.error.message}
+                  {isConflict(issue.error) && (
+                    <>
+                      {" "}
+                      <button
+                        type="button"
+                        className="btn-quiet"
+                        onClick={() => {
+                          issue.reset();
+                          void queryClient.invalidateQueries({ queryKey: ["results", projectId] });
+                        }}
+                      >
+                        Reload the options
+                      </button>
+                    </>
+                  )}
+                </FormMessage>
               )}
               <div className="flex flex-wrap gap-2">
                 <button type="submit" className="btn" disabled={issue.isPending || approved.length === 0} data-testid="issue-submit">

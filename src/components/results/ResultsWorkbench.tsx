@@ -3,7 +3,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { api } from "@/lib/client/api";
 import { withQueryClient } from "@/lib/client/query";
 import type { ResultsResponse, RevisionResponse } from "@/lib/contracts/results";
-import { MAX_COMPARED_OPTIONS, MAX_RESULTS_YEAR, MIN_RESULTS_YEAR } from "@/lib/contracts/revisions";
+import { MAX_COMPARED_OPTIONS, ResultsYear } from "@/lib/contracts/revisions";
 import ResultsTable from "./ResultsTable";
 import ComparePanel from "./ComparePanel";
 import IssueRevision from "./IssueRevision";
@@ -30,7 +30,9 @@ function ResultsWorkbench({ projectId, defaultYear, canIssue }: Props) {
     queryKey: ["revisions", projectId],
     queryFn: () => api<{ revisions: RevisionResponse[] }>("GET", `/api/v1/projects/${projectId}/revisions`),
   });
-  const yearValid = /^\d{4}$/.test(yearText) && Number(yearText) >= MIN_RESULTS_YEAR && Number(yearText) <= MAX_RESULTS_YEAR;
+  // The same schema as the endpoint's ?year=.
+  const yearCheck = ResultsYear.safeParse(yearText.trim() === "" ? undefined : yearText.trim());
+  const yearValid = yearCheck.success;
   const toggle = (id: string) => setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length >= MAX_COMPARED_OPTIONS ? s : [...s, id]));
   const r = results.data;
   // While another year loads, the figures on screen belong to the previous year: grey them and say so.
@@ -47,7 +49,7 @@ function ResultsWorkbench({ projectId, defaultYear, canIssue }: Props) {
             className="flex items-end gap-2"
             onSubmit={(e) => {
               e.preventDefault();
-              if (yearValid) setYear(Number(yearText));
+              if (yearCheck.success) setYear(yearCheck.data);
             }}
             noValidate
           >
@@ -71,7 +73,7 @@ function ResultsWorkbench({ projectId, defaultYear, canIssue }: Props) {
         </div>
         {!yearValid && (
           <p id="year-error" className="field-error" role="alert">
-            Year must be a whole number between {MIN_RESULTS_YEAR} and {MAX_RESULTS_YEAR}
+            {yearCheck.error?.issues[0]?.message}
           </p>
         )}
         {r?.site && (
