@@ -26,7 +26,7 @@ const TARGETS = { listP99Ms: 300, healthP99Ms: 100 };
 
 const lib = (fn: string) => execFileSync("bash", ["-c", `source scripts/lib.sh && ${fn}`], { encoding: "utf8" }).trim();
 
-interface Stack {
+export interface Stack {
   base: string;
   databaseUrl: string;
   pid: number | null;
@@ -46,8 +46,8 @@ async function waitHealthy(base: string, ms: number) {
   }
 }
 
-/** A throwaway PostgreSQL and the built server on free loopback ports. */
-async function startStack(): Promise<Stack> {
+/** A throwaway PostgreSQL and the built server on free loopback ports (also used by the results bench). */
+export async function startStack(): Promise<Stack> {
   const dir = mkdtempSync(join(tmpdir(), "paneray-load."));
   chmodSync(dir, 0o755);
   const pgPort = lib("free_port");
@@ -116,7 +116,7 @@ function rssSampler(pid: number | null) {
   };
 }
 
-async function signUpOwner(base: string, databaseUrl: string): Promise<{ cookie: string; userId: string; organizationId: string }> {
+export async function signUpOwner(base: string, databaseUrl: string): Promise<{ cookie: string; userId: string; organizationId: string }> {
   const email = `load-${Date.now().toString(36)}@bench.example`;
   const password = "load-bench-2026";
   const headers = { "content-type": "application/json", origin: base };

@@ -14,6 +14,7 @@ import { SignUpRequest, InvitationRequest, MemberRoleRequest } from "@/lib/contr
 import { GlazingRequest } from "@/lib/contracts/glazing";
 import { ProjectCreateRequest, ProjectUpdateRequest, ShareRequest } from "@/lib/contracts/projects";
 import { ScheduleRequest } from "@/lib/contracts/schedule";
+import { RevisionIssueRequest } from "@/lib/contracts/revisions";
 import { call, createOutsider, type Outsider } from "./api-actors";
 
 const SEED = Number(process.env.FC_SEED ?? 20261202);
@@ -344,6 +345,14 @@ const FUZZED: FuzzRoute[] = [
     schema: MemberRoleRequest,
     url: (c) => `/api/v1/orgs/${c.outsider.organizationId}/members/${c.memberId}`,
     example: () => ({ role: "owner" }),
+  },
+  {
+    // The fuzz target has no approved option: a valid body is answered 409 and nothing is saved either way.
+    method: "POST",
+    path: "/api/v1/projects/:id/revisions",
+    schema: RevisionIssueRequest,
+    url: () => `/api/v1/projects/${projectId}/revisions`,
+    example: () => ({ note: "Fuzzed revision note", year: 2026 }),
   },
 ];
 

@@ -8,6 +8,7 @@ import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
 import { ACTORS, ANONYMOUS, addMember, call, createOutsider, signInAs, signInDemo, type Actor, type Caller, type Outsider } from "./api-actors";
 import { AUTH_ROUTES } from "@/lib/server/auth-routes";
 import { uniqueEmail } from "./helpers";
+import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow, tintedPane } from "./workspace-rows";
 
 // A request that reaches each better-auth path the app serves (AUTH_ROUTES, relative to /api/auth), and the
 // answer every caller gets.
@@ -36,6 +37,7 @@ interface World {
   members: string[];
   invitations: string[];
   outsiderInvitationId: string;
+  makeups: string[];
 }
 let w: World;
 
@@ -132,6 +134,74 @@ const projectCases = (target: Target): Case[] => [
   },
 ];
 
+/**
+ * A fresh project with one façade and two options of saved make-ups (one approved), shared with the demo
+ * client or not; `issued` also issues revision A as the consultant.
+ */
+async function workspaceProject(target: Target, issued = false): Promise<{ id: string; options: string[] }> {
+  const res = await call(consultant(), "POST", "/api/v1/projects", {
+    organizationId: w.orgId,
+    name: `Matrix workspace (${target})`,
+    siteName: "Test site",
+    latitudeDeg: 50,
+    longitudeDeg: 5,
+    timeZone: "UTC",
+    facades: [{ name: "South", azimuthDeg: 180 }],
+  });
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  const p = (res.body as { project: { id: string }; facades?: { id: string }[] }).project;
+  w.projects.push(p.id);
+  const got = (await call(consultant(), "GET", `/api/v1/projects/${p.id}`)).body as { facades: { id: string }[] };
+  const facadeId = got.facades[0]!.id;
+  if (target === "shared")
+    expect((await call(consultant(), "POST", `/api/v1/projects/${p.id}/shares`, { memberId: w.clientMemberId })).status).toBe(201);
+  const a = await insertMakeupRow(w.orgId, "Matrix clear double", doubleUnit(clearPane(6), clearPane(4)));
+  const b = await insertMakeupRow(w.orgId, "Matrix tinted double", doubleUnit(tintedPane(6), clearPane(4)));
+  w.makeups.push(a.id, b.id);
+  const options = [await insertOptionRow(p.id, facadeId, a, "Clear", "approved"), await insertOptionRow(p.id, facadeId, b, "Tinted")];
+  if (issued) expect((await call(consultant(), "POST", `/api/v1/projects/${p.id}/revisions`, { note: "Matrix" })).status).toBe(201);
+  return { id: p.id, options };
+}
+
+const workspaceCases = (target: Target): Case[] => [
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/results",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target)).id}/results?year=2026` }),
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/compare",
+    target,
+    prepare: async () => {
+      const p = await workspaceProject(target);
+      return { path: `/api/v1/projects/${p.id}/compare?options=${p.options.join(",")}&year=2026` };
+    },
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/revisions",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/revisions` }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/revisions",
+    target,
+    prepare: async () => ({
+      path: `/api/v1/projects/${(await workspaceProject(target)).id}/revisions`,
+      body: { note: "Issued by the access matrix" },
+    }),
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/revisions/:rev",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/revisions/A` }),
+  },
+];
+
 const CASES: Case[] = [
   { method: "GET", path: "/api/health", prepare: fixed("/api/health") },
   { method: "GET", path: "/api/v1/me", prepare: fixed("/api/v1/me") },
@@ -205,6 +275,8 @@ const CASES: Case[] = [
   },
   ...projectCases("shared"),
   ...projectCases("unshared"),
+  ...workspaceCases("shared"),
+  ...workspaceCases("unshared"),
 ];
 
 const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);
@@ -231,6 +303,7 @@ test.beforeAll(async () => {
     members: [],
     invitations: [],
     outsiderInvitationId: (inv.body as { invitation: { id: string } }).invitation.id,
+    makeups: [],
   };
 });
 
@@ -239,6 +312,8 @@ test.afterAll(async () => {
   for (const id of w.projects) await call(w.callers.consultant, "DELETE", `/api/v1/projects/${id}`);
   for (const id of w.members) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/members/${id}`);
   for (const id of w.invitations) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/invitations/${id}`);
+  await deleteMakeupRows(w.makeups);
+  await closeWorkspaceRows();
 });
 
 test("every route in the table has a case, and every case a route", () => {

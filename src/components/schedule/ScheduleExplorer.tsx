@@ -1,4 +1,4 @@
-import { useMemo, useState } from "react";
+import { useMemo, useRef, useState } from "react";
 import type { ScheduleResponse, ScheduleSurfaceResult } from "@/lib/contracts/schedule";
 import { PRESETS } from "@/lib/glazing-presets";
 import { api, ApiError } from "@/lib/client/api";
@@ -29,6 +29,34 @@ const MEASURES: Record<Measure, { label: string; unit: string }> = {
 };
 const MONTH_NAMES = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
 
+/** What a schedule on screen was computed from. */
+interface ResultInputs {
+  facadeId: string;
+  facadeName: string;
+  presetId: string;
+  presetLabel: string;
+  year: number;
+  sky: "perez" | "hay-davies" | "isotropic";
+  linke: number | "";
+  albedo: number;
+  overhang: { depthM: number; gapAboveM: number; widthM: number; heightM: number } | null;
+}
+
+const SKY_NAMES = { perez: "Perez sky", "hay-davies": "Hay–Davies sky", isotropic: "isotropic sky" } as const;
+
+/** "South, Clear double, 2026, Perez sky, Linke monthly defaults, albedo 0.2, overhang 0.6 m" */
+function describeInputs(i: ResultInputs): string {
+  return [
+    i.facadeName,
+    i.presetLabel,
+    String(i.year),
+    SKY_NAMES[i.sky],
+    i.linke === "" ? "Linke turbidity monthly defaults" : `Linke turbidity ${i.linke}`,
+    `albedo ${i.albedo}`,
+    i.overhang ? `overhang ${i.overhang.depthM} m over a ${i.overhang.widthM} × ${i.overhang.heightM} m window` : "no shading",
+  ].join(", ");
+}
+
 const localHourOf = (iso: string) => Number(iso.slice(11, 13)) + Number(iso.slice(14, 16)) / 60 + Number(iso.slice(17, 19)) / 3600;
 const f = (v: number | null | undefined, d = 1) => (v == null ? "—" : v.toFixed(d));
 
@@ -41,7 +69,14 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
   const [linke, setLinke] = useState<number | "">("");
   const [albedo, setAlbedo] = useState(0.2);
   const [overhang, setOverhang] = useState({ on: false, depthM: 0.6, gapAboveM: 0.2, widthM: 1.5, heightM: 1.5 });
-  const [result, setResult] = useState<{ surface: ScheduleSurfaceResult; warnings: string[]; stepHours: number } | null>(null);
+  const [result, setResult] = useState<{
+    surface: ScheduleSurfaceResult;
+    warnings: string[];
+    stepHours: number;
+    /** The inputs these figures were computed from (their labels come from here, never from the form). */
+    inputs: ResultInputs;
+    inputsKey: string;
+  } | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const [measure, setMeasure] = useState<Measure>("fraction");
@@ -49,9 +84,28 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
 
   const facade = facades.find((x) => x.id === facadeId);
   const preset = PRESETS.find((p) => p.id === presetId)!;
+  // Everything that enters the figures; a result whose key differs from the form's is stale.
+  const inputs: ResultInputs = {
+    facadeId,
+    facadeName: facade?.name ?? "",
+    presetId,
+    presetLabel: preset.label,
+    year,
+    sky,
+    linke,
+    albedo,
+    overhang: overhang.on ? overhang : null,
+  };
+  const inputsKey = JSON.stringify(inputs);
+  const stale = result !== null && result.inputsKey !== inputsKey;
+  /** Only the latest calculation may show its answer (an older one finishing late is dropped). */
+  const latestRun = useRef(0);
 
   const run = async () => {
     if (!facade) return;
+    const runId = ++latestRun.current;
+    const runInputs = inputs;
+    const runKey = inputsKey;
     setBusy(true);
     setFailure(null);
     try {
@@ -78,14 +132,15 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
           },
         ],
       });
+      if (runId !== latestRun.current) return;
       const surface = res.surfaces[0]!;
-      setResult({ surface, warnings: res.warnings, stepHours: 1 });
+      setResult({ surface, warnings: res.warnings, stepHours: 1, inputs: runInputs, inputsKey: runKey });
       const summer = surface.totals.daily.findIndex((d) => d.date.endsWith(site.latitudeDeg >= 0 ? "-06-21" : "-12-21"));
       setDay(summer >= 0 ? summer : 0);
     } catch (e) {
-      setFailure(e instanceof ApiError ? e.message : String(e));
+      if (runId === latestRun.current) setFailure(e instanceof ApiError ? e.message : String(e));
     } finally {
-      setBusy(false);
+      if (runId === latestRun.current) setBusy(false);
     }
   };
 
@@ -225,158 +280,174 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
       {failure && <FormMessage kind="error">{failure}</FormMessage>}
 
       {result && view && period && (
-        <>
-          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4" data-testid="period-totals">
-            <div className="card">
-              <p className="text-xs font-bold uppercase text-slate">Sun on the glass</p>
-              <p className="text-2xl font-black tabular-nums">{f(period.incidentKWhPerM2, 0)}</p>
-              <p className="text-xs text-slate">kWh/m² in {year}</p>
+        <div className="space-y-5" data-testid="schedule-results" data-stale={stale ? "true" : "false"}>
+          {stale ? (
+            <div className="notice flex flex-wrap items-center gap-3" role="status" data-testid="schedule-stale">
+              <span>
+                The inputs have changed since this calculation: the figures below are for {describeInputs(result.inputs)}, not for the form above.
+              </span>
+              <button type="button" className="btn-quiet" disabled={busy || !facade} onClick={() => void run()}>
+                {busy ? "Calculating…" : "Calculate again"}
+              </button>
             </div>
-            <div className="card">
-              <p className="text-xs font-bold uppercase text-slate">Transmitted</p>
-              <p className="text-2xl font-black tabular-nums" data-testid="transmitted-total">
-                {f(period.transmittedKWhPerM2, 0)}
-              </p>
-              <p className="text-xs text-slate">
-                kWh/m² · {period.incidentKWhPerM2 > 0 ? f((100 * period.transmittedKWhPerM2) / period.incidentKWhPerM2, 0) : "—"} % of the incident
-                sun
-              </p>
+          ) : (
+            <p className="text-sm text-slate" data-testid="schedule-inputs">
+              Results for {describeInputs(result.inputs)}.
+            </p>
+          )}
+          <div className={stale ? "pointer-events-none select-none space-y-5 opacity-30 grayscale" : "space-y-5"} aria-hidden={stale || undefined}>
+            <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4" data-testid="period-totals">
+              <div className="card">
+                <p className="text-xs font-bold uppercase text-slate">Sun on the glass</p>
+                <p className="text-2xl font-black tabular-nums">{f(period.incidentKWhPerM2, 0)}</p>
+                <p className="text-xs text-slate">kWh/m² in {result.inputs.year}</p>
+              </div>
+              <div className="card">
+                <p className="text-xs font-bold uppercase text-slate">Transmitted</p>
+                <p className="text-2xl font-black tabular-nums" data-testid="transmitted-total">
+                  {f(period.transmittedKWhPerM2, 0)}
+                </p>
+                <p className="text-xs text-slate">
+                  kWh/m² · {period.incidentKWhPerM2 > 0 ? f((100 * period.transmittedKWhPerM2) / period.incidentKWhPerM2, 0) : "—"} % of the incident
+                  sun
+                </p>
+              </div>
+              <div className="card">
+                <p className="text-xs font-bold uppercase text-slate">Solar gain</p>
+                <p className="text-2xl font-black tabular-nums">{f(period.solarGainKWhPerM2, 0)}</p>
+                <p className="text-xs text-slate">kWh/m² (g-weighted)</p>
+              </div>
+              <div className="card">
+                <p className="text-xs font-bold uppercase text-slate">Peak solar gain</p>
+                <p className="text-2xl font-black tabular-nums">{f(period.peak?.solarGainWm2, 0)}</p>
+                <p className="text-xs text-slate">W/m² · {period.peak ? period.peak.time.slice(0, 16).replace("T", " ") : "—"}</p>
+              </div>
             </div>
-            <div className="card">
-              <p className="text-xs font-bold uppercase text-slate">Solar gain</p>
-              <p className="text-2xl font-black tabular-nums">{f(period.solarGainKWhPerM2, 0)}</p>
-              <p className="text-xs text-slate">kWh/m² (g-weighted)</p>
+            <div className="card space-y-3">
+              <div className="flex flex-wrap items-center gap-3">
+                <label htmlFor="measure" className="mb-0">
+                  Show
+                </label>
+                <select id="measure" className="mt-0 w-auto" value={measure} onChange={(e) => setMeasure(e.target.value as Measure)}>
+                  {(Object.keys(MEASURES) as Measure[]).map((m) => (
+                    <option key={m} value={m}>
+                      {MEASURES[m].label}
+                    </option>
+                  ))}
+                </select>
+                <span className="text-xs text-slate">diffuse transmittance of this glazing: {f(result.surface.diffuseTransmittance, 3)}</span>
+              </div>
+              <ScheduleHeatmap
+                cells={view.cells}
+                dayCount={view.dates.length}
+                dayLabels={view.dayLabels}
+                max={view.max}
+                stepHours={result.stepHours}
+                unit={MEASURES[measure].unit}
+                title={`${MEASURES[measure].label} — ${result.inputs.facadeName}, ${result.inputs.presetLabel}`}
+                selectedDay={day}
+                onSelectDay={setDay}
+              />
             </div>
-            <div className="card">
-              <p className="text-xs font-bold uppercase text-slate">Peak solar gain</p>
-              <p className="text-2xl font-black tabular-nums">{f(period.peak?.solarGainWm2, 0)}</p>
-              <p className="text-xs text-slate">W/m² · {period.peak ? period.peak.time.slice(0, 16).replace("T", " ") : "—"}</p>
-            </div>
-          </div>
-          <div className="card space-y-3">
-            <div className="flex flex-wrap items-center gap-3">
-              <label htmlFor="measure" className="mb-0">
-                Show
-              </label>
-              <select id="measure" className="mt-0 w-auto" value={measure} onChange={(e) => setMeasure(e.target.value as Measure)}>
-                {(Object.keys(MEASURES) as Measure[]).map((m) => (
-                  <option key={m} value={m}>
-                    {MEASURES[m].label}
-                  </option>
-                ))}
-              </select>
-              <span className="text-xs text-slate">diffuse transmittance of this glazing: {f(result.surface.diffuseTransmittance, 3)}</span>
-            </div>
-            <ScheduleHeatmap
-              cells={view.cells}
-              dayCount={view.dates.length}
-              dayLabels={view.dayLabels}
-              max={view.max}
-              stepHours={result.stepHours}
-              unit={MEASURES[measure].unit}
-              title={`${MEASURES[measure].label} — ${facade?.name ?? ""}, ${preset.label}`}
-              selectedDay={day}
-              onSelectDay={setDay}
-            />
-          </div>
-          {day !== null && (
-            <div className="grid gap-5 xl:grid-cols-[1fr_1.2fr]">
-              <div className="card space-y-3">
-                <div className="flex items-center gap-3">
-                  <label htmlFor="day" className="mb-0">
-                    Day
-                  </label>
-                  <input
-                    id="day"
-                    type="date"
-                    className="mt-0 w-auto"
-                    value={view.dates[day]}
-                    min={view.dates[0]}
-                    max={view.dates[view.dates.length - 1]}
-                    onChange={(e) => {
-                      const i = view.dates.indexOf(e.target.value);
-                      if (i >= 0) setDay(i);
-                    }}
-                  />
+            {day !== null && (
+              <div className="grid gap-5 xl:grid-cols-[1fr_1.2fr]">
+                <div className="card space-y-3">
+                  <div className="flex items-center gap-3">
+                    <label htmlFor="day" className="mb-0">
+                      Day
+                    </label>
+                    <input
+                      id="day"
+                      type="date"
+                      className="mt-0 w-auto"
+                      value={view.dates[day]}
+                      min={view.dates[0]}
+                      max={view.dates[view.dates.length - 1]}
+                      onChange={(e) => {
+                        const i = view.dates.indexOf(e.target.value);
+                        if (i >= 0) setDay(i);
+                      }}
+                    />
+                  </div>
+                  <DailyProfile rows={dayRows} localHours={dayRows.map((r) => localHourOf(r.time))} title={`Daily profile, ${view.dates[day]}`} />
                 </div>
-                <DailyProfile rows={dayRows} localHours={dayRows.map((r) => localHourOf(r.time))} title={`Daily profile, ${view.dates[day]}`} />
+                <div className="card overflow-x-auto">
+                  <table className="w-full text-xs tabular-nums" data-testid="day-table">
+                    <thead className="text-left text-slate">
+                      <tr>
+                        <th>Time</th>
+                        <th className="text-right">Sun alt.</th>
+                        <th className="text-right">Sun az.</th>
+                        <th className="text-right">Incidence</th>
+                        <th className="text-right">τ beam</th>
+                        <th className="text-right">Sunlit</th>
+                        <th className="text-right">Beam</th>
+                        <th className="text-right">Diffuse</th>
+                        <th className="text-right">Transm.</th>
+                        <th className="text-right">Gain</th>
+                      </tr>
+                    </thead>
+                    <tbody>
+                      {dayRows
+                        .filter((r) => r.sunAltitudeDeg > -6)
+                        .map((r) => (
+                          <tr key={r.time} className="border-t border-line">
+                            <td>{r.time.slice(11, 16)}</td>
+                            <td className="text-right">{f(r.sunAltitudeDeg)}°</td>
+                            <td className="text-right">{f(r.sunAzimuthDeg)}°</td>
+                            <td className="text-right">{f(r.incidenceDeg)}°</td>
+                            <td className="text-right">{f(r.beamTransmittance, 3)}</td>
+                            <td className="text-right">{f(r.sunlitFraction, 2)}</td>
+                            <td className="text-right">{f(r.beamIncidentWm2, 0)}</td>
+                            <td className="text-right">{f(r.diffuseIncidentWm2, 0)}</td>
+                            <td className="text-right">{f(r.transmittedWm2, 0)}</td>
+                            <td className="text-right">{f(r.solarGainWm2, 0)}</td>
+                          </tr>
+                        ))}
+                    </tbody>
+                  </table>
+                  <p className="mt-2 text-xs text-slate">W/m² on the glass; times are interval midpoints, local clock time.</p>
+                </div>
               </div>
-              <div className="card overflow-x-auto">
-                <table className="w-full text-xs tabular-nums" data-testid="day-table">
-                  <thead className="text-left text-slate">
-                    <tr>
-                      <th>Time</th>
-                      <th className="text-right">Sun alt.</th>
-                      <th className="text-right">Sun az.</th>
-                      <th className="text-right">Incidence</th>
-                      <th className="text-right">τ beam</th>
-                      <th className="text-right">Sunlit</th>
-                      <th className="text-right">Beam</th>
-                      <th className="text-right">Diffuse</th>
-                      <th className="text-right">Transm.</th>
-                      <th className="text-right">Gain</th>
-                    </tr>
-                  </thead>
-                  <tbody>
-                    {dayRows
-                      .filter((r) => r.sunAltitudeDeg > -6)
-                      .map((r) => (
-                        <tr key={r.time} className="border-t border-line">
-                          <td>{r.time.slice(11, 16)}</td>
-                          <td className="text-right">{f(r.sunAltitudeDeg)}°</td>
-                          <td className="text-right">{f(r.sunAzimuthDeg)}°</td>
-                          <td className="text-right">{f(r.incidenceDeg)}°</td>
-                          <td className="text-right">{f(r.beamTransmittance, 3)}</td>
-                          <td className="text-right">{f(r.sunlitFraction, 2)}</td>
-                          <td className="text-right">{f(r.beamIncidentWm2, 0)}</td>
-                          <td className="text-right">{f(r.diffuseIncidentWm2, 0)}</td>
-                          <td className="text-right">{f(r.transmittedWm2, 0)}</td>
-                          <td className="text-right">{f(r.solarGainWm2, 0)}</td>
-                        </tr>
-                      ))}
-                  </tbody>
-                </table>
-                <p className="mt-2 text-xs text-slate">W/m² on the glass; times are interval midpoints, local clock time.</p>
-              </div>
-            </div>
-          )}
-          <div className="card overflow-x-auto">
-            <h2 className="mb-2">Monthly totals</h2>
-            <table className="w-full text-sm tabular-nums" data-testid="monthly-table">
-              <thead className="text-left text-slate">
-                <tr>
-                  <th>Month</th>
-                  <th className="text-right">Incident kWh/m²</th>
-                  <th className="text-right">Transmitted kWh/m²</th>
-                  <th className="text-right">Solar gain kWh/m²</th>
-                  <th className="text-right">Peak gain W/m²</th>
-                  <th className="text-right">at</th>
-                </tr>
-              </thead>
-              <tbody>
-                {result.surface.totals.monthly.map((m) => (
-                  <tr key={m.month} className="border-t border-line">
-                    <td>
-                      {MONTH_NAMES[Number(m.month.slice(5, 7)) - 1]} {m.month.slice(0, 4)}
-                    </td>
-                    <td className="text-right">{f(m.incidentKWhPerM2)}</td>
-                    <td className="text-right">{f(m.transmittedKWhPerM2)}</td>
-                    <td className="text-right">{f(m.solarGainKWhPerM2)}</td>
-                    <td className="text-right">{f(m.peak?.solarGainWm2, 0)}</td>
-                    <td className="text-right">{m.peak?.time.slice(5, 16).replace("T", " ") ?? "—"}</td>
+            )}
+            <div className="card overflow-x-auto">
+              <h2 className="mb-2">Monthly totals</h2>
+              <table className="w-full text-sm tabular-nums" data-testid="monthly-table">
+                <thead className="text-left text-slate">
+                  <tr>
+                    <th>Month</th>
+                    <th className="text-right">Incident kWh/m²</th>
+                    <th className="text-right">Transmitted kWh/m²</th>
+                    <th className="text-right">Solar gain kWh/m²</th>
+                    <th className="text-right">Peak gain W/m²</th>
+                    <th className="text-right">at</th>
                   </tr>
+                </thead>
+                <tbody>
+                  {result.surface.totals.monthly.map((m) => (
+                    <tr key={m.month} className="border-t border-line">
+                      <td>
+                        {MONTH_NAMES[Number(m.month.slice(5, 7)) - 1]} {m.month.slice(0, 4)}
+                      </td>
+                      <td className="text-right">{f(m.incidentKWhPerM2)}</td>
+                      <td className="text-right">{f(m.transmittedKWhPerM2)}</td>
+                      <td className="text-right">{f(m.solarGainKWhPerM2)}</td>
+                      <td className="text-right">{f(m.peak?.solarGainWm2, 0)}</td>
+                      <td className="text-right">{m.peak?.time.slice(5, 16).replace("T", " ") ?? "—"}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+            {result.warnings.length > 0 && (
+              <ul className="notice list-disc space-y-1 pl-8">
+                {result.warnings.map((w) => (
+                  <li key={w}>{w}</li>
                 ))}
-              </tbody>
-            </table>
+              </ul>
+            )}
           </div>
-          {result.warnings.length > 0 && (
-            <ul className="notice list-disc space-y-1 pl-8">
-              {result.warnings.map((w) => (
-                <li key={w}>{w}</li>
-              ))}
-            </ul>
-          )}
-        </>
+        </div>
       )}
     </div>
   );

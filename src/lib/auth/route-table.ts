@@ -156,6 +156,47 @@ export const ROUTES: readonly RouteEntry[] = [
     ok: 200,
     writes: true,
   },
+  // Results, comparison and issued revisions.
+  {
+    file: "v1/projects/[id]/results.ts",
+    path: "/api/v1/projects/:id/results",
+    method: "GET",
+    auth: { project: "id", permission: "project:readAll" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/projects/[id]/compare.ts",
+    path: "/api/v1/projects/:id/compare",
+    method: "GET",
+    auth: { project: "id", permission: "project:readAll" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/projects/[id]/revisions/index.ts",
+    path: "/api/v1/projects/:id/revisions",
+    method: "GET",
+    auth: { project: "id" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/projects/[id]/revisions/index.ts",
+    path: "/api/v1/projects/:id/revisions",
+    method: "POST",
+    auth: { project: "id", permission: "revision:issue" },
+    ok: 201,
+    writes: true,
+  },
+  {
+    file: "v1/projects/[id]/revisions/[rev].ts",
+    path: "/api/v1/projects/:id/revisions/:rev",
+    method: "GET",
+    auth: { project: "id" },
+    ok: 200,
+    writes: false,
+  },
 ];
 
 /** "METHOD /path" of a row, for messages and test titles. */

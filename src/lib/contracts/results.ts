@@ -1,5 +1,5 @@
 /** Wire types of GET /api/v1/projects/:id/results and of issued revisions' snapshots. */
-import type { GlazingValues } from "./glazing";
+import type { GlazingAngleRow, GlazingValues } from "./glazing";
 import type { Limits, RequirementFlag } from "./requirements";
 
 /** What a saved make-up revision stores as its values (computed when it is saved). */
@@ -25,6 +25,10 @@ export interface OptionResult {
   /** Twelve monthly sums, January first, kWh/m². */
   monthly: { transmittedKWhm2: number[]; solarGainKWhm2: number[] };
   flags: RequirementFlag[];
+  /** Set when the stored make-up cannot be computed (its layers no longer validate); the figures are then zero. */
+  problem?: string;
+  /** SHA-256 of this option's inputs (make-up layers, façade, site, year, engine); its cache key. */
+  inputsKey?: string;
 }
 
 export interface FacadeResult {
@@ -36,6 +40,8 @@ export interface FacadeResult {
   /** The limits that apply to this façade (project limits with its overrides). */
   limits: Limits;
   options: OptionResult[];
+  /** The façade's typical window and shading devices as the engine took them (null = unshaded). */
+  shading?: unknown;
 }
 
 export interface ResultsResponse {
@@ -45,6 +51,10 @@ export interface ResultsResponse {
   inputsKey: string;
   computedAt: string;
   facades: FacadeResult[];
+  /** The site and sky the results were computed for, shown beside them. */
+  site?: RevisionSnapshot["site"];
+  /** How many façade × option results came from the cache and how many were computed for this answer. */
+  cache?: { hits: number; misses: number };
 }
 
 /** One approved option in an issued revision, frozen at issue time. */
@@ -80,6 +90,8 @@ export interface RevisionSnapshot {
     linkeTurbidity: number[] | null;
   };
   facades: RevisionFacadeSnapshot[];
+  /** Façades without an approved option when the revision was issued. */
+  unapproved?: { facadeId: string; name: string }[];
 }
 
 export interface RevisionResponse {
@@ -90,4 +102,24 @@ export interface RevisionResponse {
   issuedBy: string;
   facades: RevisionFacadeSnapshot[];
   snapshot: RevisionSnapshot;
+  /** Façades without an approved option, left out of this revision. */
+  unapproved?: { facadeId: string; name: string }[];
+}
+
+/** One option of GET /projects/:id/compare: its results, angular curves and what a day's profile needs. */
+export interface CompareOption extends OptionResult {
+  facadeId: string;
+  facadeName: string;
+  /** Angular values of the stored layers (as POST /calc/glazing gives them), 0° to 90° by 5°. */
+  angles: GlazingAngleRow[];
+  /** The surface as POST /calc/schedule takes it, for the hourly profile of a chosen day. */
+  surface: { name: string; azimuthDeg: number; tiltDeg: number; layers: unknown[]; shading?: unknown };
+}
+
+export interface CompareResponse {
+  projectId: string;
+  year: number;
+  inputsKey: string;
+  site: RevisionSnapshot["site"];
+  options: CompareOption[];
 }

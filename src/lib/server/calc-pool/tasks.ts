@@ -7,16 +7,20 @@ import type { GlazingRequest } from "@/lib/contracts/glazing";
 import type { ScheduleRequest } from "@/lib/contracts/schedule";
 import { calculateGlazing } from "@/lib/calc/glazing";
 import { scheduleResponse } from "@/lib/calc/schedule-response";
+import { surfaceYearSummaries } from "@/lib/calc/surface-year";
 
 export interface CalcTasks {
   glazing: GlazingRequest;
   schedule: ScheduleRequest;
+  /** The project results: yearly summaries of up to 24 surfaces (no rows). */
+  surfaceYear: ScheduleRequest;
 }
 export type CalcTaskName = keyof CalcTasks;
 
 const TASKS: { [K in CalcTaskName]: (input: CalcTasks[K]) => unknown } = {
   glazing: calculateGlazing,
   schedule: (req) => scheduleResponse(req),
+  surfaceYear: surfaceYearSummaries,
 };
 
 export const isCalcTaskName = (name: unknown): name is CalcTaskName => typeof name === "string" && Object.hasOwn(TASKS, name);
