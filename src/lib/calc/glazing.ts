@@ -4,6 +4,7 @@
  * requested angle and over the hemisphere, and combines them with the EN 673 / EN 410 thermal
  * network into g-values and the U-value. Pure (no I/O), so it also runs in the browser.
  */
+import { lowEFaces } from "./makeup-description";
 import type { Gap, Gas, GlazingRequest, GlazingResponse, GlazingValues, Pane } from "@/lib/contracts/glazing";
 import { DEFAULT_EMISSIVITY } from "@/lib/contracts/glazing";
 import { prepareGlazing, type GlazingOptics, type PaneSpec, type PreparedGlazing } from "@/lib/physics/optics";
@@ -105,6 +106,16 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
       );
     }
   });
+  req.layers
+    .filter((l): l is Pane => l.kind === "pane")
+    .forEach((pane, k) => {
+      if ("measured" in pane) return;
+      const faces = lowEFaces(pane, k);
+      if (faces.length === 0) return;
+      warnings.push(
+        `Pane ${k + 1} has a low-emissivity coating (face ${faces.map((f) => `#${f}`).join(" and ")}) but is described by glass properties: the emissivity enters the U-value and the heat flow, yet the coating's solar optics are not modelled, so τe and the g-value of this make-up are overstated. Describe the coated pane by its measured values (the maker's data sheet) instead.`,
+      );
+    });
   if (!model.optics.hasVisible) {
     warnings.push("Light transmittance needs measured visible values for every pane; it is not given for this make-up.");
   }

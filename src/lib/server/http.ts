@@ -187,6 +187,12 @@ export function withProblems(fn: (ctx: APIContext) => Promise<Response> | Respon
     } catch (err) {
       const known = problemFor(err, engineField);
       if (known) return known.toResponse();
+      if (err instanceof Error && err.name === "QueueFullError" && typeof (err as { retryAfterS?: unknown }).retryAfterS === "number") {
+        // The calculation workers are all busy and their queue is full (calc-pool): nothing was saved.
+        const res = problem(503, "Every calculation worker is busy at the moment; nothing was saved. Try again in a few seconds.");
+        res.headers.set("retry-after", String((err as unknown as { retryAfterS: number }).retryAfterS));
+        return res;
+      }
       if (isDatabaseUnavailable(err)) {
         console.error(`[api] ${ctx.request.method} ${ctx.url.pathname}: database unavailable:`, (err as Error).message);
         return unavailable();
