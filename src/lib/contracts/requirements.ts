@@ -42,7 +42,7 @@ export const RequirementsRequest = z.object({
   project: Limits.default({}),
   facades: z.record(rowId, Limits).optional().default({}),
   /** The version read; a stale one answers 409. Omitted = overwrite. */
-  version: z.number().int().positive().optional(),
+  version: z.number({ error: "version must be a number" }).int("version must be a whole number").min(0, "version must be 0 or more").optional(),
 });
 export type RequirementsRequest = z.infer<typeof RequirementsRequest>;
 
