@@ -15,6 +15,9 @@ import { GlazingRequest } from "@/lib/contracts/glazing";
 import { ProjectCreateRequest, ProjectUpdateRequest, ShareRequest } from "@/lib/contracts/projects";
 import { ScheduleRequest } from "@/lib/contracts/schedule";
 import { RevisionIssueRequest } from "@/lib/contracts/revisions";
+import { MakeupCreateRequest, MakeupPatchRequest, PaneCreateRequest, PanePatchRequest } from "@/lib/contracts/library";
+import { OptionCreateRequest, OptionPatchRequest } from "@/lib/contracts/options";
+import { RequirementsRequest } from "@/lib/contracts/requirements";
 import { call, createOutsider, type Outsider } from "./api-actors";
 
 const SEED = Number(process.env.FC_SEED ?? 20261202);
@@ -101,6 +104,9 @@ function hints(ctx: Ctx): Record<string, fc.Arbitrary<unknown>> {
     timeZone: fc.constantFrom("UTC", "Europe/Lisbon", "America/New_York", "Asia/Kolkata", "Not/AZone"),
     organizationId: fc.constant(ctx.outsider.organizationId),
     memberId: fc.constant(ctx.memberId),
+    facadeId: fc.constant(ctx.facadeId),
+    makeupId: fc.constant(ctx.makeupId),
+    layer: fc.constant(pane),
     email: fc.tuple(fc.stringMatching(/^[a-z0-9]{1,16}$/), fc.nat()).map(([local, n]) => `fuzz.${local}.${n}@e2e.example`),
     layers: fc.constantFrom([pane], [pane, gap, pane], [pane, { ...gap, gas: "argon" }, pane, gap, pane]),
     surfaces: fc.array(
@@ -124,6 +130,11 @@ function hints(ctx: Ctx): Record<string, fc.Arbitrary<unknown>> {
 interface Ctx {
   outsider: Outsider;
   memberId: string;
+  /** The fuzz organisation's saved make-up, saved pane, and the fuzz project's façade and option. */
+  makeupId: string;
+  paneId: string;
+  facadeId: string;
+  optionId: string;
 }
 
 /** Values a JSON Schema allows, with hostile values in place of some of them when `mixed`. */
@@ -259,7 +270,7 @@ const HOSTILE_BODIES: fc.Arbitrary<string | Uint8Array> = fc.constantFrom<string
 // ---- the routes ------------------------------------------------------------------------------------------------
 
 interface FuzzRoute {
-  method: "POST" | "PATCH";
+  method: "POST" | "PATCH" | "PUT";
   path: string;
   schema: z.ZodType;
   url: (ctx: Ctx) => string;
@@ -354,6 +365,56 @@ const FUZZED: FuzzRoute[] = [
     url: () => `/api/v1/projects/${projectId}/revisions`,
     example: () => ({ note: "Fuzzed revision note", year: 2026 }),
   },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/makeups",
+    schema: MakeupCreateRequest,
+    url: (c) => `/api/v1/orgs/${c.outsider.organizationId}/makeups`,
+    example: () => ({ name: "Fuzzed make-up", layers: [pane, gap, pane], note: "Fuzz" }),
+  },
+  {
+    // Valid bodies name revision 1, stale once the first is accepted: 409, and nothing saved.
+    method: "PATCH",
+    path: "/api/v1/makeups/:id",
+    schema: MakeupPatchRequest,
+    url: (c) => `/api/v1/makeups/${c.makeupId}`,
+    example: () => ({ revision: 1, name: "Fuzzed rename", layers: [pane, gap, pane] }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/panes",
+    schema: PaneCreateRequest,
+    url: (c) => `/api/v1/orgs/${c.outsider.organizationId}/panes`,
+    example: () => ({ name: "Fuzzed pane", layer: { thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 } }),
+  },
+  {
+    method: "PATCH",
+    path: "/api/v1/panes/:id",
+    schema: PanePatchRequest,
+    url: (c) => `/api/v1/panes/${c.paneId}`,
+    example: () => ({ revision: 1, note: "Fuzzed note" }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/options",
+    schema: OptionCreateRequest,
+    url: () => `/api/v1/projects/${projectId}/options`,
+    example: (c) => ({ facadeId: c.facadeId, makeupId: c.makeupId, name: "Fuzzed option" }),
+  },
+  {
+    method: "PATCH",
+    path: "/api/v1/options/:id",
+    schema: OptionPatchRequest,
+    url: (c) => `/api/v1/options/${c.optionId}`,
+    example: () => ({ version: 1, name: "Fuzzed option rename" }),
+  },
+  {
+    method: "PUT",
+    path: "/api/v1/projects/:id/requirements",
+    schema: RequirementsRequest,
+    url: () => `/api/v1/projects/${projectId}/requirements`,
+    example: () => ({ project: { maxGValue: 0.4, minLightTransmittance: 0.5 } }),
+  },
 ];
 
 let ctx: Ctx;
@@ -383,7 +444,6 @@ test.beforeAll(async () => {
   await db.connect();
   const outsider = await createOutsider("fuzz-owner");
   const members = (await call(outsider, "GET", `/api/v1/orgs/${outsider.organizationId}/members`)).body as { members: { memberId: string }[] };
-  ctx = { outsider, memberId: members.members[0]!.memberId };
   const p = await call(outsider, "POST", "/api/v1/projects", {
     organizationId: outsider.organizationId,
     name: "Fuzz target",
@@ -395,6 +455,22 @@ test.beforeAll(async () => {
   });
   expect(p.status).toBe(201);
   projectId = (p.body as { project: { id: string } }).project.id;
+  const facadeId = ((await call(outsider, "GET", `/api/v1/projects/${projectId}`)).body as { facades: { id: string }[] }).facades[0]!.id;
+  const mk = await call(outsider, "POST", `/api/v1/orgs/${outsider.organizationId}/makeups`, { name: "Fuzz make-up", layers: [pane, gap, pane] });
+  expect(mk.status, mk.text.slice(0, 200)).toBe(201);
+  const makeupId = (mk.body as { id: string }).id;
+  const pn = await call(outsider, "POST", `/api/v1/orgs/${outsider.organizationId}/panes`, { name: "Fuzz pane", layer: pane });
+  expect(pn.status, pn.text.slice(0, 200)).toBe(201);
+  const op = await call(outsider, "POST", `/api/v1/projects/${projectId}/options`, { facadeId, makeupId, name: "Fuzz option" });
+  expect(op.status, op.text.slice(0, 200)).toBe(201);
+  ctx = {
+    outsider,
+    memberId: members.members[0]!.memberId,
+    makeupId,
+    paneId: (pn.body as { id: string }).id,
+    facadeId,
+    optionId: (op.body as { option: { id: string } }).option.id,
+  };
 });
 
 test.afterAll(async () => {

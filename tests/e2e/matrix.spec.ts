@@ -138,7 +138,7 @@ const projectCases = (target: Target): Case[] => [
  * A fresh project with one façade and two options of saved make-ups (one approved), shared with the demo
  * client or not; `issued` also issues revision A as the consultant.
  */
-async function workspaceProject(target: Target, issued = false): Promise<{ id: string; options: string[] }> {
+async function workspaceProject(target: Target, issued = false): Promise<{ id: string; options: string[]; facadeId: string; makeupId: string }> {
   const res = await call(consultant(), "POST", "/api/v1/projects", {
     organizationId: w.orgId,
     name: `Matrix workspace (${target})`,
@@ -160,8 +160,96 @@ async function workspaceProject(target: Target, issued = false): Promise<{ id: s
   w.makeups.push(a.id, b.id);
   const options = [await insertOptionRow(p.id, facadeId, a, "Clear", "approved"), await insertOptionRow(p.id, facadeId, b, "Tinted")];
   if (issued) expect((await call(consultant(), "POST", `/api/v1/projects/${p.id}/revisions`, { note: "Matrix" })).status).toBe(201);
-  return { id: p.id, options };
+  return { id: p.id, options, facadeId, makeupId: a.id };
 }
+
+/** A saved make-up of the demo organisation that no option uses. */
+async function throwawayMakeup(): Promise<string> {
+  const m = await insertMakeupRow(w.orgId, "Matrix library make-up", doubleUnit(clearPane(6), clearPane(4)));
+  w.makeups.push(m.id);
+  return m.id;
+}
+
+/** A saved pane of the demo organisation, made through the API by the consultant. */
+async function throwawayPane(): Promise<string> {
+  const res = await call(consultant(), "POST", `/api/v1/orgs/${w.orgId}/panes`, { name: "Matrix pane", layer: pane6 });
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  return (res.body as { id: string }).id;
+}
+
+const libraryCases = (): Case[] => [
+  { method: "GET", path: "/api/v1/orgs/:orgId/makeups", prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/makeups` }) },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/makeups",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/makeups`, body: { name: "Matrix saved double", layers: [pane6, air16, pane6] } }),
+    after: (_a, status, body) => {
+      if (status === 201) w.makeups.push((body as { id: string }).id);
+    },
+  },
+  { method: "GET", path: "/api/v1/makeups/:id", prepare: async () => ({ path: `/api/v1/makeups/${await throwawayMakeup()}` }) },
+  {
+    method: "PATCH",
+    path: "/api/v1/makeups/:id",
+    prepare: async () => ({ path: `/api/v1/makeups/${await throwawayMakeup()}`, body: { revision: 1, name: "Matrix renamed" } }),
+  },
+  { method: "DELETE", path: "/api/v1/makeups/:id", prepare: async () => ({ path: `/api/v1/makeups/${await throwawayMakeup()}` }) },
+  { method: "GET", path: "/api/v1/orgs/:orgId/panes", prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/panes` }) },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/panes",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/panes`, body: { name: "Matrix saved pane", layer: pane6 } }),
+  },
+  { method: "GET", path: "/api/v1/panes/:id", prepare: async () => ({ path: `/api/v1/panes/${await throwawayPane()}` }) },
+  {
+    method: "PATCH",
+    path: "/api/v1/panes/:id",
+    prepare: async () => ({ path: `/api/v1/panes/${await throwawayPane()}`, body: { revision: 1, note: "Matrix" } }),
+  },
+  { method: "DELETE", path: "/api/v1/panes/:id", prepare: async () => ({ path: `/api/v1/panes/${await throwawayPane()}` }) },
+];
+
+const optionCases = (target: Target): Case[] => [
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/options",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target)).id}/options` }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/options",
+    target,
+    prepare: async () => {
+      const p = await workspaceProject(target);
+      return { path: `/api/v1/projects/${p.id}/options`, body: { facadeId: p.facadeId, makeupId: p.makeupId, name: "Matrix option" } };
+    },
+  },
+  {
+    method: "PATCH",
+    path: "/api/v1/options/:id",
+    target,
+    prepare: async () => ({ path: `/api/v1/options/${(await workspaceProject(target)).options[1]}`, body: { version: 1, name: "Matrix renamed" } }),
+  },
+  {
+    method: "DELETE",
+    path: "/api/v1/options/:id",
+    target,
+    prepare: async () => ({ path: `/api/v1/options/${(await workspaceProject(target)).options[1]}` }),
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/requirements",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target)).id}/requirements` }),
+  },
+  {
+    method: "PUT",
+    path: "/api/v1/projects/:id/requirements",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target)).id}/requirements`, body: { project: { maxGValue: 0.5 } } }),
+  },
+];
 
 const workspaceCases = (target: Target): Case[] => [
   {
@@ -277,6 +365,9 @@ const CASES: Case[] = [
   ...projectCases("unshared"),
   ...workspaceCases("shared"),
   ...workspaceCases("unshared"),
+  ...libraryCases(),
+  ...optionCases("shared"),
+  ...optionCases("unshared"),
 ];
 
 const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);
