@@ -7,7 +7,7 @@ import { isDatabaseUnavailable } from "@/lib/server/db/unavailable";
 import "@/lib/server/client-address"; // records each request's socket address from the first request on
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
-const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
+const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/library\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
 
 /** API routes open to anonymous callers. */
 const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, /^\/api\/v1\/invitations\/[^/]+$/];

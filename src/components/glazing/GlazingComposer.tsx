@@ -8,6 +8,8 @@ import { PRESETS } from "@/lib/glazing-presets";
 import AngularChart, { type Series } from "./AngularChart";
 import GasField from "./GasField";
 import { Field, FormMessage } from "@/components/forms/Field";
+import LibraryBar, { type OpenMakeup } from "./LibraryBar";
+import { readComposerDraft, writeComposerDraft } from "./draft";
 
 type PhysicalIn = z.input<typeof PhysicalPane>;
 type MeasuredIn = z.input<typeof MeasuredPane>;
@@ -42,14 +44,32 @@ function errorAt(errors: FieldErrors<FormValues>, path: string): { message?: str
   return cur && typeof cur === "object" && "message" in cur ? (cur as { message?: string }) : undefined;
 }
 
+interface ComposerProps {
+  /** The organisation whose library the composer saves to and opens from; none: no library bar. */
+  library?: { organizationId: string; organizationName: string; canSave: boolean };
+}
+
 /** Compose a glazing make-up; its optics and thermal values update as you edit. */
-export default function GlazingComposer() {
+export default function GlazingComposer({ library }: ComposerProps = {}) {
   const resolver = zodResolver(GlazingRequest as never) as unknown as Resolver<FormValues>;
   const { control, register, formState, reset, trigger } = useForm<FormValues>({
     resolver,
     mode: "onChange",
     defaultValues: { layers: PRESETS[2]!.request.layers as LayerIn[] },
   });
+  const [openMakeup, setOpenMakeup] = useState<OpenMakeup | null>(null);
+  const restored = useRef(false);
+  // After hydration: the draft of the last visit, if any (the server renders the default make-up).
+  useEffect(() => {
+    const d = readComposerDraft<LayerIn>();
+    if (d) {
+      reset({ layers: d.layers });
+      // The draft lives in the browser only, so it can be restored only after hydration.
+      // eslint-disable-next-line react-hooks/set-state-in-effect -- one restore after mount, not a render loop
+      setOpenMakeup(d.open);
+    }
+    restored.current = true;
+  }, [reset]);
   const layers = useFieldArray({ control, name: "layers" });
   const values = useWatch({ control }) as FormValues;
   const [result, setResult] = useState<GlazingResponse | null>(null);
@@ -83,6 +103,12 @@ export default function GlazingComposer() {
     }, 250);
     return () => clearTimeout(t);
   }, [body, trigger]);
+
+  useEffect(() => {
+    if (!restored.current || !values.layers?.length) return;
+    writeComposerDraft({ layers: values.layers, open: openMakeup });
+  }, [values, openMakeup]);
+  const layersValid = GlazingRequest.safeParse({ layers: values.layers }).success;
 
   const paneCount = values.layers?.filter((l) => l && !isGap(l)).length ?? 0;
   const paneNumber = (layerIndex: number) => Math.floor(layerIndex / 2) + 1;
@@ -138,307 +164,336 @@ export default function GlazingComposer() {
   const normal = result?.angles[0];
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,440px)_1fr]">
-      <form method="post" className="space-y-4" noValidate onSubmit={(e) => e.preventDefault()} aria-label="Glazing make-up">
-        <div>
-          <label htmlFor="preset">Start from</label>
-          <select
-            id="preset"
-            defaultValue=""
-            onChange={(e) => {
-              const p = PRESETS.find((x) => x.id === e.target.value);
-              if (p) reset({ layers: structuredClone(p.request.layers) as LayerIn[] });
-            }}
-          >
-            <option value="" disabled>
-              choose a typical make-up…
-            </option>
-            {PRESETS.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.label}
+    <div className="space-y-6">
+      {library && (
+        <LibraryBar
+          organizationId={library.organizationId}
+          organizationName={library.organizationName}
+          canSave={library.canSave}
+          layers={values.layers ?? []}
+          valid={layersValid}
+          open={openMakeup}
+          onOpen={(m) => {
+            reset({ layers: structuredClone(m.layers) as LayerIn[] });
+            setOpenMakeup({ id: m.id, revision: m.revision, name: m.name });
+          }}
+          onSaved={(m) => setOpenMakeup({ id: m.id, revision: m.revision, name: m.name })}
+        />
+      )}
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,440px)_1fr]">
+        <form method="post" className="space-y-4" noValidate onSubmit={(e) => e.preventDefault()} aria-label="Glazing make-up">
+          <div>
+            <label htmlFor="preset">Start from</label>
+            <select
+              id="preset"
+              defaultValue=""
+              onChange={(e) => {
+                const p = PRESETS.find((x) => x.id === e.target.value);
+                if (p) {
+                  reset({ layers: structuredClone(p.request.layers) as LayerIn[] });
+                  setOpenMakeup(null);
+                }
+              }}
+            >
+              <option value="" disabled>
+                choose a typical make-up…
               </option>
-            ))}
-          </select>
-        </div>
-        <p className="text-xs text-slate">Outdoors at the top. Faces are numbered from outdoors: pane 1 has faces 1 and 2, pane 2 faces 3 and 4, …</p>
-        <ol className="space-y-3">
-          {layers.fields.map((field, i) => {
-            const layer = values.layers?.[i];
-            if (!layer) return null;
-            const base = `layers.${i}`;
-            if (isGap(layer)) {
+              {PRESETS.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.label}
+                </option>
+              ))}
+            </select>
+          </div>
+          <p className="text-xs text-slate">
+            Outdoors at the top. Faces are numbered from outdoors: pane 1 has faces 1 and 2, pane 2 faces 3 and 4, …
+          </p>
+          <ol className="space-y-3">
+            {layers.fields.map((field, i) => {
+              const layer = values.layers?.[i];
+              if (!layer) return null;
+              const base = `layers.${i}`;
+              if (isGap(layer)) {
+                return (
+                  <li key={field.id} className="rounded border border-dashed border-glass/40 bg-glass-light/40 p-3" data-testid="gap-row">
+                    <p className="mb-2 text-xs font-bold uppercase tracking-wide text-glass">Gap {paneNumber(i)}</p>
+                    <div className="grid grid-cols-[110px_1fr] gap-3">
+                      <Field label="Width (mm)" htmlFor={`${base}.widthMm`} error={errorAt(errors, `${base}.widthMm`)}>
+                        <input
+                          id={`${base}.widthMm`}
+                          type="number"
+                          step="any"
+                          {...register(`layers.${i}.widthMm` as never, { valueAsNumber: true })}
+                        />
+                      </Field>
+                      <Controller
+                        control={control}
+                        name={`layers.${i}.gas` as never}
+                        render={({ field: f }) => <GasField id={base} value={f.value} onChange={f.onChange} />}
+                      />
+                    </div>
+                    {errorAt(errors, `${base}.gas`)?.message && <p className="field-error">{errorAt(errors, `${base}.gas`)!.message}</p>}
+                  </li>
+                );
+              }
+              const n = paneNumber(i);
+              const measured = isMeasured(layer);
               return (
-                <li key={field.id} className="rounded border border-dashed border-glass/40 bg-glass-light/40 p-3" data-testid="gap-row">
-                  <p className="mb-2 text-xs font-bold uppercase tracking-wide text-glass">Gap {paneNumber(i)}</p>
-                  <div className="grid grid-cols-[110px_1fr] gap-3">
-                    <Field label="Width (mm)" htmlFor={`${base}.widthMm`} error={errorAt(errors, `${base}.widthMm`)}>
-                      <input id={`${base}.widthMm`} type="number" step="any" {...register(`layers.${i}.widthMm` as never, { valueAsNumber: true })} />
-                    </Field>
-                    <Controller
-                      control={control}
-                      name={`layers.${i}.gas` as never}
-                      render={({ field: f }) => <GasField id={base} value={f.value} onChange={f.onChange} />}
-                    />
+                <li key={field.id} className="card space-y-3 p-4" data-testid="pane-row">
+                  <div className="flex items-center gap-2">
+                    <p className="font-bold">
+                      Pane {n}{" "}
+                      <span className="text-xs font-normal text-slate">
+                        faces {2 * n - 1} | {2 * n}
+                      </span>
+                    </p>
+                    <select
+                      aria-label={`How pane ${n} is described`}
+                      className="ml-auto mt-0 w-auto py-1 text-sm"
+                      value={measured ? "measured" : "physical"}
+                      onChange={(e) => {
+                        const t = layer.thicknessMm ?? 4;
+                        const keep = { emissivityFront: layer.emissivityFront, emissivityBack: layer.emissivityBack };
+                        layers.update(i, { ...(e.target.value === "measured" ? measuredDefault(t) : physicalDefault(t)), ...keep });
+                      }}
+                    >
+                      <option value="physical">glass properties</option>
+                      <option value="measured">measured values</option>
+                    </select>
+                    {paneCount > 1 && (
+                      <button type="button" className="btn-quiet py-1" onClick={() => removePane(i)} aria-label={`Remove pane ${n}`}>
+                        Remove
+                      </button>
+                    )}
                   </div>
-                  {errorAt(errors, `${base}.gas`)?.message && <p className="field-error">{errorAt(errors, `${base}.gas`)!.message}</p>}
+                  <div className="grid grid-cols-3 gap-3">
+                    <Field label="Thickness (mm)" htmlFor={`${base}.thicknessMm`} error={errorAt(errors, `${base}.thicknessMm`)}>
+                      <input
+                        id={`${base}.thicknessMm`}
+                        type="number"
+                        step="any"
+                        {...register(`layers.${i}.thicknessMm` as never, { valueAsNumber: true })}
+                      />
+                    </Field>
+                    {!measured && (
+                      <>
+                        <Field label="Refractive index" htmlFor={`${base}.refractiveIndex`} error={errorAt(errors, `${base}.refractiveIndex`)}>
+                          <input
+                            id={`${base}.refractiveIndex`}
+                            type="number"
+                            step="any"
+                            {...register(`layers.${i}.refractiveIndex` as never, { valueAsNumber: true })}
+                          />
+                        </Field>
+                        <Field label="Absorption (1/mm)" htmlFor={`${base}.absorptionPerMm`} error={errorAt(errors, `${base}.absorptionPerMm`)}>
+                          <input
+                            id={`${base}.absorptionPerMm`}
+                            type="number"
+                            step="any"
+                            {...register(`layers.${i}.absorptionPerMm` as never, { valueAsNumber: true })}
+                          />
+                        </Field>
+                      </>
+                    )}
+                  </div>
+                  {measured && (
+                    <div className="grid grid-cols-3 gap-3">
+                      {(
+                        [
+                          ["solarTransmittance", "Solar T"],
+                          ["solarReflectanceFront", "Solar R, face " + (2 * n - 1)],
+                          ["solarReflectanceBack", "Solar R, face " + 2 * n],
+                          ["visibleTransmittance", "Light T"],
+                          ["visibleReflectanceFront", "Light R, face " + (2 * n - 1)],
+                          ["visibleReflectanceBack", "Light R, face " + 2 * n],
+                        ] as const
+                      ).map(([key, label]) => (
+                        <Field key={key} label={label} htmlFor={`${base}.measured.${key}`} error={errorAt(errors, `${base}.measured.${key}`)}>
+                          <input
+                            id={`${base}.measured.${key}`}
+                            type="number"
+                            step="any"
+                            placeholder={key.startsWith("visible") ? "optional" : undefined}
+                            {...register(`layers.${i}.measured.${key}` as never, {
+                              setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
+                            })}
+                          />
+                        </Field>
+                      ))}
+                    </div>
+                  )}
+                  <div className="grid grid-cols-2 gap-3">
+                    <Field
+                      label={`Emissivity, face ${2 * n - 1}`}
+                      htmlFor={`${base}.emissivityFront`}
+                      error={errorAt(errors, `${base}.emissivityFront`)}
+                      hint="0.837 if uncoated"
+                    >
+                      <input
+                        id={`${base}.emissivityFront`}
+                        type="number"
+                        step="any"
+                        placeholder="0.837"
+                        {...register(`layers.${i}.emissivityFront` as never, {
+                          setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
+                        })}
+                      />
+                    </Field>
+                    <Field
+                      label={`Emissivity, face ${2 * n}`}
+                      htmlFor={`${base}.emissivityBack`}
+                      error={errorAt(errors, `${base}.emissivityBack`)}
+                      hint="0.837 if uncoated"
+                    >
+                      <input
+                        id={`${base}.emissivityBack`}
+                        type="number"
+                        step="any"
+                        placeholder="0.837"
+                        {...register(`layers.${i}.emissivityBack` as never, {
+                          setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
+                        })}
+                      />
+                    </Field>
+                  </div>
                 </li>
               );
-            }
-            const n = paneNumber(i);
-            const measured = isMeasured(layer);
-            return (
-              <li key={field.id} className="card space-y-3 p-4" data-testid="pane-row">
-                <div className="flex items-center gap-2">
-                  <p className="font-bold">
-                    Pane {n}{" "}
-                    <span className="text-xs font-normal text-slate">
-                      faces {2 * n - 1} | {2 * n}
-                    </span>
-                  </p>
-                  <select
-                    aria-label={`How pane ${n} is described`}
-                    className="ml-auto mt-0 w-auto py-1 text-sm"
-                    value={measured ? "measured" : "physical"}
-                    onChange={(e) => {
-                      const t = layer.thicknessMm ?? 4;
-                      const keep = { emissivityFront: layer.emissivityFront, emissivityBack: layer.emissivityBack };
-                      layers.update(i, { ...(e.target.value === "measured" ? measuredDefault(t) : physicalDefault(t)), ...keep });
-                    }}
-                  >
-                    <option value="physical">glass properties</option>
-                    <option value="measured">measured values</option>
-                  </select>
-                  {paneCount > 1 && (
-                    <button type="button" className="btn-quiet py-1" onClick={() => removePane(i)} aria-label={`Remove pane ${n}`}>
-                      Remove
-                    </button>
-                  )}
-                </div>
-                <div className="grid grid-cols-3 gap-3">
-                  <Field label="Thickness (mm)" htmlFor={`${base}.thicknessMm`} error={errorAt(errors, `${base}.thicknessMm`)}>
-                    <input
-                      id={`${base}.thicknessMm`}
-                      type="number"
-                      step="any"
-                      {...register(`layers.${i}.thicknessMm` as never, { valueAsNumber: true })}
-                    />
-                  </Field>
-                  {!measured && (
-                    <>
-                      <Field label="Refractive index" htmlFor={`${base}.refractiveIndex`} error={errorAt(errors, `${base}.refractiveIndex`)}>
-                        <input
-                          id={`${base}.refractiveIndex`}
-                          type="number"
-                          step="any"
-                          {...register(`layers.${i}.refractiveIndex` as never, { valueAsNumber: true })}
-                        />
-                      </Field>
-                      <Field label="Absorption (1/mm)" htmlFor={`${base}.absorptionPerMm`} error={errorAt(errors, `${base}.absorptionPerMm`)}>
-                        <input
-                          id={`${base}.absorptionPerMm`}
-                          type="number"
-                          step="any"
-                          {...register(`layers.${i}.absorptionPerMm` as never, { valueAsNumber: true })}
-                        />
-                      </Field>
-                    </>
-                  )}
-                </div>
-                {measured && (
-                  <div className="grid grid-cols-3 gap-3">
-                    {(
-                      [
-                        ["solarTransmittance", "Solar T"],
-                        ["solarReflectanceFront", "Solar R, face " + (2 * n - 1)],
-                        ["solarReflectanceBack", "Solar R, face " + 2 * n],
-                        ["visibleTransmittance", "Light T"],
-                        ["visibleReflectanceFront", "Light R, face " + (2 * n - 1)],
-                        ["visibleReflectanceBack", "Light R, face " + 2 * n],
-                      ] as const
-                    ).map(([key, label]) => (
-                      <Field key={key} label={label} htmlFor={`${base}.measured.${key}`} error={errorAt(errors, `${base}.measured.${key}`)}>
-                        <input
-                          id={`${base}.measured.${key}`}
-                          type="number"
-                          step="any"
-                          placeholder={key.startsWith("visible") ? "optional" : undefined}
-                          {...register(`layers.${i}.measured.${key}` as never, {
-                            setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
-                          })}
-                        />
-                      </Field>
-                    ))}
-                  </div>
-                )}
-                <div className="grid grid-cols-2 gap-3">
-                  <Field
-                    label={`Emissivity, face ${2 * n - 1}`}
-                    htmlFor={`${base}.emissivityFront`}
-                    error={errorAt(errors, `${base}.emissivityFront`)}
-                    hint="0.837 if uncoated"
-                  >
-                    <input
-                      id={`${base}.emissivityFront`}
-                      type="number"
-                      step="any"
-                      placeholder="0.837"
-                      {...register(`layers.${i}.emissivityFront` as never, {
-                        setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
-                      })}
-                    />
-                  </Field>
-                  <Field
-                    label={`Emissivity, face ${2 * n}`}
-                    htmlFor={`${base}.emissivityBack`}
-                    error={errorAt(errors, `${base}.emissivityBack`)}
-                    hint="0.837 if uncoated"
-                  >
-                    <input
-                      id={`${base}.emissivityBack`}
-                      type="number"
-                      step="any"
-                      placeholder="0.837"
-                      {...register(`layers.${i}.emissivityBack` as never, {
-                        setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
-                      })}
-                    />
-                  </Field>
-                </div>
-              </li>
-            );
-          })}
-        </ol>
-        {errorAt(errors, "layers")?.message && <p className="field-error">{errorAt(errors, "layers")!.message}</p>}
-        <button type="button" className="btn-quiet" onClick={addPane} disabled={paneCount >= MAX_PANES}>
-          Add a gap and a pane (room side)
-        </button>
-      </form>
+            })}
+          </ol>
+          {errorAt(errors, "layers")?.message && <p className="field-error">{errorAt(errors, "layers")!.message}</p>}
+          <button type="button" className="btn-quiet" onClick={addPane} disabled={paneCount >= MAX_PANES}>
+            Add a gap and a pane (room side)
+          </button>
+        </form>
 
-      <section className="space-y-5" aria-live="polite" data-testid="glazing-results" data-busy={busy ? "1" : "0"}>
-        {failure && <FormMessage kind="error">{failure}</FormMessage>}
-        {!result ? (
-          <p className="text-slate">{busy ? "Calculating…" : "Enter a valid make-up to see its values."}</p>
-        ) : (
-          <>
-            <div className="grid gap-4 sm:grid-cols-3">
-              <div className="card">
-                <p className="text-xs font-bold uppercase tracking-wide text-slate">g-value (normal)</p>
-                <p className="text-3xl font-black tabular-nums" data-testid="g-normal">
-                  {fix(normal?.gValue, 2)}
-                </p>
-                <p className="text-xs text-slate">EN 410 · hemispherical {fix(result.hemispherical.gValue, 2)}</p>
+        <section className="space-y-5" aria-live="polite" data-testid="glazing-results" data-busy={busy ? "1" : "0"}>
+          {failure && <FormMessage kind="error">{failure}</FormMessage>}
+          {!result ? (
+            <p className="text-slate">{busy ? "Calculating…" : "Enter a valid make-up to see its values."}</p>
+          ) : (
+            <>
+              <div className="grid gap-4 sm:grid-cols-3">
+                <div className="card">
+                  <p className="text-xs font-bold uppercase tracking-wide text-slate">g-value (normal)</p>
+                  <p className="text-3xl font-black tabular-nums" data-testid="g-normal">
+                    {fix(normal?.gValue, 2)}
+                  </p>
+                  <p className="text-xs text-slate">EN 410 · hemispherical {fix(result.hemispherical.gValue, 2)}</p>
+                </div>
+                <div className="card">
+                  <p className="text-xs font-bold uppercase tracking-wide text-slate">U-value, centre of glass</p>
+                  <p className="text-3xl font-black tabular-nums" data-testid="u-value">
+                    {result.uValue.toFixed(1)}
+                  </p>
+                  <p className="text-xs text-slate">W/(m²K) · EN 673 · unrounded {result.uValue.toFixed(3)}</p>
+                </div>
+                <div className="card">
+                  <p className="text-xs font-bold uppercase tracking-wide text-slate">Light transmittance</p>
+                  <p className="text-3xl font-black tabular-nums">
+                    {normal?.visibleTransmittance == null ? "—" : pct(normal.visibleTransmittance, 0)}
+                  </p>
+                  <p className="text-xs text-slate">
+                    {normal?.visibleTransmittance == null ? "needs measured light values for every pane" : "normal incidence"}
+                  </p>
+                </div>
               </div>
-              <div className="card">
-                <p className="text-xs font-bold uppercase tracking-wide text-slate">U-value, centre of glass</p>
-                <p className="text-3xl font-black tabular-nums" data-testid="u-value">
-                  {result.uValue.toFixed(1)}
-                </p>
-                <p className="text-xs text-slate">W/(m²K) · EN 673 · unrounded {result.uValue.toFixed(3)}</p>
+              <div className="card grid gap-6 2xl:grid-cols-2">
+                <AngularChart title="Transmittance, reflectance and g" series={chart1} />
+                <AngularChart title="Absorptance per pane (sun from outdoors)" series={chart2} />
               </div>
-              <div className="card">
-                <p className="text-xs font-bold uppercase tracking-wide text-slate">Light transmittance</p>
-                <p className="text-3xl font-black tabular-nums">{normal?.visibleTransmittance == null ? "—" : pct(normal.visibleTransmittance, 0)}</p>
-                <p className="text-xs text-slate">
-                  {normal?.visibleTransmittance == null ? "needs measured light values for every pane" : "normal incidence"}
-                </p>
-              </div>
-            </div>
-            <div className="card grid gap-6 2xl:grid-cols-2">
-              <AngularChart title="Transmittance, reflectance and g" series={chart1} />
-              <AngularChart title="Absorptance per pane (sun from outdoors)" series={chart2} />
-            </div>
-            <div className="card overflow-x-auto">
-              <table className="w-full text-sm tabular-nums" data-testid="summary-table">
-                <thead className="text-left text-slate">
-                  <tr>
-                    <th className="py-1">Quantity</th>
-                    <th className="text-right">Normal (0°)</th>
-                    <th className="text-right">Hemispherical</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  <tr className="border-t border-line">
-                    <td className="py-1">Solar transmittance τe</td>
-                    <td className="text-right">{fix(normal?.solarTransmittance)}</td>
-                    <td className="text-right">{fix(result.hemispherical.solarTransmittance)}</td>
-                  </tr>
-                  <tr className="border-t border-line">
-                    <td className="py-1">Solar reflectance ρe, outdoor side</td>
-                    <td className="text-right">{fix(normal?.solarReflectanceFront)}</td>
-                    <td className="text-right">{fix(result.hemispherical.solarReflectanceFront)}</td>
-                  </tr>
-                  <tr className="border-t border-line">
-                    <td className="py-1">Solar reflectance, room side</td>
-                    <td className="text-right">{fix(normal?.solarReflectanceBack)}</td>
-                    <td className="text-right">{fix(result.hemispherical.solarReflectanceBack)}</td>
-                  </tr>
-                  {(normal?.layerAbsorptance ?? []).map((a, k) => (
-                    <tr key={k} className="border-t border-line">
-                      <td className="py-1">Absorptance, pane {k + 1}</td>
-                      <td className="text-right">{fix(a)}</td>
-                      <td className="text-right">{fix(result.hemispherical.layerAbsorptance[k])}</td>
+              <div className="card overflow-x-auto">
+                <table className="w-full text-sm tabular-nums" data-testid="summary-table">
+                  <thead className="text-left text-slate">
+                    <tr>
+                      <th className="py-1">Quantity</th>
+                      <th className="text-right">Normal (0°)</th>
+                      <th className="text-right">Hemispherical</th>
                     </tr>
-                  ))}
-                  <tr className="border-t border-line font-bold">
-                    <td className="py-1">g-value (total solar energy transmittance)</td>
-                    <td className="text-right">{fix(normal?.gValue)}</td>
-                    <td className="text-right">{fix(result.hemispherical.gValue)}</td>
-                  </tr>
-                  <tr className="border-t border-line">
-                    <td className="py-1">Light transmittance τv</td>
-                    <td className="text-right">{fix(normal?.visibleTransmittance)}</td>
-                    <td className="text-right">{fix(result.hemispherical.visibleTransmittance)}</td>
-                  </tr>
-                </tbody>
-              </table>
-            </div>
-            <details className="card">
-              <summary className="cursor-pointer font-bold">Values every 10°</summary>
-              <table className="mt-3 w-full text-sm tabular-nums" data-testid="angle-table">
-                <thead className="text-left text-slate">
-                  <tr>
-                    <th>Angle</th>
-                    <th className="text-right">τe</th>
-                    <th className="text-right">ρe out</th>
-                    <th className="text-right">ρe room</th>
-                    {(normal?.layerAbsorptance ?? []).map((_, k) => (
-                      <th key={k} className="text-right">
-                        A{k + 1}
-                      </th>
-                    ))}
-                    <th className="text-right">g</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {result.angles
-                    .filter((a) => a.angleDeg % 10 === 0)
-                    .map((a) => (
-                      <tr key={a.angleDeg} className="border-t border-line">
-                        <td>{a.angleDeg}°</td>
-                        <td className="text-right">{fix(a.solarTransmittance)}</td>
-                        <td className="text-right">{fix(a.solarReflectanceFront)}</td>
-                        <td className="text-right">{fix(a.solarReflectanceBack)}</td>
-                        {a.layerAbsorptance.map((x, k) => (
-                          <td key={k} className="text-right">
-                            {fix(x)}
-                          </td>
-                        ))}
-                        <td className="text-right">{fix(a.gValue)}</td>
+                  </thead>
+                  <tbody>
+                    <tr className="border-t border-line">
+                      <td className="py-1">Solar transmittance τe</td>
+                      <td className="text-right">{fix(normal?.solarTransmittance)}</td>
+                      <td className="text-right">{fix(result.hemispherical.solarTransmittance)}</td>
+                    </tr>
+                    <tr className="border-t border-line">
+                      <td className="py-1">Solar reflectance ρe, outdoor side</td>
+                      <td className="text-right">{fix(normal?.solarReflectanceFront)}</td>
+                      <td className="text-right">{fix(result.hemispherical.solarReflectanceFront)}</td>
+                    </tr>
+                    <tr className="border-t border-line">
+                      <td className="py-1">Solar reflectance, room side</td>
+                      <td className="text-right">{fix(normal?.solarReflectanceBack)}</td>
+                      <td className="text-right">{fix(result.hemispherical.solarReflectanceBack)}</td>
+                    </tr>
+                    {(normal?.layerAbsorptance ?? []).map((a, k) => (
+                      <tr key={k} className="border-t border-line">
+                        <td className="py-1">Absorptance, pane {k + 1}</td>
+                        <td className="text-right">{fix(a)}</td>
+                        <td className="text-right">{fix(result.hemispherical.layerAbsorptance[k])}</td>
                       </tr>
                     ))}
-                </tbody>
-              </table>
-            </details>
-            {result.warnings.length > 0 && (
-              <ul className="notice list-disc space-y-1 pl-8" data-testid="warnings">
-                {result.warnings.map((w) => (
-                  <li key={w}>{w}</li>
-                ))}
-              </ul>
-            )}
-          </>
-        )}
-      </section>
+                    <tr className="border-t border-line font-bold">
+                      <td className="py-1">g-value (total solar energy transmittance)</td>
+                      <td className="text-right">{fix(normal?.gValue)}</td>
+                      <td className="text-right">{fix(result.hemispherical.gValue)}</td>
+                    </tr>
+                    <tr className="border-t border-line">
+                      <td className="py-1">Light transmittance τv</td>
+                      <td className="text-right">{fix(normal?.visibleTransmittance)}</td>
+                      <td className="text-right">{fix(result.hemispherical.visibleTransmittance)}</td>
+                    </tr>
+                  </tbody>
+                </table>
+              </div>
+              <details className="card">
+                <summary className="cursor-pointer font-bold">Values every 10°</summary>
+                <table className="mt-3 w-full text-sm tabular-nums" data-testid="angle-table">
+                  <thead className="text-left text-slate">
+                    <tr>
+                      <th>Angle</th>
+                      <th className="text-right">τe</th>
+                      <th className="text-right">ρe out</th>
+                      <th className="text-right">ρe room</th>
+                      {(normal?.layerAbsorptance ?? []).map((_, k) => (
+                        <th key={k} className="text-right">
+                          A{k + 1}
+                        </th>
+                      ))}
+                      <th className="text-right">g</th>
+                    </tr>
+                  </thead>
+                  <tbody>
+                    {result.angles
+                      .filter((a) => a.angleDeg % 10 === 0)
+                      .map((a) => (
+                        <tr key={a.angleDeg} className="border-t border-line">
+                          <td>{a.angleDeg}°</td>
+                          <td className="text-right">{fix(a.solarTransmittance)}</td>
+                          <td className="text-right">{fix(a.solarReflectanceFront)}</td>
+                          <td className="text-right">{fix(a.solarReflectanceBack)}</td>
+                          {a.layerAbsorptance.map((x, k) => (
+                            <td key={k} className="text-right">
+                              {fix(x)}
+                            </td>
+                          ))}
+                          <td className="text-right">{fix(a.gValue)}</td>
+                        </tr>
+                      ))}
+                  </tbody>
+                </table>
+              </details>
+              {result.warnings.length > 0 && (
+                <ul className="notice list-disc space-y-1 pl-8" data-testid="warnings">
+                  {result.warnings.map((w) => (
+                    <li key={w}>{w}</li>
+                  ))}
+                </ul>
+              )}
+            </>
+          )}
+        </section>
+      </div>
     </div>
   );
 }

@@ -2,6 +2,7 @@
 import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
 import { requireProject, type ProjectRow } from "@/lib/server/services/access";
 import { facadesOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
+import { revisionsOf } from "@/lib/server/services/revisions";
 
 interface PageUser {
   id: string;
@@ -28,6 +29,12 @@ export interface ProjectPage {
   canShare: boolean;
   /** Who sees the project; empty unless canShare. */
   shares: ShareRow[];
+  /** Drafts: options, requirements, results (not clients, who see only issued revisions). */
+  canSeeDrafts: boolean;
+  /** Add, re-point and remove options; set the requirements. */
+  canAssign: boolean;
+  /** The issued schedule revisions, newest first (everyone who sees the project). */
+  revisions: { letter: string; issuedAt: string; issuedBy: string; note: string | null; facadeCount: number }[];
 }
 
 /** The project overview; NotFoundError when the project is missing or not visible to the user. */
@@ -44,6 +51,15 @@ export async function loadProjectPage(user: PageUser, projectId: string | undefi
     canDelete: roleCan(membership.role, { project: ["delete"] }),
     canShare,
     shares: canShare ? await sharesOf(project) : [],
+    canSeeDrafts: roleCan(membership.role, { project: ["readAll"] }),
+    canAssign: roleCan(membership.role, { option: ["assign"] }),
+    revisions: (await revisionsOf(project.id)).map((r) => ({
+      letter: r.revision,
+      issuedAt: r.issuedAt,
+      issuedBy: r.issuedBy,
+      note: r.note,
+      facadeCount: r.facades.length,
+    })),
   };
 }
 
