@@ -8,7 +8,15 @@ import { db } from "@/lib/server/db/client";
 import { facade, facadeOption, optionComment, optionDecision, projectEvent, type FacadeOption } from "@/lib/server/db/schema";
 import { ConflictError, InvalidError } from "@/lib/server/errors";
 import { recordEvent, type Actor } from "./history";
-import type { CommentRequest, CommentView, DecisionRequest, DecisionResponse, DecisionView, HistoryItem, OptionStatusView } from "@/lib/contracts/review";
+import type {
+  CommentRequest,
+  CommentView,
+  DecisionRequest,
+  DecisionResponse,
+  DecisionView,
+  HistoryItem,
+  OptionStatusView,
+} from "@/lib/contracts/review";
 import { pageOf, type Page, type PageQuery } from "@/lib/contracts/pagination";
 
 const iso = (d: Date) => d.toISOString();
@@ -35,7 +43,11 @@ const statusView = (o: FacadeOption): OptionStatusView => ({ id: o.id, facadeId:
 
 /** The option's comments, oldest first, each with its parent (null for a thread's first comment). */
 export async function commentsOf(optionId: string): Promise<CommentView[]> {
-  const rows = await db.select().from(optionComment).where(eq(optionComment.optionId, optionId)).orderBy(asc(optionComment.createdAt), asc(optionComment.id));
+  const rows = await db
+    .select()
+    .from(optionComment)
+    .where(eq(optionComment.optionId, optionId))
+    .orderBy(asc(optionComment.createdAt), asc(optionComment.id));
   return rows.map(commentView);
 }
 
@@ -44,7 +56,11 @@ export async function addComment(option: FacadeOption, actor: Actor, req: Commen
     if (req.parentId) {
       const parent = (await tx.select({ optionId: optionComment.optionId }).from(optionComment).where(eq(optionComment.id, req.parentId)))[0];
       if (!parent || parent.optionId !== option.id)
-        throw new InvalidError("parentId", "The comment replied to must belong to this option", "Reply: the comment replied to is not a comment of this option");
+        throw new InvalidError(
+          "parentId",
+          "The comment replied to must belong to this option",
+          "Reply: the comment replied to is not a comment of this option",
+        );
     }
     const [row] = await tx
       .insert(optionComment)
@@ -62,7 +78,11 @@ export async function addComment(option: FacadeOption, actor: Actor, req: Commen
 }
 
 export async function decisionsOf(optionId: string): Promise<DecisionView[]> {
-  const rows = await db.select().from(optionDecision).where(eq(optionDecision.optionId, optionId)).orderBy(asc(optionDecision.createdAt), asc(optionDecision.id));
+  const rows = await db
+    .select()
+    .from(optionDecision)
+    .where(eq(optionDecision.optionId, optionId))
+    .orderBy(asc(optionDecision.createdAt), asc(optionDecision.id));
   return rows.map(decisionView);
 }
 
@@ -99,7 +119,9 @@ export async function decide(optionId: string, actor: Actor, req: DecisionReques
         .set({ status: req.decision, version: sql`${facadeOption.version} + 1` })
         .where(eq(facadeOption.id, option.id))
         .returning();
-      await tx.insert(optionDecision).values({ optionId: option.id, decision: req.decision, note: req.note ?? null, decidedById: actor.id, decidedByName: actor.name });
+      await tx
+        .insert(optionDecision)
+        .values({ optionId: option.id, decision: req.decision, note: req.note ?? null, decidedById: actor.id, decidedByName: actor.name });
       const verb = req.decision === "approved" ? "Approved" : "Rejected";
       await recordEvent(tx, {
         projectId: option.projectId,
@@ -108,9 +130,13 @@ export async function decide(optionId: string, actor: Actor, req: DecisionReques
         summary: `${verb} “${option.name}” for ${facadeName}${previous ? ` (replacing “${previous.name}”)` : ""}`,
         detail: { optionId: option.id, facadeId: option.facadeId, note: req.note ?? null, previouslyApproved: previous?.id ?? null },
       });
-      const decisions = (await tx.select().from(optionDecision).where(eq(optionDecision.optionId, option.id)).orderBy(asc(optionDecision.createdAt), asc(optionDecision.id))).map(
-        decisionView,
-      );
+      const decisions = (
+        await tx
+          .select()
+          .from(optionDecision)
+          .where(eq(optionDecision.optionId, option.id))
+          .orderBy(asc(optionDecision.createdAt), asc(optionDecision.id))
+      ).map(decisionView);
       return { option: statusView(updated!), ...(previous ? { previouslyApproved: statusView(previous) } : {}), decisions };
     });
   } catch (err) {
