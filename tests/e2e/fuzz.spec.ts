@@ -15,6 +15,8 @@ import { GlazingRequest } from "@/lib/contracts/glazing";
 import { ProjectCreateRequest, ProjectUpdateRequest, ShareRequest } from "@/lib/contracts/projects";
 import { ScheduleRequest } from "@/lib/contracts/schedule";
 import { call, createOutsider, type Outsider } from "./api-actors";
+import { CommentRequest, DecisionRequest } from "@/lib/contracts/review";
+import { insertOption } from "./review-fixtures";
 
 const SEED = Number(process.env.FC_SEED ?? 20261202);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 25);
@@ -123,6 +125,8 @@ function hints(ctx: Ctx): Record<string, fc.Arbitrary<unknown>> {
 interface Ctx {
   outsider: Outsider;
   memberId: string;
+  /** An option of the fuzz project (written to the database directly). */
+  optionId?: string;
 }
 
 /** Values a JSON Schema allows, with hostile values in place of some of them when `mixed`. */
@@ -345,6 +349,20 @@ const FUZZED: FuzzRoute[] = [
     url: (c) => `/api/v1/orgs/${c.outsider.organizationId}/members/${c.memberId}`,
     example: () => ({ role: "owner" }),
   },
+  {
+    method: "POST",
+    path: "/api/v1/options/:id/comments",
+    schema: CommentRequest,
+    url: (c) => `/api/v1/options/${c.optionId}/comments`,
+    example: () => ({ body: "Fuzzed comment" }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/options/:id/decision",
+    schema: DecisionRequest,
+    url: (c) => `/api/v1/options/${c.optionId}/decision`,
+    example: () => ({ decision: "rejected", note: "Fuzzed note" }),
+  },
 ];
 
 let ctx: Ctx;
@@ -386,6 +404,7 @@ test.beforeAll(async () => {
   });
   expect(p.status).toBe(201);
   projectId = (p.body as { project: { id: string } }).project.id;
+  ctx.optionId = (await insertOption(db, projectId, "Fuzz option")).optionId;
 });
 
 test.afterAll(async () => {
