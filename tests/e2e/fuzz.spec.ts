@@ -19,6 +19,7 @@ import { MakeupCreateRequest, MakeupPatchRequest, PaneCreateRequest, PanePatchRe
 import { OptionCreateRequest, OptionPatchRequest } from "@/lib/contracts/options";
 import { RequirementsRequest } from "@/lib/contracts/requirements";
 import { call, createOutsider, type Outsider } from "./api-actors";
+import { CommentRequest, DecisionRequest } from "@/lib/contracts/review";
 
 const SEED = Number(process.env.FC_SEED ?? 20261202);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 25);
@@ -414,6 +415,20 @@ const FUZZED: FuzzRoute[] = [
     schema: RequirementsRequest,
     url: () => `/api/v1/projects/${projectId}/requirements`,
     example: () => ({ project: { maxGValue: 0.4, minLightTransmittance: 0.5 } }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/options/:id/comments",
+    schema: CommentRequest,
+    url: (c) => `/api/v1/options/${c.optionId}/comments`,
+    example: () => ({ body: "Fuzzed comment" }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/options/:id/decision",
+    schema: DecisionRequest,
+    url: (c) => `/api/v1/options/${c.optionId}/decision`,
+    example: () => ({ decision: "rejected", note: "Fuzzed note" }),
   },
 ];
 

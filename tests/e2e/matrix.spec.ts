@@ -7,8 +7,10 @@ import { permissionFor, roleCan } from "@/lib/auth/roles";
 import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
 import { ACTORS, ANONYMOUS, addMember, call, createOutsider, signInAs, signInDemo, type Actor, type Caller, type Outsider } from "./api-actors";
 import { AUTH_ROUTES } from "@/lib/server/auth-routes";
+import pg from "pg";
 import { uniqueEmail } from "./helpers";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow, tintedPane } from "./workspace-rows";
+import { insertOption, removeMakeups } from "./review-fixtures";
 
 // A request that reaches each better-auth path the app serves (AUTH_ROUTES, relative to /api/auth), and the
 // answer every caller gets.
@@ -37,7 +39,9 @@ interface World {
   members: string[];
   invitations: string[];
   outsiderInvitationId: string;
+  /** Fixture make-ups of the option routes, and the database connection that writes them. */
   makeups: string[];
+  db: pg.Client;
 }
 let w: World;
 
@@ -104,6 +108,41 @@ async function throwawayInvitation(): Promise<string> {
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
 const air16 = { kind: "gap", widthMm: 16, gas: "air" };
 const fixed = (path: string, body?: unknown) => async (): Promise<Prepared> => ({ path, body });
+
+/** A fresh option on a throwaway project (its make-up and option written to the database directly). */
+async function throwawayOption(target: Target): Promise<string> {
+  const projectId = await throwawayProject(target);
+  const o = await insertOption(w.db, projectId, `Matrix option (${target})`);
+  w.makeups.push(o.makeupId);
+  return o.optionId;
+}
+
+const reviewCases = (target: Target): Case[] => [
+  {
+    method: "GET",
+    path: "/api/v1/options/:id/comments",
+    target,
+    prepare: async () => ({ path: `/api/v1/options/${await throwawayOption(target)}/comments` }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/options/:id/comments",
+    target,
+    prepare: async () => ({ path: `/api/v1/options/${await throwawayOption(target)}/comments`, body: { body: "Checked by the access matrix" } }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/options/:id/decision",
+    target,
+    prepare: async () => ({ path: `/api/v1/options/${await throwawayOption(target)}/decision`, body: { decision: "approved", note: "Matrix" } }),
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/history",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}/history` }),
+  },
+];
 
 const projectCases = (target: Target): Case[] => [
   { method: "GET", path: "/api/v1/projects/:id", target, prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}` }) },
@@ -368,6 +407,8 @@ const CASES: Case[] = [
   ...libraryCases(),
   ...optionCases("shared"),
   ...optionCases("unshared"),
+  ...reviewCases("shared"),
+  ...reviewCases("unshared"),
 ];
 
 const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);
@@ -385,7 +426,11 @@ test.beforeAll(async () => {
     role: "client",
   });
   expect(inv.status).toBe(201);
+  const db = new pg.Client({ connectionString: process.env.DATABASE_URL });
+  await db.connect();
   w = {
+    db,
+    makeups: [],
     callers,
     outsider,
     orgId,
@@ -394,7 +439,6 @@ test.beforeAll(async () => {
     members: [],
     invitations: [],
     outsiderInvitationId: (inv.body as { invitation: { id: string } }).invitation.id,
-    makeups: [],
   };
 });
 
@@ -405,6 +449,8 @@ test.afterAll(async () => {
   for (const id of w.invitations) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/invitations/${id}`);
   await deleteMakeupRows(w.makeups);
   await closeWorkspaceRows();
+  await removeMakeups(w.db, w.makeups);
+  await w.db.end();
 });
 
 test("every route in the table has a case, and every case a route", () => {

@@ -311,6 +311,38 @@ export const ROUTES: readonly RouteEntry[] = [
     ok: 200,
     writes: true,
   },
+  {
+    file: "v1/options/[id]/comments.ts",
+    path: "/api/v1/options/:id/comments",
+    method: "GET",
+    auth: { option: "id", permission: "project:readAll" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/options/[id]/comments.ts",
+    path: "/api/v1/options/:id/comments",
+    method: "POST",
+    auth: { option: "id", permission: "comment:create" },
+    ok: 201,
+    writes: true,
+  },
+  {
+    file: "v1/options/[id]/decision.ts",
+    path: "/api/v1/options/:id/decision",
+    method: "POST",
+    auth: { option: "id", permission: "option:review" },
+    ok: 200,
+    writes: true,
+  },
+  {
+    file: "v1/projects/[id]/history.ts",
+    path: "/api/v1/projects/:id/history",
+    method: "GET",
+    auth: { project: "id", permission: "project:readAll" },
+    ok: 200,
+    writes: false,
+  },
 ];
 
 /** "METHOD /path" of a row, for messages and test titles. */

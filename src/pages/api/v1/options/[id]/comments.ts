@@ -1,0 +1,17 @@
+import { z } from "zod";
+import { rowId } from "@/lib/contracts/common";
+import { CommentRequest } from "@/lib/contracts/review";
+import { endpoint, json } from "@/lib/server/http";
+import { addComment, commentsOf } from "@/lib/server/services/review";
+
+const params = z.object({ id: rowId });
+
+/** The option's comment thread, oldest first (each comment names its parent). */
+export const GET = endpoint({ auth: { option: "id", permission: "project:readAll" }, params }, async ({ option }) =>
+  json({ comments: await commentsOf(option.id) }),
+);
+
+export const POST = endpoint(
+  { auth: { option: "id", permission: "comment:create" }, params, body: CommentRequest, maxBytes: 64 * 1024 },
+  async ({ option, user, body }) => json(await addComment(option, { id: user.id, name: user.name }, body), 201),
+);
