@@ -125,7 +125,7 @@ function LibraryTable({ organizationId, initial, canEdit, canDelete }: Props) {
           The library is empty. <a href="/glazing">Compose a make-up and save it to the library.</a>
         </p>
       ) : (
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full min-w-[48rem] text-sm" data-testid="library-table">
             <thead className="text-left text-slate">
               {table.getHeaderGroups().map((hg) => (

@@ -107,7 +107,7 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
               {mine.length === 0 ? (
                 <p className="text-sm text-slate">No options yet{canAssign ? ": add one from the library below." : "."}</p>
               ) : (
-                <div className="overflow-x-auto">
+                <div className="relative overflow-x-auto">
                   <table className="w-full min-w-[36rem] text-sm" data-testid="options-table">
                     <thead className="text-left text-slate">
                       <tr>

@@ -99,7 +99,7 @@ function RequirementsForm(props: { projectId: string; facades: { id: string; nam
         </FormMessage>
       )}
       {saved && <FormMessage kind="ok">Requirements saved; the results are checked against them.</FormMessage>}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full min-w-[44rem] text-sm" data-testid="requirements-table">
           <thead className="text-left text-slate">
             <tr>
