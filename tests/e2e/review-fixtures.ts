@@ -9,15 +9,18 @@ export const CLEAR_DOUBLE_LAYERS = [
   { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 },
 ];
 
-/** Inserts a make-up, its revision and an option named `name` on the project's first façade; returns their ids. */
+/** Inserts a make-up, its revision and an option named `name` on the given façade (default: the project's first); returns their ids. */
 export async function insertOption(
   db: pg.Client,
   projectId: string,
   name = "Fixture option",
+  facadeId?: string,
 ): Promise<{ optionId: string; makeupId: string; facadeId: string }> {
   const p = (await db.query("select organization_id from project where id = $1", [projectId])).rows[0] as { organization_id: string };
-  let f = (await db.query("select id from facade where project_id = $1 order by position, id limit 1", [projectId])).rows[0] as
-    { id: string } | undefined;
+  let f = facadeId
+    ? { id: facadeId }
+    : ((await db.query("select id from facade where project_id = $1 order by position, id limit 1", [projectId])).rows[0] as
+        { id: string } | undefined);
   if (!f) {
     const id = randomUUID();
     await db.query("insert into facade (id, project_id, name, azimuth_deg) values ($1, $2, 'South', 180)", [id, projectId]);

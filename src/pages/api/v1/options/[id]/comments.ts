@@ -2,13 +2,13 @@ import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
 import { CommentRequest } from "@/lib/contracts/review";
 import { endpoint, json } from "@/lib/server/http";
-import { addComment, commentsOf } from "@/lib/server/services/review";
+import { addComment, commentsOf, decisionsOf } from "@/lib/server/services/review";
 
 const params = z.object({ id: rowId });
 
-/** The option's comment thread, oldest first (each comment names its parent). */
+/** The option's comment thread, oldest first (each comment names its parent), with its status and decisions. */
 export const GET = endpoint({ auth: { option: "id", permission: "project:readAll" }, params }, async ({ option }) =>
-  json({ comments: await commentsOf(option.id) }),
+  json({ status: option.status, comments: await commentsOf(option.id), decisions: await decisionsOf(option.id) }),
 );
 
 export const POST = endpoint(
