@@ -62,11 +62,3 @@ export interface HistoryResponse {
   items: HistoryItem[];
   nextCursor: string | null;
 }
-
-/** One issued schedule revision in the project's list. */
-export interface RevisionListItem {
-  letter: string;
-  issuedAt: string;
-  issuedBy: string;
-  note: string | null;
-}

@@ -8,7 +8,7 @@ import { facadesOf } from "@/lib/server/services/projects";
 import { historyOf } from "@/lib/server/services/review";
 import { permissionFor } from "@/lib/auth/roles";
 import { InstantPageQuery } from "@/lib/contracts/pagination";
-import type { HistoryResponse, RevisionListItem } from "@/lib/contracts/review";
+import type { HistoryResponse } from "@/lib/contracts/review";
 
 interface PageUser {
   id: string;
@@ -85,19 +85,4 @@ export async function loadHistoryPage(user: PageUser, projectId: string | undefi
   const { project } = await requireProject(user.id, projectId ?? "", permissionFor("project:readAll"), "see the project's history");
   const q = InstantPageQuery.safeParse(query);
   return { project, history: await historyOf(project.id, q.success ? q.data : { limit: 50 }) };
-}
-
-/** The project's issued revisions, newest first: what everyone who sees the project, clients too, may read. */
-export async function revisionsOf(projectId: string): Promise<RevisionListItem[]> {
-  const rows = await db
-    .select({
-      letter: scheduleRevision.letter,
-      issuedAt: scheduleRevision.issuedAt,
-      issuedBy: scheduleRevision.issuedByName,
-      note: scheduleRevision.note,
-    })
-    .from(scheduleRevision)
-    .where(eq(scheduleRevision.projectId, projectId))
-    .orderBy(desc(scheduleRevision.sequence));
-  return rows.map((r) => ({ ...r, issuedAt: r.issuedAt.toISOString() }));
 }
