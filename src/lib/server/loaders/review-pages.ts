@@ -1,8 +1,8 @@
-/** View models of the review pages: the options of every façade for the architect, the history, the issued revisions. */
-import { asc, desc, eq } from "drizzle-orm";
+/** View models of the review pages: the options of every façade for the architect and the history. */
+import { asc, eq } from "drizzle-orm";
 import { roleCan, type RoleName } from "@/lib/auth/roles";
 import { db } from "@/lib/server/db/client";
-import { facadeOption, makeupRevision, scheduleRevision } from "@/lib/server/db/schema";
+import { facadeOption, makeupRevision } from "@/lib/server/db/schema";
 import { requireProject, type ProjectRow } from "@/lib/server/services/access";
 import { facadesOf } from "@/lib/server/services/projects";
 import { historyOf } from "@/lib/server/services/review";
