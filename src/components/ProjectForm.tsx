@@ -2,7 +2,7 @@ import { useMemo, useState } from "react";
 import { useFieldArray, useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
-import { ProjectCreateRequest } from "@/lib/contracts/projects";
+import { ProjectCreateRequest, SKY_MODEL_LABELS, SKY_MODELS } from "@/lib/contracts/projects";
 import { api, ApiError } from "@/lib/client/api";
 import { compassPoint } from "@/lib/format";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
@@ -18,7 +18,30 @@ interface Props {
   project?: Omit<Input, "organizationId"> & { id: string };
 }
 
-const FIELDS = ["name", "reference", "buildingName", "siteName", "latitudeDeg", "longitudeDeg", "timeZone", "elevationM", "description"] as const;
+const FIELDS = [
+  "name",
+  "reference",
+  "buildingName",
+  "siteName",
+  "latitudeDeg",
+  "longitudeDeg",
+  "timeZone",
+  "elevationM",
+  "groundAlbedo",
+  "skyModel",
+  "linkeTurbidity",
+  "description",
+] as const;
+
+/** An empty number field is "not given" (the schema reads null as absent). */
+const numberOrNull = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
+/** "2.5, 3, …" as twelve numbers; empty = the engine's monthly defaults; anything else is left for the schema to refuse. */
+const monthlyValues = (v: unknown) => {
+  if (Array.isArray(v)) return v;
+  const text = String(v ?? "").trim();
+  if (!text) return null;
+  return text.split(/[\s,;]+/).map((x) => Number(x.replace(",", ".")));
+};
 
 export default function ProjectForm({ organizations, defaultOrganizationId, project }: Props) {
   const hydrated = useHydrated();
@@ -36,6 +59,9 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
           siteName: "",
           timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone,
           elevationM: 0,
+          groundAlbedo: 0.2,
+          skyModel: "perez",
+          linkeTurbidity: null,
           description: "",
           facades: [
             { name: "North", azimuthDeg: 0, tiltDeg: 90 },
@@ -114,6 +140,38 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
         <Field label="Elevation (m)" htmlFor="elevationM" error={errors.elevationM}>
           <input id="elevationM" type="number" step="any" {...register("elevationM", { valueAsNumber: true })} />
         </Field>
+        <Field
+          label="Ground albedo"
+          htmlFor="groundAlbedo"
+          error={errors.groundAlbedo}
+          hint="Reflectance of the ground in front of the façades; 0.2 is usual for urban ground."
+        >
+          <input
+            id="groundAlbedo"
+            type="number"
+            step="any"
+            min="0"
+            max="1"
+            {...register("groundAlbedo", { setValueAs: (v) => numberOrNull(v) ?? undefined })}
+          />
+        </Field>
+        <Field label="Sky model" htmlFor="skyModel" error={errors.skyModel} hint="How diffuse sky light reaches a tilted surface.">
+          <select id="skyModel" {...register("skyModel")}>
+            {SKY_MODELS.map((m) => (
+              <option key={m} value={m}>
+                {SKY_MODEL_LABELS[m]}
+              </option>
+            ))}
+          </select>
+        </Field>
+        <Field
+          label="Linke turbidity, Jan–Dec"
+          htmlFor="linkeTurbidity"
+          error={errors.linkeTurbidity as { message?: string } | undefined}
+          hint="Twelve values from 1 to 10, comma-separated; empty = Paneray's monthly defaults."
+        >
+          <input id="linkeTurbidity" placeholder="monthly defaults" {...register("linkeTurbidity", { setValueAs: monthlyValues })} />
+        </Field>
         <div className="md:col-span-3">
           <Field
             label="Time zone"
@@ -135,11 +193,17 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
         <legend className="px-1 font-bold">Façades</legend>
         <p className="text-xs text-slate">
           Azimuth of the outward normal in degrees clockwise from north (south = 180). Tilt from horizontal: 90 for a wall, less for sloped glazing.
+          Glazed area gives W and kWh for the whole façade; the typical window (width × height) is what overhangs and fins shade. Removing a façade
+          removes its options and their comments when you save.
         </p>
         {errors.facades?.message && <p className="field-error">{errors.facades.message}</p>}
         <ul className="space-y-2">
           {facades.fields.map((f, i) => (
-            <li key={f.id} className="grid grid-cols-[1fr_110px_90px_auto] items-end gap-3" data-testid="facade-row">
+            <li
+              key={f.id}
+              className="grid grid-cols-2 items-end gap-3 border-b border-line pb-3 sm:grid-cols-[1fr_110px_90px_110px_100px_100px_auto]"
+              data-testid="facade-row"
+            >
               <Field label="Name" htmlFor={`facades.${i}.name`} error={errors.facades?.[i]?.name}>
                 <input id={`facades.${i}.name`} {...register(`facades.${i}.name`)} />
               </Field>
@@ -148,6 +212,30 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
               </Field>
               <Field label="Tilt °" htmlFor={`facades.${i}.tiltDeg`} error={errors.facades?.[i]?.tiltDeg}>
                 <input id={`facades.${i}.tiltDeg`} type="number" step="any" {...register(`facades.${i}.tiltDeg`, { valueAsNumber: true })} />
+              </Field>
+              <Field label="Glazed m²" htmlFor={`facades.${i}.glazedAreaM2`} error={errors.facades?.[i]?.glazedAreaM2}>
+                <input
+                  id={`facades.${i}.glazedAreaM2`}
+                  type="number"
+                  step="any"
+                  {...register(`facades.${i}.glazedAreaM2`, { setValueAs: numberOrNull })}
+                />
+              </Field>
+              <Field label="Window w m" htmlFor={`facades.${i}.windowWidthM`} error={errors.facades?.[i]?.windowWidthM}>
+                <input
+                  id={`facades.${i}.windowWidthM`}
+                  type="number"
+                  step="any"
+                  {...register(`facades.${i}.windowWidthM`, { setValueAs: numberOrNull })}
+                />
+              </Field>
+              <Field label="Window h m" htmlFor={`facades.${i}.windowHeightM`} error={errors.facades?.[i]?.windowHeightM}>
+                <input
+                  id={`facades.${i}.windowHeightM`}
+                  type="number"
+                  step="any"
+                  {...register(`facades.${i}.windowHeightM`, { setValueAs: numberOrNull })}
+                />
               </Field>
               <button type="button" className="btn-quiet mb-0.5" onClick={() => facades.remove(i)} aria-label={`Remove façade ${i + 1}`}>
                 Remove

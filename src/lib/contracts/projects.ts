@@ -1,13 +1,44 @@
 import { z } from "./zod";
 import { name, optionalText, rowId, timeZone } from "./common";
-import { finite } from "./numbers";
+import { finite, positive } from "./numbers";
+import { Shading } from "./schedule";
 
-export const FacadeInput = z.object({
-  id: rowId.optional(),
-  name: name("name", 120),
-  azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
-  tiltDeg: finite("tiltDeg", 0, 180).default(90),
-});
+/** An empty number field (a form's NaN, "" or null) is "not given". */
+const optionalNumber = <T extends z.ZodType>(schema: T) =>
+  z.preprocess((v) => (v === "" || v === null || (typeof v === "number" && Number.isNaN(v)) ? null : v), schema.nullable()).optional();
+
+/** Shading devices of a façade as the schedule engine takes them, around the façade's typical window. */
+export const FacadeShading = Shading.omit({ window: true });
+export type FacadeShading = z.infer<typeof FacadeShading>;
+
+export const SKY_MODELS = ["perez", "hay-davies", "isotropic"] as const;
+export const SKY_MODEL_LABELS: Record<(typeof SKY_MODELS)[number], string> = {
+  perez: "Perez 1990 (anisotropic)",
+  "hay-davies": "Hay–Davies 1980",
+  isotropic: "Isotropic (Liu–Jordan 1960)",
+};
+
+export const FacadeInput = z
+  .object({
+    id: rowId.optional(),
+    name: name("name", 120),
+    azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
+    tiltDeg: finite("tiltDeg", 0, 180).default(90),
+    /** Glazed area of the whole façade for W and kWh totals; empty = per m² only. */
+    glazedAreaM2: optionalNumber(positive("Glazed area (m²)", 100_000)),
+    /** The typical window the shading devices are drawn around. */
+    windowWidthM: optionalNumber(positive("Window width (m)", 100)),
+    windowHeightM: optionalNumber(positive("Window height (m)", 100)),
+    shading: FacadeShading.nullish(),
+  })
+  .superRefine((f, ctx) => {
+    if ((f.windowWidthM == null) !== (f.windowHeightM == null))
+      ctx.addIssue({
+        code: "custom",
+        path: [f.windowWidthM == null ? "windowWidthM" : "windowHeightM"],
+        message: "give the window's width and height, or neither",
+      });
+  });
 
 const projectFields = {
   name: name("name", 200),
@@ -18,6 +49,15 @@ const projectFields = {
   longitudeDeg: finite("longitudeDeg", -180, 180),
   timeZone,
   elevationM: finite("elevationM", -500, 9000),
+  /** Ground reflectance in front of the façades (0.2 when not given). */
+  groundAlbedo: finite("Ground albedo", 0, 1).optional(),
+  skyModel: z.enum(SKY_MODELS, { error: 'Sky model must be "perez", "hay-davies" or "isotropic"' }).optional(),
+  /** Twelve monthly Linke turbidity values, January first; null = the engine's monthly defaults. */
+  linkeTurbidity: z
+    .array(finite("Linke turbidity", 1, 10))
+    .length(12, "Linke turbidity needs twelve monthly values, January first")
+    .nullable()
+    .optional(),
   description: optionalText("description", 5000, { multiline: true }),
   facades: z.array(FacadeInput).max(48, "a project has at most 48 façades"),
 };

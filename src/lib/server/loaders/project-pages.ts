@@ -3,6 +3,7 @@ import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
 import { requireProject, type ProjectRow } from "@/lib/server/services/access";
 import { facadesOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
 import { revisionsOf } from "@/lib/server/services/revisions";
+import type { FacadeShading } from "@/lib/contracts/projects";
 
 interface PageUser {
   id: string;
@@ -13,10 +14,23 @@ export interface FacadeView {
   name: string;
   azimuthDeg: number;
   tiltDeg: number;
+  glazedAreaM2: number | null;
+  windowWidthM: number | null;
+  windowHeightM: number | null;
+  shading: FacadeShading | null;
 }
 
 const facadeViews = async (projectId: string): Promise<FacadeView[]> =>
-  (await facadesOf(projectId)).map((f) => ({ id: f.id, name: f.name, azimuthDeg: f.azimuthDeg, tiltDeg: f.tiltDeg }));
+  (await facadesOf(projectId)).map((f) => ({
+    id: f.id,
+    name: f.name,
+    azimuthDeg: f.azimuthDeg,
+    tiltDeg: f.tiltDeg,
+    glazedAreaM2: f.glazedAreaM2,
+    windowWidthM: f.windowWidthM,
+    windowHeightM: f.windowHeightM,
+    shading: (f.shading as FacadeShading | null) ?? null,
+  }));
 
 export interface ProjectPage {
   project: ProjectRow;
@@ -76,6 +90,9 @@ export interface ProjectEditPage {
     longitudeDeg: number;
     timeZone: string;
     elevationM: number;
+    groundAlbedo: number;
+    skyModel: "perez" | "hay-davies" | "isotropic";
+    linkeTurbidity: number[] | null;
     description: string;
     facades: FacadeView[];
   };
@@ -96,6 +113,9 @@ export async function loadProjectEditPage(user: PageUser, projectId: string | un
       longitudeDeg: p.longitudeDeg,
       timeZone: p.timeZone,
       elevationM: p.elevationM,
+      groundAlbedo: p.groundAlbedo,
+      skyModel: p.skyModel,
+      linkeTurbidity: p.linkeTurbidity ?? null,
       description: p.description ?? "",
       facades: await facadeViews(p.id),
     },
