@@ -13,14 +13,26 @@ describe("site and façade fields of a project", () => {
       groundAlbedo: 0.3,
       skyModel: "hay-davies",
       linkeTurbidity: [3, 3.2, 3.5, 3.8, 4, 4.1, 4.2, 4.1, 3.9, 3.6, 3.2, 3],
-      facades: [{ name: "South", azimuthDeg: 180, glazedAreaM2: 120, windowWidthM: 1.5, windowHeightM: 2, shading: { overhang: { depthM: 0.6, gapAboveM: 0.2 } } }],
+      facades: [
+        {
+          name: "South",
+          azimuthDeg: 180,
+          glazedAreaM2: 120,
+          windowWidthM: 1.5,
+          windowHeightM: 2,
+          shading: { overhang: { depthM: 0.6, gapAboveM: 0.2 } },
+        },
+      ],
     });
     expect(r.success, messages(r)).toBe(true);
     expect(r.data!.facades[0]).toMatchObject({ glazedAreaM2: 120, shading: { overhang: { depthM: 0.6 } } });
   });
 
   it("read empty number fields (NaN, '' or null from a form) as not given", () => {
-    const r = ProjectCreateRequest.safeParse({ ...base, facades: [{ name: "South", azimuthDeg: 180, glazedAreaM2: Number.NaN, windowWidthM: "", windowHeightM: null }] });
+    const r = ProjectCreateRequest.safeParse({
+      ...base,
+      facades: [{ name: "South", azimuthDeg: 180, glazedAreaM2: Number.NaN, windowWidthM: "", windowHeightM: null }],
+    });
     expect(r.success, messages(r)).toBe(true);
     expect(r.data!.facades[0]!.glazedAreaM2).toBeNull();
   });
