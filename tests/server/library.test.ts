@@ -4,9 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/lib/server/db/client";
-import { facade, invitation } from "@/lib/server/db/schema";
-import { signUp } from "@/lib/server/services/accounts";
-import { inviteMember } from "@/lib/server/services/members";
+import { facade } from "@/lib/server/db/schema";
 import { createProject } from "@/lib/server/services/projects";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import type { GlazingResponse } from "@/lib/contracts/glazing";
@@ -16,30 +14,15 @@ import { DELETE as deleteMakeupRoute, GET as getMakeupRoute, PATCH as patchMakeu
 import { GET as listPanes, POST as createPaneRoute } from "@/pages/api/v1/orgs/[orgId]/panes/index";
 import { DELETE as deletePaneRoute, GET as getPaneRoute, PATCH as patchPaneRoute } from "@/pages/api/v1/panes/[id]";
 import { POST as glazingRoute } from "@/pages/api/v1/calc/glazing";
-import { newOwner, uniqueEmail } from "./helpers";
+import { callRoute, invitedMember, newOwner, type RouteCaller } from "./helpers";
 import { insertOption } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
 
-type Caller = { id: string; name: string; email: string };
-type Route = typeof listMakeups;
-
-async function call(route: Route, caller: Caller, path: string, params: Record<string, string>, init: { method?: string; body?: unknown } = {}) {
-  const request = new Request(`http://127.0.0.1${path}`, {
-    method: init.method ?? "GET",
-    ...(init.body !== undefined ? { body: JSON.stringify(init.body), headers: { "content-type": "application/json" } } : {}),
-  });
-  const res = (await route({ request, url: new URL(request.url), params, locals: { user: caller } } as never)) as Response;
-  return { status: res.status, body: res.status === 204 ? null : await res.json() };
-}
-
-async function member(o: { headers: Headers; organizationId: string }, role: "consultant" | "architect" | "client") {
-  const email = uniqueEmail(role);
-  await inviteMember(o.headers, o.organizationId, email, role);
-  const id = (await db.select().from(invitation).where(eq(invitation.email, email)))[0]!.id;
-  const r = await signUp({ name: `Test ${role}`, email, password: "long password", invitationId: id });
-  return { id: r.userId!, name: `Test ${role}`, email };
-}
+type Caller = RouteCaller;
+const call = (route: unknown, ...rest: Parameters<typeof callRoute> extends [unknown, ...infer R] ? R : never) =>
+  callRoute(route as Parameters<typeof callRoute>[0], ...rest);
+const member = invitedMember;
 
 // Clear soda-lime float: n = 1.52, absorption 0.02 /mm (common practice, no source); the coated pane's
 // values are invented test data with a low-e face (ε = 0.03) on its outdoor side, face #3 in the unit.
@@ -88,7 +71,7 @@ describe("saved make-ups", () => {
     expect(res.status).toBe(201);
     created = res.body as MakeupEntry;
     expect(created).toMatchObject({ revision: 1, latestRevision: 1, name: "Double low-e argon", description: "6 | 16 Ar 90% | 4 (m) low-e #3" });
-    const g = await call(glazingRoute as Route, consultant, "/api/v1/calc/glazing", {}, { method: "POST", body: { layers, anglesDeg: [0] } });
+    const g = await call(glazingRoute, consultant, "/api/v1/calc/glazing", {}, { method: "POST", body: { layers, anglesDeg: [0] } });
     const ref = g.body as GlazingResponse;
     const { angleDeg: _a, ...normal } = ref.angles[0]!;
     void _a;

@@ -4,39 +4,22 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/lib/server/db/client";
-import { facade, facadeOption, invitation, projectEvent } from "@/lib/server/db/schema";
-import { signUp } from "@/lib/server/services/accounts";
-import { inviteMember } from "@/lib/server/services/members";
+import { facade, facadeOption, projectEvent } from "@/lib/server/db/schema";
 import { createProject, shareProject } from "@/lib/server/services/projects";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import type { OptionEntry } from "@/lib/contracts/options";
 import { GET as listOptions, POST as createOptionRoute } from "@/pages/api/v1/projects/[id]/options/index";
 import { DELETE as deleteOptionRoute, PATCH as patchOptionRoute } from "@/pages/api/v1/options/[id]/index";
 import { GET as getRequirements, PUT as putRequirementsRoute } from "@/pages/api/v1/projects/[id]/requirements";
-import { newOwner, uniqueEmail } from "./helpers";
+import { callRoute, invitedMember, newOwner, type RouteCaller } from "./helpers";
 import { clear, double, editMakeup, insertMakeup } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
 
-type Caller = { id: string; name: string; email: string };
-type Route = typeof listOptions;
-
-async function call(route: Route, caller: Caller, path: string, params: Record<string, string>, init: { method?: string; body?: unknown } = {}) {
-  const request = new Request(`http://127.0.0.1${path}`, {
-    method: init.method ?? "GET",
-    ...(init.body !== undefined ? { body: JSON.stringify(init.body), headers: { "content-type": "application/json" } } : {}),
-  });
-  const res = (await route({ request, url: new URL(request.url), params, locals: { user: caller } } as never)) as Response;
-  return { status: res.status, body: res.status === 204 ? null : await res.json() };
-}
-
-async function member(o: { headers: Headers; organizationId: string }, role: "consultant" | "architect" | "client") {
-  const email = uniqueEmail(role);
-  await inviteMember(o.headers, o.organizationId, email, role);
-  const id = (await db.select().from(invitation).where(eq(invitation.email, email)))[0]!.id;
-  const r = await signUp({ name: `Test ${role}`, email, password: "long password", invitationId: id });
-  return { id: r.userId!, name: `Test ${role}`, email };
-}
+type Caller = RouteCaller;
+const call = (route: unknown, ...rest: Parameters<typeof callRoute> extends [unknown, ...infer R] ? R : never) =>
+  callRoute(route as Parameters<typeof callRoute>[0], ...rest);
+const member = invitedMember;
 
 let o: Awaited<ReturnType<typeof newOwner>>;
 let consultant: Caller;
