@@ -10,6 +10,7 @@ import GasField from "./GasField";
 import { Field, FormMessage } from "@/components/forms/Field";
 import LibraryBar, { type OpenMakeup } from "./LibraryBar";
 import { readComposerDraft, writeComposerDraft } from "./draft";
+import MakeupSection from "./MakeupSection";
 
 type PhysicalIn = z.input<typeof PhysicalPane>;
 type MeasuredIn = z.input<typeof MeasuredPane>;
@@ -58,6 +59,14 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
     defaultValues: { layers: PRESETS[2]!.request.layers as LayerIn[] },
   });
   const [openMakeup, setOpenMakeup] = useState<OpenMakeup | null>(null);
+  const [selectedLayer, setSelectedLayer] = useState<number | null>(null);
+  /** Selecting a layer on the drawing brings its fields into view and focuses the first one. */
+  const selectLayer = (i: number) => {
+    setSelectedLayer(i);
+    const row = document.getElementById(`layer-${i}`);
+    row?.scrollIntoView({ behavior: "smooth", block: "nearest" });
+    row?.querySelector<HTMLElement>("input, select")?.focus({ preventScroll: true });
+  };
   const restored = useRef(false);
   // After hydration: the draft of the last visit, if any (the server renders the default make-up).
   useEffect(() => {
@@ -205,9 +214,20 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
               ))}
             </select>
           </div>
-          <p className="text-xs text-slate">
-            Outdoors at the top. Faces are numbered from outdoors: pane 1 has faces 1 and 2, pane 2 faces 3 and 4, …
-          </p>
+          <figure className="card space-y-2 p-3" aria-labelledby="section-caption">
+            <div className="overflow-x-auto">
+              <MakeupSection
+                layers={values.layers ?? []}
+                selected={selectedLayer}
+                onSelect={selectLayer}
+                title="The make-up in section: select a pane or a gap to edit it"
+              />
+            </div>
+            <figcaption id="section-caption" className="text-xs text-slate">
+              In section, to scale, outdoors on the left; sun-coloured lines are low-e coatings. Faces are numbered from outdoors (pane 1 has faces 1
+              and 2, pane 2 faces 3 and 4, …). Select a pane or a gap to edit it below.
+            </figcaption>
+          </figure>
           <ol className="space-y-3">
             {layers.fields.map((field, i) => {
               const layer = values.layers?.[i];
@@ -215,7 +235,13 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
               const base = `layers.${i}`;
               if (isGap(layer)) {
                 return (
-                  <li key={field.id} className="rounded border border-dashed border-glass/40 bg-glass-light/40 p-3" data-testid="gap-row">
+                  <li
+                    key={field.id}
+                    id={`layer-${i}`}
+                    className={`rounded border border-dashed bg-glass-light/40 p-3 ${selectedLayer === i ? "border-sun ring-2 ring-sun/40" : "border-glass/40"}`}
+                    data-testid="gap-row"
+                    onFocus={() => setSelectedLayer(i)}
+                  >
                     <p className="mb-2 text-xs font-bold uppercase tracking-wide text-glass">Gap {paneNumber(i)}</p>
                     <div className="grid grid-cols-[110px_1fr] gap-3">
                       <Field label="Width (mm)" htmlFor={`${base}.widthMm`} error={errorAt(errors, `${base}.widthMm`)}>
@@ -239,7 +265,13 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
               const n = paneNumber(i);
               const measured = isMeasured(layer);
               return (
-                <li key={field.id} className="card space-y-3 p-4" data-testid="pane-row">
+                <li
+                  key={field.id}
+                  id={`layer-${i}`}
+                  className={`card space-y-3 p-4 ${selectedLayer === i ? "ring-2 ring-sun/60" : ""}`}
+                  data-testid="pane-row"
+                  onFocus={() => setSelectedLayer(i)}
+                >
                   <div className="flex items-center gap-2">
                     <p className="font-bold">
                       Pane {n}{" "}

@@ -6,6 +6,7 @@ import type { MakeupEntry } from "@/lib/contracts/library";
 import type { OptionEntry } from "@/lib/contracts/options";
 import { FormMessage } from "@/components/forms/Field";
 import RequirementsEditor from "./RequirementsEditor";
+import MakeupSection from "@/components/glazing/MakeupSection";
 
 interface FacadeRef {
   id: string;
@@ -128,6 +129,7 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                           <tr key={o.id} className="border-t border-line align-top" data-option={o.name}>
                             <td className="py-1.5 pr-3 font-bold">{o.name}</td>
                             <td className="pr-3">
+                              <MakeupSection layers={o.layers} height={34} labels={false} title={`${o.makeupName} in section`} />
                               <div>{o.makeupName}</div>
                               <div className="font-mono text-xs text-slate">
                                 {o.description} · rev. {o.makeupRevision}
