@@ -46,3 +46,24 @@ test("changed inputs mark the year's figures stale until they are recalculated",
   await glazing.selectOption({ index: 0 });
   await expect(results).toHaveAttribute("data-stale", "true");
 });
+
+test("the year form is checked with the endpoint's schema, and its messages name the field in words", async ({ page }) => {
+  await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
+  const projects = await (await page.request.get("/api/v1/projects")).json();
+  const demo = projects.organizations
+    .flatMap((o: { projects: { id: string; name: string }[] }) => o.projects)
+    .find((p: { name: string }) => p.name === DEMO_PROJECTS[0]!.name);
+  await page.goto(`/projects/${demo.id}/sun`);
+  let posted = 0;
+  page.on("request", (r) => {
+    if (r.url().endsWith("/api/v1/calc/schedule")) posted++;
+  });
+  // The form is an island: type once it has hydrated (its button is enabled then).
+  await expect(page.getByRole("button", { name: "Calculate the year" })).toBeEnabled();
+  await page.waitForLoadState("networkidle");
+  await page.getByLabel("Linke turbidity").fill("15");
+  await expect(page.getByLabel("Linke turbidity")).toHaveValue("15");
+  await page.getByRole("button", { name: "Calculate the year" }).click();
+  await expect(page.getByText(/Linke turbidity must be/)).toBeVisible();
+  expect(posted).toBe(0);
+});

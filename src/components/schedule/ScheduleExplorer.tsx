@@ -1,3 +1,4 @@
+import { ScheduleRequest } from "@/lib/contracts/schedule";
 import { useMemo, useRef, useState } from "react";
 import type { ScheduleResponse, ScheduleSurfaceResult } from "@/lib/contracts/schedule";
 import { PRESETS } from "@/lib/glazing-presets";
@@ -60,6 +61,24 @@ function describeInputs(i: ResultInputs): string {
 const localHourOf = (iso: string) => Number(iso.slice(11, 13)) + Number(iso.slice(14, 16)) / 60 + Number(iso.slice(17, 19)) / 3600;
 const f = (v: number | null | undefined, d = 1) => (v == null ? "—" : v.toFixed(d));
 
+/** The schema's field names as the form labels them. */
+const FIELD_WORDS: [RegExp, string][] = [
+  [/^linkeTurbidity/, "Linke turbidity"],
+  [/^albedo/, "Ground albedo"],
+  [/^widthM/, "Window width"],
+  [/^heightM/, "Window height"],
+  [/^depthM/, "Overhang depth"],
+  [/^gapAboveM/, "Gap above the window"],
+  [/^(from|to) /, "Year "],
+];
+const inWords = (message: string) => FIELD_WORDS.reduce((m, [re, words]) => m.replace(re, words), message);
+
+/** One schema issue as a sentence: a union's first alternative speaks for it (a single Linke value, not twelve). */
+function issueInWords(issue: { message: string; code?: string; errors?: { message: string }[][] }): string {
+  const inner = issue.code === "invalid_union" ? issue.errors?.[0]?.[0]?.message : undefined;
+  return inWords(inner ?? issue.message);
+}
+
 export default function ScheduleExplorer({ site, facades }: { site: Site; facades: Facade[] }) {
   const hydrated = useHydrated();
   const [facadeId, setFacadeId] = useState(facades[0]?.id ?? "");
@@ -108,30 +127,38 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
     const runKey = inputsKey;
     setBusy(true);
     setFailure(null);
+    const body = {
+      site,
+      from: `${year}-01-01`,
+      to: `${year}-12-31`,
+      stepMinutes: 60,
+      sky: { model: sky, albedo, ...(linke === "" ? {} : { linkeTurbidity: linke }) },
+      surfaces: [
+        {
+          name: facade.name,
+          azimuthDeg: facade.azimuthDeg,
+          tiltDeg: facade.tiltDeg,
+          layers: preset.request.layers,
+          ...(overhang.on
+            ? {
+                shading: {
+                  window: { widthM: overhang.widthM, heightM: overhang.heightM },
+                  overhang: { depthM: overhang.depthM, gapAboveM: overhang.gapAboveM },
+                },
+              }
+            : {}),
+        },
+      ],
+    };
+    // The endpoint's own schema checks the form first; its messages are shown with the fields named in words.
+    const check = ScheduleRequest.safeParse(body);
+    if (!check.success) {
+      setBusy(false);
+      setFailure(check.error.issues.map((i) => issueInWords(i as never)).join(" · "));
+      return;
+    }
     try {
-      const res = await api<ScheduleResponse>("POST", "/api/v1/calc/schedule", {
-        site,
-        from: `${year}-01-01`,
-        to: `${year}-12-31`,
-        stepMinutes: 60,
-        sky: { model: sky, albedo, ...(linke === "" ? {} : { linkeTurbidity: linke }) },
-        surfaces: [
-          {
-            name: facade.name,
-            azimuthDeg: facade.azimuthDeg,
-            tiltDeg: facade.tiltDeg,
-            layers: preset.request.layers,
-            ...(overhang.on
-              ? {
-                  shading: {
-                    window: { widthM: overhang.widthM, heightM: overhang.heightM },
-                    overhang: { depthM: overhang.depthM, gapAboveM: overhang.gapAboveM },
-                  },
-                }
-              : {}),
-          },
-        ],
-      });
+      const res = await api<ScheduleResponse>("POST", "/api/v1/calc/schedule", body);
       if (runId !== latestRun.current) return;
       const surface = res.surfaces[0]!;
       setResult({ surface, warnings: res.warnings, stepHours: 1, inputs: runInputs, inputsKey: runKey });
@@ -176,6 +203,7 @@ export default function ScheduleExplorer({ site, facades }: { site: Site; facade
     <div className="space-y-5">
       <form
         method="post"
+        noValidate
         className="card grid items-end gap-4 md:grid-cols-3 xl:grid-cols-6"
         onSubmit={(e) => {
           e.preventDefault();
