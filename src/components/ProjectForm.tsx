@@ -1,5 +1,5 @@
 import { useMemo, useState } from "react";
-import { useFieldArray, useForm } from "react-hook-form";
+import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import { ProjectCreateRequest, SKY_MODEL_LABELS, SKY_MODELS } from "@/lib/contracts/projects";
@@ -7,6 +7,7 @@ import { api, ApiError } from "@/lib/client/api";
 import { compassPoint } from "@/lib/format";
 import { applyServerErrors, Field, FormMessage } from "./forms/Field";
 import { useHydrated } from "./forms/useHydrated";
+import FacadePlan from "./FacadePlan";
 
 type Input = z.input<typeof ProjectCreateRequest>;
 type Output = z.output<typeof ProjectCreateRequest>;
@@ -72,6 +73,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
         },
   });
   const facades = useFieldArray({ control, name: "facades" });
+  const watchedFacades = useWatch({ control, name: "facades" }) ?? [];
   const errors = formState.errors;
 
   const onSubmit = handleSubmit(async (v) => {
@@ -191,6 +193,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
 
       <fieldset className="card space-y-3">
         <legend className="px-1 font-bold">Façades</legend>
+        <FacadePlan facades={watchedFacades} />
         <p className="text-xs text-slate">
           Azimuth of the outward normal in degrees clockwise from north (south = 180). Tilt from horizontal: 90 for a wall, less for sloped glazing.
           Glazed area gives W and kWh for the whole façade; the typical window (width × height) is what overhangs and fins shade. Removing a façade

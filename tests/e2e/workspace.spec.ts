@@ -70,6 +70,11 @@ test("the consultant builds a project with two façades, two options each and th
   await page.getByLabel("Time zone").fill("Europe/Lisbon");
   await page.getByRole("button", { name: "Remove façade 4" }).click();
   await page.getByRole("button", { name: "Remove façade 3" }).click();
+  // The plan follows the form: two façades, the second turned to face south-east.
+  const plan = page.getByTestId("facade-plan");
+  await expect(plan.locator("g[data-facade]")).toHaveCount(2);
+  await page.locator("#facades\\.1\\.azimuthDeg").fill("135");
+  await expect(plan.locator('g[data-facade="2"] title')).toHaveText(/135° SE/);
   await page.getByRole("button", { name: "Create project" }).click();
   await expect(page.getByRole("heading", { level: 1, name: PROJECT })).toBeVisible();
   projectId = page.url().split("/projects/")[1]!.split(/[/?#]/)[0]!;
@@ -153,7 +158,7 @@ test("the client sees revision A and none of the drafts", async ({ browser }) =>
 
 test("the workspace pages have no horizontal overflow at 390 px", async ({ browser }) => {
   const page = await as(browser, "consultant", 390);
-  for (const path of [`/projects/${projectId}`, "/library", "/glazing", "/dashboard"]) {
+  for (const path of [`/projects/${projectId}`, `/projects/${projectId}/edit`, "/projects/new", "/library", "/glazing", "/dashboard"]) {
     await page.goto(path);
     await page.mouse.wheel(0, 4000);
     await page.waitForTimeout(500);
