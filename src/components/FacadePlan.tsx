@@ -18,13 +18,13 @@ export default function FacadePlan({ facades }: Props) {
     .filter((f) => typeof f.azimuthDeg === "number" && Number.isFinite(f.azimuthDeg) && f.azimuthDeg >= 0 && f.azimuthDeg <= 360);
   return (
     <figure className="space-y-1" data-testid="facade-plan">
-      <svg viewBox="-125 -125 250 250" className="mx-auto w-full max-w-[16rem]" role="img" aria-label="The façades in plan, north up">
+      <svg viewBox="-135 -135 270 270" className="mx-auto w-full max-w-[16rem]" role="img" aria-label="The façades in plan, north up">
         <circle r={R} fill="#fff" stroke="#ddd8cc" />
         {[0, 90, 180, 270].map((a) => (
           <text
             key={a}
-            x={(R + 16) * Math.sin(rad(a))}
-            y={-(R + 16) * Math.cos(rad(a)) + 4}
+            x={(R + 34) * Math.sin(rad(a))}
+            y={-(R + 34) * Math.cos(rad(a)) + 4}
             textAnchor="middle"
             fontSize={12}
             fontWeight={700}
