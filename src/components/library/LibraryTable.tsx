@@ -12,7 +12,7 @@ import {
 import { api, ApiError } from "@/lib/client/api";
 import { withQueryClient } from "@/lib/client/query";
 import type { MakeupEntry } from "@/lib/contracts/library";
-import { COMPOSER_DRAFT_KEY } from "@/components/glazing/draft";
+import { writeComposerDraft } from "@/components/glazing/draft";
 
 interface Props {
   organizationId: string;
@@ -46,7 +46,7 @@ function LibraryTable({ organizationId, initial, canEdit, canDelete }: Props) {
   const { mutate: removeMakeup, isPending: removing } = remove;
   const columns = useMemo(() => {
     const openInComposer = (m: MakeupEntry) => {
-      localStorage.setItem(COMPOSER_DRAFT_KEY, JSON.stringify({ layers: m.layers, open: { id: m.id, revision: m.revision, name: m.name } }));
+      writeComposerDraft({ layers: m.layers, open: { id: m.id, revision: m.revision, name: m.name } });
       window.location.href = "/glazing";
     };
     return [

@@ -50,6 +50,12 @@ export function sharedCalcPool(): CalcPool | null {
   return shared;
 }
 
+/** Runs a validated calculation in `pool` (null: on this thread) and parses its JSON answer; a full queue throws QueueFullError. */
+export async function runCalc<K extends CalcTaskName, R>(pool: CalcPool | null, task: K, input: CalcTasks[K]): Promise<R> {
+  const text = pool ? new TextDecoder().decode(await pool.run(task, input)) : runCalcTask(task, input);
+  return JSON.parse(text) as R;
+}
+
 /** Answers a validated calculation request through `pool` (null: on the main thread). */
 export async function calcResponseWith<K extends CalcTaskName>(pool: CalcPool | null, task: K, input: CalcTasks[K]): Promise<Response> {
   if (!pool) return new Response(runCalcTask(task, input), { status: 200, headers: JSON_HEADERS });

@@ -2,7 +2,7 @@
 import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
 import { requireProject, type ProjectRow } from "@/lib/server/services/access";
 import { facadesOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
-import { revisionsOf } from "@/lib/server/services/revisions";
+import { revisionListOf } from "@/lib/server/services/revisions";
 import type { FacadeShading } from "@/lib/contracts/projects";
 
 interface PageUser {
@@ -67,13 +67,7 @@ export async function loadProjectPage(user: PageUser, projectId: string | undefi
     shares: canShare ? await sharesOf(project) : [],
     canSeeDrafts: roleCan(membership.role, { project: ["readAll"] }),
     canAssign: roleCan(membership.role, { option: ["assign"] }),
-    revisions: (await revisionsOf(project.id)).map((r) => ({
-      letter: r.revision,
-      issuedAt: r.issuedAt,
-      issuedBy: r.issuedBy,
-      note: r.note,
-      facadeCount: r.facades.length,
-    })),
+    revisions: await revisionListOf(project.id),
   };
 }
 

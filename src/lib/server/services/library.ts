@@ -7,8 +7,7 @@ import { and, asc, eq, gt, inArray, or } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { facade, facadeOption, libraryPane, libraryPaneRevision, makeup, makeupRevision, project, user } from "@/lib/server/db/schema";
 import { ConflictError, NotFoundError } from "@/lib/server/errors";
-import { sharedCalcPool, type CalcPool } from "@/lib/server/calc-pool";
-import { runCalcTask } from "@/lib/server/calc-pool/tasks";
+import { runCalc, sharedCalcPool, type CalcPool } from "@/lib/server/calc-pool";
 import { GlazingRequest, type Gap, type GlazingResponse, type Pane } from "@/lib/contracts/glazing";
 import type {
   LibraryRevisionLine,
@@ -31,8 +30,7 @@ export interface LibraryActor {
 /** The values a make-up revision stores: the normal-incidence row, the hemispherical values, U and the warnings. */
 export async function makeupValues(layers: (Pane | Gap)[], pool: CalcPool | null = sharedCalcPool()): Promise<MakeupValues> {
   const req = GlazingRequest.parse({ layers, anglesDeg: [0] });
-  const text = pool ? new TextDecoder().decode(await pool.run("glazing", req)) : runCalcTask("glazing", req);
-  const g = JSON.parse(text) as GlazingResponse;
+  const g = await runCalc<"glazing", GlazingResponse>(pool, "glazing", req);
   const { angleDeg: _angle, ...normal } = g.angles[0]!;
   void _angle;
   return { normal, hemispherical: g.hemispherical, uValue: g.uValue, warnings: g.warnings };

@@ -10,12 +10,11 @@
 import { createHash } from "node:crypto";
 import { and, asc, eq, inArray, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
-import { facade, facadeOption, makeup, makeupRevision, project, projectRequirements, resultCache } from "@/lib/server/db/schema";
+import { facade, facadeOption, makeup, makeupRevision, project, resultCache } from "@/lib/server/db/schema";
 import { NotFoundError } from "@/lib/server/errors";
-import { sharedCalcPool, type CalcPool } from "@/lib/server/calc-pool";
-import { runCalcTask } from "@/lib/server/calc-pool/tasks";
+import { runCalc, sharedCalcPool, type CalcPool } from "@/lib/server/calc-pool";
+import { requirementsEntry } from "./requirements";
 import { MAX_SURFACES, ScheduleRequest, type ScheduleRequestInput } from "@/lib/contracts/schedule";
-import type { Limits } from "@/lib/contracts/requirements";
 import type {
   CompareOption,
   CompareResponse,
@@ -136,17 +135,9 @@ async function optionRows(projectId: string, optionIds?: readonly string[]) {
     .orderBy(asc(facadeOption.facadeId), asc(facadeOption.position), asc(facadeOption.createdAt), asc(facadeOption.id));
 }
 
-/** The project's limits and façade overrides as stored (empty when none are entered). */
-export async function requirementsOf(projectId: string): Promise<{ project: Limits; facades: Record<string, Limits> }> {
-  const row = (await db.select().from(projectRequirements).where(eq(projectRequirements.projectId, projectId)))[0];
-  const limits = (row?.limits ?? {}) as { project?: Limits; facades?: Record<string, Limits> };
-  return { project: limits.project ?? {}, facades: limits.facades ?? {} };
-}
-
 /** Runs one batch of ≤ 24 surfaces through the pool (or on this thread). */
 async function computeBatch(pool: CalcPool | null, req: ScheduleRequest): Promise<SurfaceYearSummary[]> {
-  const text = pool ? new TextDecoder().decode(await pool.run("surfaceYear", req)) : runCalcTask("surfaceYear", req);
-  return JSON.parse(text) as SurfaceYearSummary[];
+  return runCalc<"surfaceYear", SurfaceYearSummary[]>(pool, "surfaceYear", req);
 }
 
 const emptySummary = (year: number): CachedSummary => ({
@@ -166,7 +157,7 @@ export async function projectResults(projectId: string, year: number, opts: Proj
   const [facades, rows, requirements] = await Promise.all([
     db.select().from(facade).where(eq(facade.projectId, projectId)).orderBy(asc(facade.position), asc(facade.createdAt), asc(facade.id)),
     optionRows(projectId, opts.optionIds),
-    requirementsOf(projectId),
+    requirementsEntry(projectId),
   ]);
   const facadeById = new Map(facades.map((f) => [f.id, f]));
 
@@ -340,8 +331,7 @@ export async function compareOptions(
       let angles: CompareOption["angles"] = [];
       const req = GlazingRequest.safeParse({ layers, anglesDeg: COMPARE_ANGLES_DEG });
       if (req.success && !o.problem) {
-        const text = pool ? new TextDecoder().decode(await pool.run("glazing", req.data)) : runCalcTask("glazing", req.data);
-        angles = (JSON.parse(text) as GlazingResponse).angles;
+        angles = (await runCalc<"glazing", GlazingResponse>(pool, "glazing", req.data)).angles;
       }
       const shading = shadingOf(facadeRows.get(f.facadeId)!);
       return {

@@ -4,7 +4,7 @@
  * year and its flags, who issued it and when. Nothing here ever updates a revision once written; editing
  * the library moves the make-up on to a new revision and leaves the snapshot as it was.
  */
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { facade, facadeOption, makeup, makeupRevision, project, scheduleRevision } from "@/lib/server/db/schema";
 import { ConflictError, NotFoundError } from "@/lib/server/errors";
@@ -33,6 +33,24 @@ export function revisionResponse(r: RevisionRow): RevisionResponse {
 export async function revisionsOf(projectId: string): Promise<RevisionResponse[]> {
   const rows = await db.select().from(scheduleRevision).where(eq(scheduleRevision.projectId, projectId)).orderBy(desc(scheduleRevision.sequence));
   return rows.map(revisionResponse);
+}
+
+/** The project's issued revisions as a list (letter, when, who, note, how many façades), newest first, without their snapshots. */
+export async function revisionListOf(
+  projectId: string,
+): Promise<{ letter: string; issuedAt: string; issuedBy: string; note: string | null; facadeCount: number }[]> {
+  const rows = await db
+    .select({
+      letter: scheduleRevision.letter,
+      issuedAt: scheduleRevision.issuedAt,
+      issuedBy: scheduleRevision.issuedByName,
+      note: scheduleRevision.note,
+      facadeCount: sql<number>`coalesce(jsonb_array_length(${scheduleRevision.snapshot} -> 'facades'), 0)::int`,
+    })
+    .from(scheduleRevision)
+    .where(eq(scheduleRevision.projectId, projectId))
+    .orderBy(desc(scheduleRevision.sequence));
+  return rows.map((r) => ({ ...r, issuedAt: r.issuedAt.toISOString() }));
 }
 
 /** One issued revision by its letter; NotFoundError when the project has none of that letter. */
