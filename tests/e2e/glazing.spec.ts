@@ -122,24 +122,48 @@ test("the make-up page recalculates as the consultant edits", async ({ page }) =
   await expect(page.locator('[data-series="T"]')).toHaveCount(1);
   await expect(page.locator('[data-series="A2"]')).toHaveCount(1);
 
-  // Argon fill lowers U.
+  // Argon fill lowers U: the gap is selected on the section drawing and edited beside it.
+  const section = page.getByTestId("makeup-section");
+  await section.locator('[data-layer="1"]').click();
+  await expect(page.getByTestId("gap-inspector")).toBeVisible();
   await page.locator("#layers\\.1-gas").selectOption("argon");
   await page.locator("#layers\\.1-fill").fill("100");
   await expect(u).toHaveText(declaredU("u-value/4-16ar-4")); // 4 | 16 argon | 4
+  await expect(page.getByTestId("composer-description")).toHaveText("4 | 16 Ar | 4");
 
-  // An invalid value is flagged at the field and the last good result stays.
+  // An invalid value is flagged at the field, in words, the layer is outlined on the drawing and the last good result stays.
+  await section.locator('[data-layer="0"]').click();
   await page.locator("#layers\\.0\\.thicknessMm").fill("-3");
-  await expect(page.locator('[data-field="layers.0.thicknessMm"]')).toContainText("thicknessMm");
+  await expect(page.locator('[data-field="layers.0.thicknessMm"]')).toContainText("Thickness (mm) must be at least 0.5");
+  await expect(section.locator('[data-layer="0"]')).toHaveAttribute("data-invalid", "1");
   await expect(u).toHaveText(declaredU("u-value/4-16ar-4"));
+  // From another layer the problem is listed and leads back to it.
+  await section.locator('[data-layer="2"]').click();
+  await page
+    .getByTestId("other-problems")
+    .getByRole("button", { name: /Pane 1: Thickness/ })
+    .click();
+  await expect(page.locator("#layers\\.0\\.thicknessMm")).toBeFocused();
 
   // A thicker outer pane absorbs more and transmits less: g falls.
   await page.locator("#layers\\.0\\.thicknessMm").fill("12");
   await expect(g).not.toHaveText(gBefore!);
   await expect(page.getByTestId("summary-table")).toContainText("Absorptance, pane 2");
 
-  // Add a third pane.
-  await page.getByRole("button", { name: /Add a gap and a pane/ }).click();
-  await expect(page.getByTestId("pane-row")).toHaveCount(3);
+  // The readout follows the angle chosen: at 60° less is transmitted than at 0°.
+  const tau = () => page.getByTestId("summary-table").locator("tbody tr").first().locator("td").nth(1);
+  const tau0 = Number(await tau().textContent());
+  await page.getByLabel(/Angle of incidence/).fill("60");
+  await expect(page.getByTestId("readout-angle")).toHaveText("at 60°");
+  await expect.poll(async () => Number(await tau().textContent())).toBeLessThan(tau0);
+  // The shares of the sun at that angle add up to 1 (energy balance), within the 3-decimal rounding shown.
+  const shares = await page.getByTestId("sun-budget").locator("li span.font-bold").allTextContents();
+  expect(Math.abs(shares.reduce((a, x) => a + Number(x), 0) - 1)).toBeLessThan(0.003);
+
+  // Add a third pane on the room side; it opens in the inspector.
+  await page.getByRole("button", { name: "+ pane on the room side" }).click();
+  await expect(section.locator('[aria-label^="Pane "]')).toHaveCount(3);
+  await expect(page.getByTestId("pane-inspector")).toContainText("Pane 3");
   await expect(page.locator('[data-series="A3"]')).toHaveCount(1);
   await expect(page.getByText("not certified or declared values")).toBeVisible();
 });
@@ -154,12 +178,37 @@ test("switching how a pane is described keeps the make-up valid", async ({ page 
   await expect(page.getByTestId("u-value")).toHaveText(declaredU("u-value/4-16ar90-4-e0.03"));
   const before = await g.textContent();
   // The coated room-side pane becomes clear glass described by its properties: more sun comes in.
-  await page.getByLabel("How pane 2 is described").selectOption("physical");
+  await page.getByTestId("makeup-section").locator('[data-layer="2"]').click();
+  const described = page.getByRole("group", { name: "How pane 2 is described" });
+  await described.getByLabel("by its glass").check();
   await expect(g).not.toHaveText(before!);
   await expect(page.locator(".field-error")).toHaveCount(0);
-  await page.getByLabel("How pane 2 is described").selectOption("measured");
+  await described.getByLabel("by data-sheet values").check();
   await expect(page.locator("#layers\\.2\\.measured\\.solarTransmittance")).toHaveValue("0.8");
   await page.getByRole("button", { name: "Remove pane 2" }).click();
-  await expect(page.getByTestId("pane-row")).toHaveCount(1);
+  await expect(page.getByTestId("makeup-section").locator('[aria-label^="Pane "]')).toHaveCount(1);
   await expect(page.getByTestId("u-value")).toHaveText(declaredU("u-value/single-4")); // single 4 mm
+});
+
+test("a pane known by its light transmittance alone is accepted, its light reflectance reported unknown", async ({ page }) => {
+  await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
+  await page.goto("/glazing");
+  await expect(page.getByTestId("g-normal")).toBeVisible();
+  await page.getByLabel("Start from").selectOption("double-lowe");
+  const light = page.getByTestId("light-normal");
+  await expect(light).toHaveText(/^0\.\d\d$/);
+  // The coated pane's data sheet lists τv only: its light reflectances are cleared.
+  await page.getByTestId("makeup-section").locator('[data-layer="2"]').click();
+  await page.locator("#layers\\.2\\.measured\\.visibleReflectanceFront").fill("");
+  await page.locator("#layers\\.2\\.measured\\.visibleReflectanceBack").fill("");
+  await expect(page.locator(".field-error")).toHaveCount(0);
+  // The unit's τv is then a range, bounded by what the unknown reflectances can be.
+  await expect(light).toHaveText(/^0\.\d\d–0\.\d\d$/);
+  await expect(page.getByTestId("readings")).toContainText("light reflectance of some panes unknown");
+  await expect(page.getByTestId("warnings")).toContainText("τv at normal incidence lies between");
+  // One reflectance without the other is refused, in words.
+  await page.locator("#layers\\.2\\.measured\\.visibleReflectanceFront").fill("0.05");
+  await expect(page.locator('[data-field="layers.2.measured.visibleReflectanceBack"]')).toContainText(
+    "Give the light reflectance of both faces, or neither",
+  );
 });

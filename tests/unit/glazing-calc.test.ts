@@ -145,7 +145,7 @@ describe("warnings", () => {
     const text = r.warnings.join(" ");
     expect(text).toMatch(/Gap 1 is 40 mm/);
     expect(text).toMatch(/tilted 30°/);
-    expect(text).toMatch(/Light transmittance needs measured visible values/);
+    expect(text).toMatch(/Light transmittance needs measured light values/);
     expect(r.angles[0]!.visibleTransmittance).toBeNull();
   });
   it("gives light transmittance when every pane has measured visible values", () => {
@@ -165,5 +165,62 @@ describe("warnings", () => {
     expect(r.angles[0]!.visibleTransmittance).toBeGreaterThan(0.75);
     expect(r.angles[0]!.visibleTransmittance).toBeLessThan(0.9);
     expect(r.hemispherical.visibleTransmittance).toBeLessThan(r.angles[0]!.visibleTransmittance!);
+  });
+});
+
+describe("panes giving light transmittance alone", () => {
+  const tvOnly = (T: number) =>
+    ({
+      kind: "pane",
+      thicknessMm: 6,
+      measured: { solarTransmittance: 0.45, solarReflectanceFront: 0.2, solarReflectanceBack: 0.25, visibleTransmittance: T },
+    }) as const;
+  const clear = {
+    kind: "pane",
+    thicknessMm: 4,
+    measured: {
+      solarTransmittance: 0.83,
+      solarReflectanceFront: 0.075,
+      solarReflectanceBack: 0.075,
+      visibleTransmittance: 0.9,
+      visibleReflectanceFront: 0.08,
+      visibleReflectanceBack: 0.08,
+    },
+  } as const;
+
+  it("are accepted; one such pane alone gives its τv at normal incidence with the reflectance unknown", () => {
+    const r = calc({ layers: [tvOnly(0.62)], anglesDeg: [0, 30] });
+    expect(r.light).toEqual({
+      basis: "transmittance only",
+      transmittance: 0.62,
+      range: { low: 0.62, high: 0.62 },
+      reflectanceFront: null,
+      reflectanceBack: null,
+    });
+    expect(r.angles[0]!.visibleTransmittance).toBe(0.62);
+    expect(r.angles[0]!.visibleReflectanceFront).toBeNull();
+    expect(r.angles[1]!.visibleTransmittance).toBeNull(); // not known away from the normal
+    expect(r.warnings.join(" ")).toMatch(/light reflectance is unknown/);
+  });
+
+  it("in a unit give a range, not a value", () => {
+    const r = calc({ layers: [clear, air16, tvOnly(0.7)] });
+    expect(r.light.basis).toBe("transmittance only");
+    expect(r.light.transmittance).toBeNull();
+    expect(r.light.range!.low).toBeCloseTo(0.63, 12);
+    expect(r.light.range!.high).toBeCloseTo(0.63 / (1 - 0.08 * 0.3), 12);
+    expect(r.angles[0]!.visibleTransmittance).toBeNull();
+    expect(r.warnings.join(" ")).toMatch(/between 0\.630 and 0\.645/);
+  });
+
+  it("a light reflectance without τv, or of one face only, is refused with the field named", () => {
+    const bad = (measured: object) => GlazingRequest.safeParse({ layers: [{ kind: "pane", thicknessMm: 4, measured }] });
+    const solar = { solarTransmittance: 0.8, solarReflectanceFront: 0.07, solarReflectanceBack: 0.07 };
+    const one = bad({ ...solar, visibleTransmittance: 0.8, visibleReflectanceFront: 0.08 });
+    expect(one.success).toBe(false);
+    expect(one.error!.issues.map((i) => i.path.join("."))).toContain("layers.0.measured.visibleReflectanceBack");
+    const noT = bad({ ...solar, visibleReflectanceFront: 0.08, visibleReflectanceBack: 0.08 });
+    expect(noT.error!.issues.map((i) => i.message)).toContain("visibleTransmittance is needed with the light reflectances");
+    expect(bad({ ...solar, visibleTransmittance: 0.8 }).success).toBe(true);
   });
 });

@@ -39,6 +39,18 @@ describe("requirement flags", () => {
     expect(overallStatus(flags)).toBe("unknown");
   });
 
+  it("a τv known as a range passes or fails only when the whole range does", () => {
+    const withRange = (low: number, high: number) => ({ ...inputs, lightTransmittance: null, lightTransmittanceRange: { low, high } });
+    expect(requirementFlags({ minLightTransmittance: 0.6 }, withRange(0.63, 0.65))[0]).toMatchObject({ status: "pass", value: 0.63 });
+    expect(requirementFlags({ minLightTransmittance: 0.6 }, withRange(0.63, 0.65))[0]!.margin).toBeCloseTo(0.03, 12);
+    expect(requirementFlags({ minLightTransmittance: 0.7 }, withRange(0.63, 0.65))[0]).toMatchObject({ status: "fail", value: 0.65 });
+    expect(requirementFlags({ minLightTransmittance: 0.64 }, withRange(0.63, 0.65))[0]).toMatchObject({
+      status: "unknown",
+      value: null,
+      margin: null,
+    });
+  });
+
   it("checks nothing without limits", () => {
     expect(requirementFlags({}, inputs)).toEqual([]);
     expect(overallStatus([])).toBe("none");

@@ -1,49 +1,26 @@
 import { useEffect, useMemo, useRef, useState } from "react";
-import { Controller, useFieldArray, useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
+import { useFieldArray, useForm, useWatch, type Resolver } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import type { z } from "zod";
-import { GlazingRequest, MAX_PANES, type Gap, type GlazingResponse, type MeasuredPane, type PhysicalPane } from "@/lib/contracts/glazing";
+import { GlazingRequest, MAX_PANES, type GlazingResponse } from "@/lib/contracts/glazing";
 import { api, ApiError } from "@/lib/client/api";
 import { PRESETS } from "@/lib/glazing-presets";
 import AngularChart, { type Series } from "./AngularChart";
-import GasField from "./GasField";
-import { Field, FormMessage } from "@/components/forms/Field";
+import { FormMessage } from "@/components/forms/Field";
+import { makeupDescription } from "@/lib/calc/makeup-description";
+import AngleReadout, { anglesCsv } from "./AngleReadout";
+import { glazingMessageInWords, layerName } from "./field-words";
+import LayerInspector, { isGap, measuredDefault, physicalDefault, type ComposerValues, type LayerIn, type PhysicalIn } from "./LayerInspector";
+import SunBudget, { PANE_COLORS } from "./SunBudget";
 import LibraryBar, { type OpenMakeup } from "./LibraryBar";
 import { readComposerDraft, writeComposerDraft } from "./draft";
 import MakeupSection from "./MakeupSection";
+import { useWidth } from "@/components/charts/useWidth";
 
-type PhysicalIn = z.input<typeof PhysicalPane>;
-type MeasuredIn = z.input<typeof MeasuredPane>;
-type GapIn = z.input<typeof Gap>;
-type LayerIn = PhysicalIn | MeasuredIn | GapIn;
-interface FormValues {
-  layers: LayerIn[];
-}
+type FormValues = ComposerValues;
 
 const ANGLES = Array.from({ length: 91 }, (_, i) => i);
-const PANE_COLORS = ["#7a3e9d", "#c2410c", "#0e7490", "#4d7c0f", "#9f1239", "#1d4ed8"];
 
-const isGap = (l: LayerIn): l is GapIn => l.kind === "gap";
-const isMeasured = (l: LayerIn): l is MeasuredIn => l.kind === "pane" && "measured" in l;
-
-const physicalDefault = (thicknessMm = 4): PhysicalIn => ({ kind: "pane", thicknessMm, refractiveIndex: 1.52, absorptionPerMm: 0.02 });
-const measuredDefault = (thicknessMm = 4): MeasuredIn => ({
-  kind: "pane",
-  thicknessMm,
-  measured: { solarTransmittance: 0.8, solarReflectanceFront: 0.07, solarReflectanceBack: 0.07 },
-});
-
-const pct = (v: number | null | undefined, digits = 1) => (v == null ? "—" : `${(v * 100).toFixed(digits)} %`);
 const fix = (v: number | null | undefined, digits = 3) => (v == null ? "—" : v.toFixed(digits));
-
-function errorAt(errors: FieldErrors<FormValues>, path: string): { message?: string } | undefined {
-  let cur: unknown = errors;
-  for (const key of path.split(".")) {
-    if (cur == null || typeof cur !== "object") return undefined;
-    cur = (cur as Record<string, unknown>)[key];
-  }
-  return cur && typeof cur === "object" && "message" in cur ? (cur as { message?: string }) : undefined;
-}
 
 interface ComposerProps {
   /** The organisation whose library the composer saves to and opens from; none: no library bar. */
@@ -53,19 +30,23 @@ interface ComposerProps {
 /** Compose a glazing make-up; its optics and thermal values update as you edit. */
 export default function GlazingComposer({ library }: ComposerProps = {}) {
   const resolver = zodResolver(GlazingRequest as never) as unknown as Resolver<FormValues>;
-  const { control, register, formState, reset, trigger } = useForm<FormValues>({
+  const { control, register, reset } = useForm<FormValues>({
     resolver,
     mode: "onChange",
     defaultValues: { layers: PRESETS[2]!.request.layers as LayerIn[] },
   });
   const [openMakeup, setOpenMakeup] = useState<OpenMakeup | null>(null);
-  const [selectedLayer, setSelectedLayer] = useState<number | null>(null);
-  /** Selecting a layer on the drawing brings its fields into view and focuses the first one. */
+  const [selectedLayer, setSelectedLayer] = useState(0);
+  const [angle, setAngle] = useState(0);
+  const [drawingRef, drawingWidth] = useWidth<HTMLDivElement>(520);
+  /** Selecting a layer on the drawing opens it in the inspector beside the drawing and focuses its first field. */
   const selectLayer = (i: number) => {
     setSelectedLayer(i);
-    const row = document.getElementById(`layer-${i}`);
-    row?.scrollIntoView({ behavior: "smooth", block: "nearest" });
-    row?.querySelector<HTMLElement>("input, select")?.focus({ preventScroll: true });
+    requestAnimationFrame(() => {
+      const panel = document.getElementById(`layer-${i}`);
+      panel?.scrollIntoView({ behavior: "smooth", block: "nearest" });
+      panel?.querySelector<HTMLElement>("input:not([type=radio]), select")?.focus({ preventScroll: true });
+    });
   };
   const restored = useRef(false);
   // After hydration: the draft of the last visit, if any (the server renders the default make-up).
@@ -85,16 +66,11 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const seq = useRef(0);
-  const errors = formState.errors;
 
   // Recalculate shortly after each valid edit; a newer edit supersedes an older request.
   const body = useMemo(() => JSON.stringify({ layers: values.layers, anglesDeg: ANGLES }), [values]);
   useEffect(() => {
-    const parsed = GlazingRequest.safeParse(JSON.parse(body));
-    if (!parsed.success) {
-      void trigger();
-      return;
-    }
+    if (!GlazingRequest.safeParse(JSON.parse(body)).success) return;
     const mine = ++seq.current;
     const t = setTimeout(async () => {
       setBusy(true);
@@ -111,27 +87,50 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
       }
     }, 250);
     return () => clearTimeout(t);
-  }, [body, trigger]);
+  }, [body]);
 
   useEffect(() => {
     if (!restored.current || !values.layers?.length) return;
     writeComposerDraft({ layers: values.layers, open: openMakeup });
   }, [values, openMakeup]);
-  const layersValid = GlazingRequest.safeParse({ layers: values.layers }).success;
+
+  const parsed = useMemo(() => GlazingRequest.safeParse({ layers: values.layers }), [values]);
+  const layersValid = parsed.success;
+  /** Every problem of the make-up, worded, by layer: the same schema as the endpoint's, read from what is on screen. */
+  const problems = useMemo(() => {
+    const out: { layer: number | null; path: string; message: string }[] = [];
+    if (parsed.success) return out;
+    for (const issue of parsed.error.issues) {
+      const [head, layer, ...rest] = issue.path as (string | number)[];
+      if (head === "layers" && typeof layer === "number") out.push({ layer, path: rest.join("."), message: glazingMessageInWords(issue.message) });
+      else out.push({ layer: null, path: "", message: glazingMessageInWords(issue.message) });
+    }
+    return out;
+  }, [parsed]);
+  const invalidLayers = [...new Set(problems.flatMap((p) => (p.layer === null ? [] : [p.layer])))];
 
   const paneCount = values.layers?.filter((l) => l && !isGap(l)).length ?? 0;
-  const paneNumber = (layerIndex: number) => Math.floor(layerIndex / 2) + 1;
+  const layerCount = values.layers?.length ?? 0;
+  const current = Math.min(selectedLayer, Math.max(0, layerCount - 1));
+  const currentLayer = values.layers?.[current];
 
-  const addPane = () => {
-    layers.append({ kind: "gap", widthMm: 16, gas: "air" });
-    layers.append(physicalDefault(4));
+  const addPaneIndoors = () => {
+    layers.append([{ kind: "gap", widthMm: 16, gas: "air" }, physicalDefault(4)]);
+    setSelectedLayer(layerCount + 1);
+  };
+  const addPaneOutdoors = () => {
+    layers.prepend([physicalDefault(4), { kind: "gap", widthMm: 16, gas: "air" }]);
+    setSelectedLayer(0);
   };
   const removePane = (i: number) => {
     // Remove the pane and the gap on its indoor side (or outdoor side for the last pane).
     if (i === layers.fields.length - 1) layers.remove([i - 1, i]);
     else layers.remove([i, i + 1]);
+    setSelectedLayer(Math.max(0, i - 2));
   };
 
+  const at = result?.angles.find((a) => a.angleDeg === angle) ?? result?.angles[0];
+  const hasLight = result?.angles.some((a) => a.visibleTransmittance != null) ?? false;
   const chart1: Series[] = result
     ? [
         { key: "T", label: "solar transmittance", color: "#0f4c5c", points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarTransmittance })) },
@@ -149,14 +148,14 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
           dashed: true,
           points: result.angles.map((a) => ({ x: a.angleDeg, y: a.solarReflectanceBack })),
         },
-        ...(result.angles[0]?.visibleTransmittance != null
+        ...(hasLight
           ? [
               {
                 key: "Tv",
                 label: "light transmittance",
                 color: "#0f4c5c",
                 dashed: true,
-                points: result.angles.map((a) => ({ x: a.angleDeg, y: a.visibleTransmittance ?? 0 })),
+                points: result.angles.flatMap((a) => (a.visibleTransmittance == null ? [] : [{ x: a.angleDeg, y: a.visibleTransmittance }])),
               },
             ]
           : []),
@@ -171,6 +170,17 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
       }))
     : [];
   const normal = result?.angles[0];
+  const light = result?.light;
+
+  const downloadCsv = () => {
+    if (!result) return;
+    const url = URL.createObjectURL(new Blob([anglesCsv(result)], { type: "text/csv" }));
+    const a = document.createElement("a");
+    a.href = url;
+    a.download = `${(openMakeup?.name ?? "make-up").replace(/[^\w.-]+/g, "-")}-angles.csv`;
+    a.click();
+    URL.revokeObjectURL(url);
+  };
 
   return (
     <div className="space-y-6">
@@ -185,13 +195,20 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
           onOpen={(m) => {
             reset({ layers: structuredClone(m.layers) as LayerIn[] });
             setOpenMakeup({ id: m.id, revision: m.revision, name: m.name });
+            setSelectedLayer(0);
           }}
           onSaved={(m) => setOpenMakeup({ id: m.id, revision: m.revision, name: m.name })}
         />
       )}
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,440px)_1fr]">
-        <form method="post" className="space-y-4" noValidate onSubmit={(e) => e.preventDefault()} aria-label="Glazing make-up">
-          <div>
+      <form method="post" noValidate onSubmit={(e) => e.preventDefault()} aria-label="Glazing make-up" className="card space-y-4 p-0">
+        <div className="flex flex-wrap items-end gap-3 border-b border-line px-4 py-3">
+          <div className="min-w-0 flex-1">
+            <p className="text-xs font-bold uppercase tracking-wide text-slate">In section</p>
+            <p className="truncate font-bold" data-testid="composer-description">
+              {parsed.success ? makeupDescription(parsed.data.layers) : "incomplete make-up"}
+            </p>
+          </div>
+          <div className="w-full sm:w-64">
             <label htmlFor="preset">Start from</label>
             <select
               id="preset"
@@ -201,6 +218,7 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
                 if (p) {
                   reset({ layers: structuredClone(p.request.layers) as LayerIn[] });
                   setOpenMakeup(null);
+                  setSelectedLayer(0);
                 }
               }}
             >
@@ -214,318 +232,168 @@ export default function GlazingComposer({ library }: ComposerProps = {}) {
               ))}
             </select>
           </div>
-          <figure className="card space-y-2 p-3" aria-labelledby="section-caption">
-            <div className="overflow-x-auto">
+        </div>
+        <div className="grid gap-4 px-4 pb-4 lg:grid-cols-[minmax(0,1fr)_minmax(300px,380px)]">
+          <figure className="min-w-0 space-y-3" aria-labelledby="section-caption">
+            <div className="flex flex-wrap gap-2 text-sm">
+              <button type="button" className="btn-quiet py-1" onClick={addPaneOutdoors} disabled={paneCount >= MAX_PANES}>
+                + pane outdoors
+              </button>
+              <button type="button" className="btn-quiet py-1" onClick={addPaneIndoors} disabled={paneCount >= MAX_PANES}>
+                + pane on the room side
+              </button>
+              <span className="self-center text-xs text-slate">
+                {paneCount} of at most {MAX_PANES} panes
+              </span>
+            </div>
+            <div className="relative overflow-x-auto rounded border border-line bg-paper/60 p-2" ref={drawingRef}>
               <MakeupSection
+                fitWidth={drawingWidth - 20}
                 layers={values.layers ?? []}
-                selected={selectedLayer}
+                selected={current}
+                invalid={invalidLayers}
                 onSelect={selectLayer}
+                height={230}
                 title="The make-up in section: select a pane or a gap to edit it"
               />
             </div>
             <figcaption id="section-caption" className="text-xs text-slate">
-              In section, to scale, outdoors on the left; sun-coloured lines are low-e coatings. Faces are numbered from outdoors (pane 1 has faces 1
-              and 2, pane 2 faces 3 and 4, …). Select a pane or a gap to edit it below.
+              To scale, outdoors on the left; sun-coloured lines are low-e coatings, red outlines layers that need a correction. Faces are numbered
+              from outdoors (pane 1 has faces #1 and #2, pane 2 faces #3 and #4, …). Select a pane or a gap to edit it beside the drawing.
             </figcaption>
-          </figure>
-          <ol className="space-y-3">
-            {layers.fields.map((field, i) => {
-              const layer = values.layers?.[i];
-              if (!layer) return null;
-              const base = `layers.${i}`;
-              if (isGap(layer)) {
-                return (
-                  <li
-                    key={field.id}
-                    id={`layer-${i}`}
-                    className={`rounded border border-dashed bg-glass-light/40 p-3 ${selectedLayer === i ? "border-sun ring-2 ring-sun/40" : "border-glass/40"}`}
-                    data-testid="gap-row"
-                    onFocus={() => setSelectedLayer(i)}
-                  >
-                    <p className="mb-2 text-xs font-bold uppercase tracking-wide text-glass">Gap {paneNumber(i)}</p>
-                    <div className="grid grid-cols-[110px_1fr] gap-3">
-                      <Field label="Width (mm)" htmlFor={`${base}.widthMm`} error={errorAt(errors, `${base}.widthMm`)}>
-                        <input
-                          id={`${base}.widthMm`}
-                          type="number"
-                          step="any"
-                          {...register(`layers.${i}.widthMm` as never, { valueAsNumber: true })}
-                        />
-                      </Field>
-                      <Controller
-                        control={control}
-                        name={`layers.${i}.gas` as never}
-                        render={({ field: f }) => <GasField id={base} value={f.value} onChange={f.onChange} />}
-                      />
-                    </div>
-                    {errorAt(errors, `${base}.gas`)?.message && <p className="field-error">{errorAt(errors, `${base}.gas`)!.message}</p>}
-                  </li>
-                );
-              }
-              const n = paneNumber(i);
-              const measured = isMeasured(layer);
-              return (
-                <li
-                  key={field.id}
-                  id={`layer-${i}`}
-                  className={`card space-y-3 p-4 ${selectedLayer === i ? "ring-2 ring-sun/60" : ""}`}
-                  data-testid="pane-row"
-                  onFocus={() => setSelectedLayer(i)}
-                >
-                  <div className="flex items-center gap-2">
-                    <p className="font-bold">
-                      Pane {n}{" "}
-                      <span className="text-xs font-normal text-slate">
-                        faces {2 * n - 1} | {2 * n}
-                      </span>
-                    </p>
-                    <select
-                      aria-label={`How pane ${n} is described`}
-                      className="ml-auto mt-0 w-auto py-1 text-sm"
-                      value={measured ? "measured" : "physical"}
-                      onChange={(e) => {
-                        const t = layer.thicknessMm ?? 4;
-                        const keep = { emissivityFront: layer.emissivityFront, emissivityBack: layer.emissivityBack };
-                        layers.update(i, { ...(e.target.value === "measured" ? measuredDefault(t) : physicalDefault(t)), ...keep });
-                      }}
-                    >
-                      <option value="physical">glass properties</option>
-                      <option value="measured">measured values</option>
-                    </select>
-                    {paneCount > 1 && (
-                      <button type="button" className="btn-quiet py-1" onClick={() => removePane(i)} aria-label={`Remove pane ${n}`}>
-                        Remove
-                      </button>
-                    )}
-                  </div>
-                  <div className="grid grid-cols-3 gap-3">
-                    <Field label="Thickness (mm)" htmlFor={`${base}.thicknessMm`} error={errorAt(errors, `${base}.thicknessMm`)}>
-                      <input
-                        id={`${base}.thicknessMm`}
-                        type="number"
-                        step="any"
-                        {...register(`layers.${i}.thicknessMm` as never, { valueAsNumber: true })}
-                      />
-                    </Field>
-                    {!measured && (
-                      <>
-                        <Field label="Refractive index" htmlFor={`${base}.refractiveIndex`} error={errorAt(errors, `${base}.refractiveIndex`)}>
-                          <input
-                            id={`${base}.refractiveIndex`}
-                            type="number"
-                            step="any"
-                            {...register(`layers.${i}.refractiveIndex` as never, { valueAsNumber: true })}
-                          />
-                        </Field>
-                        <Field label="Absorption (1/mm)" htmlFor={`${base}.absorptionPerMm`} error={errorAt(errors, `${base}.absorptionPerMm`)}>
-                          <input
-                            id={`${base}.absorptionPerMm`}
-                            type="number"
-                            step="any"
-                            {...register(`layers.${i}.absorptionPerMm` as never, { valueAsNumber: true })}
-                          />
-                        </Field>
-                      </>
-                    )}
-                  </div>
-                  {measured && (
-                    <div className="grid grid-cols-3 gap-3">
-                      {(
-                        [
-                          ["solarTransmittance", "Solar T"],
-                          ["solarReflectanceFront", "Solar R, face " + (2 * n - 1)],
-                          ["solarReflectanceBack", "Solar R, face " + 2 * n],
-                          ["visibleTransmittance", "Light T"],
-                          ["visibleReflectanceFront", "Light R, face " + (2 * n - 1)],
-                          ["visibleReflectanceBack", "Light R, face " + 2 * n],
-                        ] as const
-                      ).map(([key, label]) => (
-                        <Field key={key} label={label} htmlFor={`${base}.measured.${key}`} error={errorAt(errors, `${base}.measured.${key}`)}>
-                          <input
-                            id={`${base}.measured.${key}`}
-                            type="number"
-                            step="any"
-                            placeholder={key.startsWith("visible") ? "optional" : undefined}
-                            {...register(`layers.${i}.measured.${key}` as never, {
-                              setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
-                            })}
-                          />
-                        </Field>
-                      ))}
-                    </div>
-                  )}
-                  <div className="grid grid-cols-2 gap-3">
-                    <Field
-                      label={`Emissivity, face ${2 * n - 1}`}
-                      htmlFor={`${base}.emissivityFront`}
-                      error={errorAt(errors, `${base}.emissivityFront`)}
-                      hint="0.837 if uncoated"
-                    >
-                      <input
-                        id={`${base}.emissivityFront`}
-                        type="number"
-                        step="any"
-                        placeholder="0.837"
-                        {...register(`layers.${i}.emissivityFront` as never, {
-                          setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
-                        })}
-                      />
-                    </Field>
-                    <Field
-                      label={`Emissivity, face ${2 * n}`}
-                      htmlFor={`${base}.emissivityBack`}
-                      error={errorAt(errors, `${base}.emissivityBack`)}
-                      hint="0.837 if uncoated"
-                    >
-                      <input
-                        id={`${base}.emissivityBack`}
-                        type="number"
-                        step="any"
-                        placeholder="0.837"
-                        {...register(`layers.${i}.emissivityBack` as never, {
-                          setValueAs: (v: string) => (v === "" || v == null ? undefined : Number(v)),
-                        })}
-                      />
-                    </Field>
-                  </div>
-                </li>
-              );
-            })}
-          </ol>
-          {errorAt(errors, "layers")?.message && <p className="field-error">{errorAt(errors, "layers")!.message}</p>}
-          <button type="button" className="btn-quiet" onClick={addPane} disabled={paneCount >= MAX_PANES}>
-            Add a gap and a pane (room side)
-          </button>
-        </form>
-
-        <section className="space-y-5" aria-live="polite" data-testid="glazing-results" data-busy={busy ? "1" : "0"}>
-          {failure && <FormMessage kind="error">{failure}</FormMessage>}
-          {!result ? (
-            <p className="text-slate">{busy ? "Calculating…" : "Enter a valid make-up to see its values."}</p>
-          ) : (
-            <>
-              <div className="grid gap-4 sm:grid-cols-3">
-                <div className="card">
-                  <p className="text-xs font-bold uppercase tracking-wide text-slate">g-value (normal)</p>
-                  <p className="text-3xl font-black tabular-nums" data-testid="g-normal">
-                    {fix(normal?.gValue, 2)}
-                  </p>
-                  <p className="text-xs text-slate">EN 410 · hemispherical {fix(result.hemispherical.gValue, 2)}</p>
+            {result && normal && (
+              <dl className="grid grid-cols-3 gap-3 border-t border-line pt-3" data-testid="readings">
+                <div>
+                  <dt className="text-xs text-slate">g-value, normal · EN 410</dt>
+                  <dd className="text-2xl font-black tabular-nums" data-testid="g-normal">
+                    {fix(normal.gValue, 2)}
+                  </dd>
+                  <dd className="text-xs text-slate">hemispherical {fix(result.hemispherical.gValue, 2)}</dd>
                 </div>
-                <div className="card">
-                  <p className="text-xs font-bold uppercase tracking-wide text-slate">U-value, centre of glass</p>
-                  <p className="text-3xl font-black tabular-nums" data-testid="u-value">
+                <div>
+                  <dt className="text-xs text-slate">U-value · EN 673</dt>
+                  <dd className="text-2xl font-black tabular-nums" data-testid="u-value">
                     {result.uValue.toFixed(1)}
-                  </p>
-                  <p className="text-xs text-slate">W/(m²K) · EN 673 · unrounded {result.uValue.toFixed(3)}</p>
+                  </dd>
+                  <dd className="text-xs text-slate">W/(m²K), centre of glass · {result.uValue.toFixed(3)}</dd>
                 </div>
-                <div className="card">
-                  <p className="text-xs font-bold uppercase tracking-wide text-slate">Light transmittance</p>
-                  <p className="text-3xl font-black tabular-nums">
-                    {normal?.visibleTransmittance == null ? "—" : pct(normal.visibleTransmittance, 0)}
-                  </p>
-                  <p className="text-xs text-slate">
-                    {normal?.visibleTransmittance == null ? "needs measured light values for every pane" : "normal incidence"}
-                  </p>
+                <div>
+                  <dt className="text-xs text-slate">Light τv, normal</dt>
+                  <dd className="text-2xl font-black tabular-nums" data-testid="light-normal">
+                    {lightText(light)}
+                  </dd>
+                  <dd className="text-xs text-slate">{lightNote(light)}</dd>
                 </div>
-              </div>
-              <div className="card grid gap-6 2xl:grid-cols-2">
-                <AngularChart title="Transmittance, reflectance and g" series={chart1} />
-                <AngularChart title="Absorptance per pane (sun from outdoors)" series={chart2} />
-              </div>
-              <div className="card overflow-x-auto">
-                <table className="w-full text-sm tabular-nums" data-testid="summary-table">
-                  <thead className="text-left text-slate">
-                    <tr>
-                      <th className="py-1">Quantity</th>
-                      <th className="text-right">Normal (0°)</th>
-                      <th className="text-right">Hemispherical</th>
-                    </tr>
-                  </thead>
-                  <tbody>
-                    <tr className="border-t border-line">
-                      <td className="py-1">Solar transmittance τe</td>
-                      <td className="text-right">{fix(normal?.solarTransmittance)}</td>
-                      <td className="text-right">{fix(result.hemispherical.solarTransmittance)}</td>
-                    </tr>
-                    <tr className="border-t border-line">
-                      <td className="py-1">Solar reflectance ρe, outdoor side</td>
-                      <td className="text-right">{fix(normal?.solarReflectanceFront)}</td>
-                      <td className="text-right">{fix(result.hemispherical.solarReflectanceFront)}</td>
-                    </tr>
-                    <tr className="border-t border-line">
-                      <td className="py-1">Solar reflectance, room side</td>
-                      <td className="text-right">{fix(normal?.solarReflectanceBack)}</td>
-                      <td className="text-right">{fix(result.hemispherical.solarReflectanceBack)}</td>
-                    </tr>
-                    {(normal?.layerAbsorptance ?? []).map((a, k) => (
-                      <tr key={k} className="border-t border-line">
-                        <td className="py-1">Absorptance, pane {k + 1}</td>
-                        <td className="text-right">{fix(a)}</td>
-                        <td className="text-right">{fix(result.hemispherical.layerAbsorptance[k])}</td>
-                      </tr>
+              </dl>
+            )}
+          </figure>
+          <aside className="rounded border border-glass/30 bg-glass-light/30 p-4" aria-label="Selected layer">
+            {problems.some((p) => p.layer !== current) && (
+              <div className="mb-3 rounded border border-alert/30 bg-alert/5 p-2 text-sm" role="alert" data-testid="other-problems">
+                <p className="font-bold text-alert">Also to correct</p>
+                <ul className="space-y-0.5">
+                  {problems
+                    .filter((p) => p.layer !== current)
+                    .map((p, k) => (
+                      <li key={k}>
+                        {p.layer === null ? (
+                          p.message
+                        ) : (
+                          <button type="button" className="text-left underline" onClick={() => selectLayer(p.layer!)}>
+                            {layerName(p.layer)}: {p.message}
+                          </button>
+                        )}
+                      </li>
                     ))}
-                    <tr className="border-t border-line font-bold">
-                      <td className="py-1">g-value (total solar energy transmittance)</td>
-                      <td className="text-right">{fix(normal?.gValue)}</td>
-                      <td className="text-right">{fix(result.hemispherical.gValue)}</td>
-                    </tr>
-                    <tr className="border-t border-line">
-                      <td className="py-1">Light transmittance τv</td>
-                      <td className="text-right">{fix(normal?.visibleTransmittance)}</td>
-                      <td className="text-right">{fix(result.hemispherical.visibleTransmittance)}</td>
-                    </tr>
-                  </tbody>
-                </table>
-              </div>
-              <details className="card">
-                <summary className="cursor-pointer font-bold">Values every 10°</summary>
-                <table className="mt-3 w-full text-sm tabular-nums" data-testid="angle-table">
-                  <thead className="text-left text-slate">
-                    <tr>
-                      <th>Angle</th>
-                      <th className="text-right">τe</th>
-                      <th className="text-right">ρe out</th>
-                      <th className="text-right">ρe room</th>
-                      {(normal?.layerAbsorptance ?? []).map((_, k) => (
-                        <th key={k} className="text-right">
-                          A{k + 1}
-                        </th>
-                      ))}
-                      <th className="text-right">g</th>
-                    </tr>
-                  </thead>
-                  <tbody>
-                    {result.angles
-                      .filter((a) => a.angleDeg % 10 === 0)
-                      .map((a) => (
-                        <tr key={a.angleDeg} className="border-t border-line">
-                          <td>{a.angleDeg}°</td>
-                          <td className="text-right">{fix(a.solarTransmittance)}</td>
-                          <td className="text-right">{fix(a.solarReflectanceFront)}</td>
-                          <td className="text-right">{fix(a.solarReflectanceBack)}</td>
-                          {a.layerAbsorptance.map((x, k) => (
-                            <td key={k} className="text-right">
-                              {fix(x)}
-                            </td>
-                          ))}
-                          <td className="text-right">{fix(a.gValue)}</td>
-                        </tr>
-                      ))}
-                  </tbody>
-                </table>
-              </details>
-              {result.warnings.length > 0 && (
-                <ul className="notice list-disc space-y-1 pl-8" data-testid="warnings">
-                  {result.warnings.map((w) => (
-                    <li key={w}>{w}</li>
-                  ))}
                 </ul>
-              )}
-            </>
-          )}
-        </section>
-      </div>
+              </div>
+            )}
+            {currentLayer && (
+              <LayerInspector
+                key={layers.fields[current]?.id ?? current}
+                index={current}
+                layer={currentLayer}
+                layerCount={layerCount}
+                paneCount={paneCount}
+                control={control}
+                register={register}
+                errorAt={(path) => {
+                  const p = problems.find((x) => x.layer === current && x.path === path);
+                  return p ? { message: p.message } : undefined;
+                }}
+                onDescribe={(as) => {
+                  const pane = currentLayer as PhysicalIn;
+                  const t = pane.thicknessMm ?? 4;
+                  const keep = { emissivityFront: pane.emissivityFront, emissivityBack: pane.emissivityBack };
+                  layers.update(current, { ...(as === "measured" ? measuredDefault(t) : physicalDefault(t)), ...keep });
+                }}
+                onRemove={() => removePane(current)}
+                onSelect={selectLayer}
+              />
+            )}
+          </aside>
+        </div>
+      </form>
+
+      <section className="space-y-5" aria-live="polite" data-testid="glazing-results" data-busy={busy ? "1" : "0"}>
+        {failure && <FormMessage kind="error">{failure}</FormMessage>}
+        {!result || !at ? (
+          <p className="text-slate">{busy ? "Calculating…" : "Enter a valid make-up to see its values."}</p>
+        ) : (
+          <>
+            {result.warnings.length > 0 && (
+              <ul className="notice list-disc space-y-1 pl-8" data-testid="warnings">
+                {result.warnings.map((w) => (
+                  <li key={w}>{w}</li>
+                ))}
+              </ul>
+            )}
+            <div className="card space-y-4">
+              <div className="flex flex-wrap items-end gap-4">
+                <div className="min-w-0 flex-1">
+                  <label htmlFor="angle">Angle of incidence: {angle}° from the normal</label>
+                  <input
+                    id="angle"
+                    type="range"
+                    min={0}
+                    max={90}
+                    step={1}
+                    value={angle}
+                    onChange={(e) => setAngle(Number(e.target.value))}
+                    className="w-full accent-[#e8a33d]"
+                  />
+                </div>
+                <button type="button" className="btn-quiet" onClick={downloadCsv}>
+                  Every angle as CSV
+                </button>
+              </div>
+              <SunBudget values={at} caption={`Where the sun goes at ${angle}°: shares of the sun striking pane 1`} />
+              <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+                <AngleReadout result={result} angleDeg={angle} />
+                <div className="min-w-0 space-y-6">
+                  <AngularChart title="Transmittance, reflectance and g" series={chart1} marker={angle} />
+                  <AngularChart title="Absorptance per pane (sun from outdoors)" series={chart2} marker={angle} />
+                </div>
+              </div>
+            </div>
+          </>
+        )}
+      </section>
     </div>
   );
+}
+
+/** The make-up's light transmittance at normal incidence: exact, a range, or unknown. */
+function lightText(light: GlazingResponse["light"] | undefined): string {
+  if (!light) return "—";
+  if (light.transmittance !== null) return light.transmittance.toFixed(2);
+  if (light.range) return `${light.range.low.toFixed(2)}–${light.range.high.toFixed(2)}`;
+  return "—";
+}
+
+function lightNote(light: GlazingResponse["light"] | undefined): string {
+  if (!light || light.basis === "not given") return "needs each pane's light transmittance (data-sheet values)";
+  if (light.basis === "transmittance only")
+    return light.transmittance !== null ? "light reflectance unknown" : "range: light reflectance of some panes unknown";
+  return "normal incidence";
 }

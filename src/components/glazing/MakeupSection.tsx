@@ -25,9 +25,13 @@ interface Props {
   layers: readonly unknown[];
   /** Index of the selected layer (composer). */
   selected?: number | null;
+  /** Indices of layers whose values need a correction (outlined in red). */
+  invalid?: readonly number[];
   onSelect?: (index: number) => void;
   /** Drawing height in px; the width follows the make-up's total thickness. */
   height?: number;
+  /** Width available in px: the make-up is drawn as large as fits (within limits); without it, a fixed scale. */
+  fitWidth?: number;
   /** Face numbers and gap labels (off for small pictures). */
   labels?: boolean;
   title?: string;
@@ -49,7 +53,7 @@ function gasLabel(gas: unknown): string {
 
 const num = (v: unknown, fallback: number) => (typeof v === "number" && Number.isFinite(v) && v > 0 ? v : fallback);
 
-export default function MakeupSection({ layers, selected = null, onSelect, height = 150, labels = true, title }: Props) {
+export default function MakeupSection({ layers, selected = null, invalid = [], onSelect, height = 150, fitWidth, labels = true, title }: Props) {
   const items = (layers as Layer[]).map((l) => {
     const isGap = (l as { kind?: unknown }).kind === "gap";
     return { layer: l, isGap, mm: isGap ? num((l as GapLike).widthMm, 12) : num((l as PaneLike).thicknessMm, 4) };
@@ -59,7 +63,7 @@ export default function MakeupSection({ layers, selected = null, onSelect, heigh
   const top = labels ? 22 : 4;
   const glassH = height - top - (labels ? 22 : 4);
   // Thin make-ups are drawn larger; a thick triple still fits a phone's width.
-  const scale = Math.min(9, Math.max(3, 320 / totalMm));
+  const scale = fitWidth ? Math.min(16, Math.max(3, (fitWidth - 2 * margin) / totalMm)) : Math.min(9, Math.max(3, 320 / totalMm));
   const width = margin * 2 + totalMm * scale;
   // Left edge of each layer and the pane number of each pane, worked out before drawing.
   const starts = items.map((_, i) => margin + items.slice(0, i).reduce((s, it) => s + it.mm * scale, 0));
@@ -68,9 +72,11 @@ export default function MakeupSection({ layers, selected = null, onSelect, heigh
     const x0 = starts[i]!;
     const w = it.mm * scale;
     const isSelected = selected === i;
+    const isInvalid = invalid.includes(i);
     const common = {
-      key: i,
       "data-layer": i,
+      "data-invalid": isInvalid ? "1" : undefined,
+      "aria-pressed": onSelect ? isSelected : undefined,
       role: onSelect ? "button" : undefined,
       tabIndex: onSelect ? 0 : undefined,
       onClick: onSelect ? () => onSelect(i) : undefined,
@@ -82,19 +88,20 @@ export default function MakeupSection({ layers, selected = null, onSelect, heigh
             }
           }
         : undefined,
-      className: onSelect ? "cursor-pointer focus:outline-none" : undefined,
+      className: onSelect ? "cursor-pointer focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-ink" : undefined,
     };
     if (it.isGap) {
       const g = it.layer as GapLike;
       return (
-        <g {...common} aria-label={onSelect ? `Gap: ${mmText(it.mm)} mm ${gasLabel(g.gas)}` : undefined}>
+        <g key={i} {...common} aria-label={onSelect ? `Gap: ${mmText(it.mm)} mm ${gasLabel(g.gas)}` : undefined}>
           <rect
             x={x0}
             y={top + 6}
             width={w}
             height={glassH - 12}
             fill={isSelected ? "#fbeed6" : "#f6f4ef"}
-            stroke={isSelected ? "#e8a33d" : "#ddd8cc"}
+            stroke={isInvalid ? "#b3261e" : isSelected ? "#e8a33d" : "#ddd8cc"}
+            strokeWidth={isInvalid || isSelected ? 2 : 1}
             strokeDasharray="3 3"
           />
           {labels && (
@@ -118,15 +125,15 @@ export default function MakeupSection({ layers, selected = null, onSelect, heigh
     const frontLowE = p.emissivityFront !== undefined && p.emissivityFront < LOW_E_BELOW;
     const backLowE = p.emissivityBack !== undefined && p.emissivityBack < LOW_E_BELOW;
     return (
-      <g {...common} aria-label={onSelect ? `Pane ${n + 1}: ${mmText(it.mm)} mm${p.measured ? ", measured values" : ""}` : undefined}>
+      <g key={i} {...common} aria-label={onSelect ? `Pane ${n + 1}: ${mmText(it.mm)} mm${p.measured ? ", measured values" : ""}` : undefined}>
         <rect
           x={x0}
           y={top}
           width={w}
           height={glassH}
           fill={p.measured ? "#b9d7dd" : "#d8e9ec"}
-          stroke={isSelected ? "#e8a33d" : "#0f4c5c"}
-          strokeWidth={isSelected ? 3 : 1}
+          stroke={isInvalid ? "#b3261e" : isSelected ? "#e8a33d" : "#0f4c5c"}
+          strokeWidth={isSelected || isInvalid ? 3 : 1}
         />
         {frontLowE && <line x1={x0 + 1} x2={x0 + 1} y1={top} y2={top + glassH} stroke="#e8a33d" strokeWidth={3} data-coating={2 * n + 1} />}
         {backLowE && <line x1={x0 + w - 1} x2={x0 + w - 1} y1={top} y2={top + glassH} stroke="#e8a33d" strokeWidth={3} data-coating={2 * n + 2} />}

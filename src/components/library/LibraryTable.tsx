@@ -13,6 +13,7 @@ import { api, ApiError } from "@/lib/client/api";
 import { withQueryClient } from "@/lib/client/query";
 import type { MakeupEntry } from "@/lib/contracts/library";
 import { writeComposerDraft } from "@/components/glazing/draft";
+import { lightSortKey, lightText, makeupLight } from "@/lib/calc/makeup-light";
 
 interface Props {
   organizationId: string;
@@ -22,6 +23,13 @@ interface Props {
 }
 
 const col = createColumnHelper<MakeupEntry>();
+/** τv as the table shows it: the value, a range (light reflectance unknown) or "—". */
+const lightCell = (light: ReturnType<typeof makeupLight>) =>
+  light.basis === "not given" ? (
+    "—"
+  ) : (
+    <span title={light.transmittance === null ? "range: some light reflectances unknown" : undefined}>{lightText(light)}</span>
+  );
 const fixed = (v: number | null | undefined, d = 2) => (v === null || v === undefined ? "—" : v.toFixed(d));
 
 /** The organisation's saved make-ups: sortable, searchable, opened in the composer or deleted. */
@@ -55,10 +63,10 @@ function LibraryTable({ organizationId, initial, canEdit, canDelete }: Props) {
       col.accessor((m) => m.values.normal.solarTransmittance, { id: "te", header: "τe", cell: (c) => fixed(c.getValue()) }),
       col.accessor((m) => m.values.normal.gValue, { id: "g", header: "g", cell: (c) => fixed(c.getValue()) }),
       col.accessor((m) => m.values.uValue, { id: "u", header: "U W/m²K", cell: (c) => fixed(c.getValue()) }),
-      col.accessor((m) => m.values.normal.visibleTransmittance ?? -1, {
+      col.accessor((m) => lightSortKey(makeupLight(m.values)), {
         id: "tv",
         header: "τv",
-        cell: (c) => (c.getValue() < 0 ? "—" : fixed(c.getValue())),
+        cell: (c) => lightCell(makeupLight(c.row.original.values)),
       }),
       col.accessor("revision", { header: "Rev.", cell: (c) => c.getValue() }),
       col.accessor("updatedAt", {

@@ -5,6 +5,7 @@ import type { CompareResponse } from "@/lib/contracts/results";
 import type { ScheduleResponse } from "@/lib/contracts/schedule";
 import { LineChart, MonthlyBars } from "./Charts";
 import { SERIES_COLORS, fraction, oneDecimal, whole } from "./format";
+import { lightText, makeupLight } from "@/lib/calc/makeup-light";
 
 interface Props {
   projectId: string;
@@ -74,7 +75,7 @@ export default function ComparePanel({ projectId, optionIds, year }: Props) {
                 </td>
                 <td className="pr-2">{fraction(o.values.normal.gValue)}</td>
                 <td className="pr-2">{fraction(o.values.normal.solarTransmittance)}</td>
-                <td className="pr-2">{o.values.normal.visibleTransmittance === null ? "unknown" : fraction(o.values.normal.visibleTransmittance)}</td>
+                <td className="pr-2">{lightText(makeupLight(o.values), 3)}</td>
                 <td className="pr-2">{o.values.uValue.toFixed(2)}</td>
                 <td className="pr-2">{whole(o.annual.solarGainKWhm2)}</td>
                 <td>{oneDecimal(o.peak.transmittedWm2)}</td>

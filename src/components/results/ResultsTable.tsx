@@ -13,6 +13,7 @@ import type { ResultsResponse, OptionResult } from "@/lib/contracts/results";
 import { overallStatus } from "@/lib/calc/requirement-flags";
 import FlagChips from "./FlagChips";
 import { fraction, oneDecimal, whole } from "./format";
+import { lightSortKey, lightText, makeupLight } from "@/lib/calc/makeup-light";
 
 export interface ResultRow extends OptionResult {
   facadeId: string;
@@ -83,15 +84,19 @@ export default function ResultsTable({ results, selected, onToggle, timeZone }: 
       }),
       col.accessor((r) => r.values.normal.gValue, { id: "g", header: "g", cell: (c) => fraction(c.getValue()) }),
       col.accessor((r) => r.values.uValue, { id: "u", header: "U W/m²K", cell: (c) => c.getValue().toFixed(2) }),
-      col.accessor((r) => r.values.normal.visibleTransmittance ?? -1, {
+      col.accessor((r) => lightSortKey(makeupLight(r.values)), {
         id: "tauV",
         header: "τv",
-        cell: (c) =>
-          c.row.original.values.normal.visibleTransmittance === null ? (
-            <span title="needs measured visible values">unknown</span>
-          ) : (
-            fraction(c.getValue())
-          ),
+        cell: (c) => {
+          const light = makeupLight(c.row.original.values);
+          const title =
+            light.basis === "not given"
+              ? "needs each pane's light transmittance"
+              : light.transmittance === null
+                ? "range: some light reflectances unknown"
+                : undefined;
+          return <span title={title}>{lightText(light, 3)}</span>;
+        },
       }),
       col.accessor((r) => r.values.hemispherical.solarTransmittance, { id: "tauHem", header: "τe hemisph.", cell: (c) => fraction(c.getValue()) }),
       col.accessor((r) => r.annual.transmittedKWhm2, { id: "annualT", header: "Transmitted kWh/m²·a", cell: (c) => whole(c.getValue()) }),

@@ -11,6 +11,8 @@ import { prepareGlazing, type GlazingOptics, type PaneSpec, type PreparedGlazing
 import { gValue, secondaryHeatTransferFactorsEn410, type SecondaryHeatTransferResult } from "@/lib/physics/g-value";
 import type { GasFill } from "@/lib/physics/gas-properties";
 import { toRadians, type Degrees } from "@/lib/physics/units";
+import { lightTransmittanceBounds } from "@/lib/physics/light-transmittance-bounds";
+import type { LightSummary } from "@/lib/contracts/glazing";
 
 /** Pane absorptance (sun from outdoors, normal incidence) above which thermal stress needs checking (common practice, no source). */
 export const THERMAL_STRESS_ABSORPTANCE = 0.5;
@@ -70,6 +72,29 @@ export function prepareGlazingModel(req: Pick<GlazingRequest, "layers" | "polari
   return { panes, gaps, optics, thermal };
 }
 
+/**
+ * The unit's light transmittance at normal incidence: from the angular optics when every pane has all
+ * three light values; from the bounds of the adding method when some pane gives τv alone.
+ */
+export function lightSummary(panes: readonly Pane[], optics: PreparedGlazing): LightSummary {
+  if (optics.hasVisible) {
+    const v = optics.at(toRadians(0 as Degrees)).visible!;
+    return { basis: "measured", transmittance: v.T, range: { low: v.T, high: v.T }, reflectanceFront: v.Rf, reflectanceBack: v.Rb };
+  }
+  const light = panes.map((p) => ("measured" in p && p.measured.visibleTransmittance !== undefined ? p.measured : null));
+  if (light.some((m) => m === null)) return { basis: "not given", transmittance: null, range: null, reflectanceFront: null, reflectanceBack: null };
+  const b = lightTransmittanceBounds(
+    light.map((m) => ({ T: m!.visibleTransmittance!, Rf: m!.visibleReflectanceFront, Rb: m!.visibleReflectanceBack })),
+  );
+  return {
+    basis: "transmittance only",
+    transmittance: b.exact ? b.low : null,
+    range: { low: b.low, high: b.high },
+    reflectanceFront: null,
+    reflectanceBack: null,
+  };
+}
+
 const round12 = (x: number) => Math.round(x * 1e12) / 1e12;
 
 export function calculateGlazing(req: GlazingRequest): GlazingResponse {
@@ -86,7 +111,13 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
     visibleReflectanceBack: o.visible?.Rb ?? null,
   });
 
-  const angles = req.anglesDeg.map((angleDeg) => ({ angleDeg, ...values(model.optics.at(toRadians(angleDeg as Degrees))) }));
+  const light = lightSummary(model.panes, model.optics);
+  // τv known at normal incidence only (panes giving τv alone): the 0° row carries it, other angles stay unknown.
+  const normalOnly = light.basis === "transmittance only" ? light.transmittance : null;
+  const angles = req.anglesDeg.map((angleDeg) => {
+    const v = values(model.optics.at(toRadians(angleDeg as Degrees)));
+    return { angleDeg, ...v, ...(angleDeg === 0 && normalOnly !== null ? { visibleTransmittance: normalOnly } : {}) };
+  });
   const h = model.optics.hemispherical();
   const normal = model.optics.at(toRadians(0 as Degrees));
   const u = model.thermal.thermal;
@@ -116,8 +147,14 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
         `Pane ${k + 1} has a low-emissivity coating (face ${faces.map((f) => `#${f}`).join(" and ")}) but is described by glass properties: the emissivity enters the U-value and the heat flow, yet the coating's solar optics are not modelled, so τe and the g-value of this make-up are overstated. Describe the coated pane by its measured values (the maker's data sheet) instead.`,
       );
     });
-  if (!model.optics.hasVisible) {
-    warnings.push("Light transmittance needs measured visible values for every pane; it is not given for this make-up.");
+  if (light.basis === "not given") {
+    warnings.push("Light transmittance needs measured light values (τv at least) for every pane; it is not given for this make-up.");
+  } else if (light.basis === "transmittance only") {
+    warnings.push(
+      light.transmittance !== null
+        ? "Light transmittance is the data sheet's τv at normal incidence; light reflectance is unknown, and τv at other angles and for diffuse light is not given."
+        : `Some panes give light transmittance alone, so the light reflectances inside the unit are unknown: τv at normal incidence lies between ${light.range!.low.toFixed(3)} and ${light.range!.high.toFixed(3)} (adding method with those reflectances at 0 and at their largest possible value). Requirements on τv are checked against this range.`,
+    );
   }
   if (req.tiltDeg !== 90) {
     warnings.push(`U-value for glazing tilted ${req.tiltDeg}° from horizontal: EN 673 declared values are for vertical glazing.`);
@@ -128,6 +165,7 @@ export function calculateGlazing(req: GlazingRequest): GlazingResponse {
     hemispherical: values(h),
     uValue: u.uValueWPerM2K,
     warnings,
+    light,
     // Extra fields: the intermediate values a consultant checks.
     uValueRounded: Math.round(u.uValueWPerM2K * 10) / 10,
     methods: {

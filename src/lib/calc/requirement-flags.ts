@@ -1,7 +1,8 @@
 /**
  * Checks an option's values against the brief's limits: one flag per limit that is set, pass / fail /
  * unknown with its margin (limit − value for maxima, value − limit for minima; ≥ 0 passes). A value the
- * make-up does not give (light transmittance without measured visible values) is "unknown", never a pass.
+ * make-up does not give (light transmittance without measured light values) is "unknown", never a pass;
+ * a τv known only as a range passes or fails when the whole range does (its margin from the nearer end).
  * Pure: the results service and the browser use the same function.
  */
 import { REQUIREMENT_KEYS, type Limits, type RequirementFlag, type RequirementKey } from "@/lib/contracts/requirements";
@@ -12,6 +13,12 @@ export interface FlagInputs {
   gValue: number | null;
   /** Normal-incidence light transmittance τv, −. */
   lightTransmittance: number | null;
+  /**
+   * When τv is not known exactly but bounded (panes giving τv alone, their light reflectance unknown):
+   * the range. A minimum passes when the lower end meets it, fails when the upper end misses it, and is
+   * unknown in between.
+   */
+  lightTransmittanceRange?: { low: number; high: number } | null;
   /** Centre-of-glass U-value, W/(m²K). */
   uValue: number | null;
   /** Highest hourly transmitted solar irradiance of the year, W/m². */
@@ -48,7 +55,16 @@ export function requirementFlags(limits: Limits, inputs: FlagInputs): Requiremen
     const limit = limits[requirement];
     if (limit === undefined) continue;
     const { input, kind } = SOURCE[requirement];
-    const value = inputs[input];
+    const value = inputs[input] as number | null;
+    const range = input === "lightTransmittance" && value === null ? inputs.lightTransmittanceRange : null;
+    if (range && kind === "min") {
+      const low = round9(range.low - limit);
+      const high = round9(range.high - limit);
+      if (low >= 0) flags.push({ requirement, limit, value: range.low, status: "pass", margin: low });
+      else if (high < 0) flags.push({ requirement, limit, value: range.high, status: "fail", margin: high });
+      else flags.push({ requirement, limit, value: null, status: "unknown", margin: null });
+      continue;
+    }
     if (value === null || !Number.isFinite(value)) {
       flags.push({ requirement, limit, value: null, status: "unknown", margin: null });
       continue;

@@ -29,14 +29,19 @@ export const MeasuredValues = z
       ctx.addIssue({ code: "custom", path: ["solarReflectanceBack"], message: "solarTransmittance + solarReflectanceBack must not exceed 1" });
     if (m.solarTransmittance <= 0)
       ctx.addIssue({ code: "custom", path: ["solarTransmittance"], message: "solarTransmittance must be greater than 0" });
-    const vis = [m.visibleTransmittance, m.visibleReflectanceFront, m.visibleReflectanceBack];
-    const given = vis.filter((v) => v !== undefined).length;
-    if (given !== 0 && given !== 3)
+    // Light values: all three, none, or the transmittance alone (many data sheets give no light reflectance).
+    const reflectances = [m.visibleReflectanceFront, m.visibleReflectanceBack].filter((v) => v !== undefined).length;
+    if (reflectances === 1)
       ctx.addIssue({
         code: "custom",
-        path: ["visibleTransmittance"],
-        message: "give all three visible values (transmittance, front and back reflectance) or none",
+        path: [m.visibleReflectanceFront === undefined ? "visibleReflectanceFront" : "visibleReflectanceBack"],
+        message: "give the light reflectance of both faces, or neither",
       });
+    if (reflectances > 0 && m.visibleTransmittance === undefined)
+      ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "visibleTransmittance is needed with the light reflectances" });
+    if (m.visibleTransmittance !== undefined && reflectances === 0 && m.visibleTransmittance <= 0)
+      ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "visibleTransmittance must be greater than 0" });
+    const given = m.visibleTransmittance !== undefined ? 1 + reflectances : 0;
     if (given === 3) {
       if (m.visibleTransmittance! <= 0)
         ctx.addIssue({ code: "custom", path: ["visibleTransmittance"], message: "visibleTransmittance must be greater than 0" });
@@ -179,11 +184,26 @@ export interface GlazingAngleRow extends GlazingValues {
   angleDeg: number;
 }
 
+/**
+ * The make-up's light transmittance at normal incidence. "measured": every pane has its three light values
+ * (then the angular values carry τv too); "transmittance only": some pane gives τv alone, so its light
+ * reflectance is unknown and τv is exact only when no unknown reflectance enters it (a single pane), a
+ * range otherwise; "not given": some pane has no light values.
+ */
+export interface LightSummary {
+  basis: "measured" | "transmittance only" | "not given";
+  transmittance: number | null;
+  range: { low: number; high: number } | null;
+  reflectanceFront: number | null;
+  reflectanceBack: number | null;
+}
+
 export interface GlazingResponse {
   angles: GlazingAngleRow[];
   hemispherical: GlazingValues;
   /** Centre-of-glass U-value, W/(m²K), unrounded. */
   uValue: number;
   warnings: string[];
+  light: LightSummary;
   [extra: string]: unknown;
 }

@@ -1,5 +1,5 @@
 /** Wire types of GET /api/v1/projects/:id/results and of issued revisions' snapshots. */
-import type { GlazingAngleRow, GlazingValues } from "./glazing";
+import type { GlazingAngleRow, GlazingValues, LightSummary } from "./glazing";
 import type { Limits, RequirementFlag } from "./requirements";
 
 /** What a saved make-up revision stores as its values (computed when it is saved). */
@@ -9,6 +9,8 @@ export interface MakeupValues {
   /** Centre-of-glass U-value, W/(m²K). */
   uValue: number;
   warnings: string[];
+  /** Light transmittance at normal incidence with its basis (absent in values stored before it was kept). */
+  light?: LightSummary;
 }
 
 export interface OptionResult {

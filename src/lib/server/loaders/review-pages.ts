@@ -1,4 +1,5 @@
 /** View models of the review pages: the options of every façade for the architect and the history. */
+import type { MakeupValues } from "@/lib/contracts/results";
 import { asc, eq } from "drizzle-orm";
 import { roleCan, type RoleName } from "@/lib/auth/roles";
 import { db } from "@/lib/server/db/client";
@@ -9,6 +10,7 @@ import { historyOf } from "@/lib/server/services/review";
 import { permissionFor } from "@/lib/auth/roles";
 import { InstantPageQuery } from "@/lib/contracts/pagination";
 import type { HistoryResponse } from "@/lib/contracts/review";
+import { lightText, makeupLight } from "@/lib/calc/makeup-light";
 
 interface PageUser {
   id: string;
@@ -23,7 +25,8 @@ export interface ReviewOptionView {
   description: string;
   /** Key values stored with the make-up revision (null where not stored). */
   gValue: number | null;
-  lightTransmittance: number | null;
+  /** τv as text: "0.62", a range "0.60–0.66" (light reflectance unknown) or "unknown". */
+  lightTransmittance: string;
   uValue: number | null;
 }
 
@@ -68,7 +71,7 @@ export async function loadReviewPage(user: PageUser, projectId: string | undefin
           makeupRevision: r.revision,
           description: r.description,
           gValue: num(at(r.values, "normal", "gValue")),
-          lightTransmittance: num(at(r.values, "normal", "visibleTransmittance")),
+          lightTransmittance: lightText(makeupLight(r.values as MakeupValues)),
           uValue: num(at(r.values, "uValue")),
         })),
     })),

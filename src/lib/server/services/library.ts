@@ -33,7 +33,7 @@ export async function makeupValues(layers: (Pane | Gap)[], pool: CalcPool | null
   const g = await runCalc<"glazing", GlazingResponse>(pool, "glazing", req);
   const { angleDeg: _angle, ...normal } = g.angles[0]!;
   void _angle;
-  return { normal, hemispherical: g.hemispherical, uValue: g.uValue, warnings: g.warnings };
+  return { normal, hemispherical: g.hemispherical, uValue: g.uValue, warnings: g.warnings, light: g.light };
 }
 
 type MakeupRow = typeof makeup.$inferSelect;

@@ -27,6 +27,7 @@ import type {
 import { GlazingRequest, type GlazingResponse } from "@/lib/contracts/glazing";
 import { COMPARE_ANGLES_DEG } from "@/lib/contracts/revisions";
 import type { SurfaceYearSummary } from "@/lib/calc/surface-year";
+import { makeupLight } from "@/lib/calc/makeup-light";
 import { effectiveLimits, requirementFlags } from "@/lib/calc/requirement-flags";
 
 /** Changes whenever the engine's figures for the same inputs would change; old cache entries then miss. */
@@ -258,9 +259,11 @@ export async function projectResults(projectId: string, year: number, opts: Proj
         options: (byFacade.get(f.id) ?? []).map((e): OptionResult => {
           const s = e.problem ? emptySummary(year) : cached.get(e.key)!;
           const values = e.revision.values as MakeupValues;
+          const light = makeupLight(values);
           const flags = requirementFlags(limits, {
             gValue: values.normal?.gValue ?? null,
-            lightTransmittance: values.normal?.visibleTransmittance ?? null,
+            lightTransmittance: light.transmittance,
+            lightTransmittanceRange: light.range,
             uValue: values.uValue ?? null,
             peakTransmittedWm2: e.problem ? null : s.peak.transmittedWm2,
             annualSolarGainKWhm2: e.problem ? null : s.annual.solarGainKWhm2,
