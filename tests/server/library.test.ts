@@ -187,6 +187,38 @@ describe("saved make-ups", () => {
     expect(entry.description).toBe("6 | 16 Ar 90% | 4 low-e #3");
     expect(entry.values.warnings.join(" ")).toMatch(/Pane 2 has a low-emissivity coating \(face #3\).*measured values/);
   });
+
+  it("accept a measured pane with light transmittance alone and store its light values as a range with the reflectance unknown", async () => {
+    // Invented data-sheet values: τv 0.70 given, no light reflectance.
+    const tvOnly = { ...coated, measured: { ...coated.measured, visibleTransmittance: 0.7 } };
+    const clearWithLight = {
+      kind: "pane",
+      thicknessMm: 6,
+      measured: {
+        solarTransmittance: 0.8,
+        solarReflectanceFront: 0.07,
+        solarReflectanceBack: 0.07,
+        visibleTransmittance: 0.89,
+        visibleReflectanceFront: 0.08,
+        visibleReflectanceBack: 0.08,
+      },
+    };
+    const res = await call(
+      createMakeupRoute,
+      consultant,
+      makeupsPath(),
+      { orgId: o.organizationId },
+      { method: "POST", body: { name: "Light T only", layers: [clearWithLight, argonGap, tvOnly] } },
+    );
+    expect(res.status).toBe(201);
+    const light = (res.body as MakeupEntry).values.light!;
+    expect(light.basis).toBe("transmittance only");
+    expect(light.transmittance).toBeNull();
+    expect(light.reflectanceFront).toBeNull();
+    // Adding method at normal incidence: low 0.89 × 0.70; high with the unknown face at 1 − 0.70 (see the bounds' reference test).
+    expect(light.range!.low).toBeCloseTo(0.89 * 0.7, 12);
+    expect(light.range!.high).toBeCloseTo((0.89 * 0.7) / (1 - 0.08 * 0.3), 12);
+  });
 });
 
 describe("saved panes", () => {
