@@ -3,9 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { and, eq } from "drizzle-orm";
 import { db, pool } from "@/lib/server/db/client";
-import { facade, facadeOption, invitation, project, projectEvent, projectRequirements, resultCache, scheduleRevision } from "@/lib/server/db/schema";
-import { signUp } from "@/lib/server/services/accounts";
-import { inviteMember } from "@/lib/server/services/members";
+import { facade, facadeOption, project, projectEvent, projectRequirements, resultCache, scheduleRevision } from "@/lib/server/db/schema";
 import { createProject, shareProject, projectsForUser } from "@/lib/server/services/projects";
 import { projectResults } from "@/lib/server/services/results";
 import { issueRevision, libraryChangesSince } from "@/lib/server/services/revisions";
@@ -20,31 +18,20 @@ import { GET as listRevisions, POST as issueRoute } from "@/pages/api/v1/project
 import { GET as revisionRoute } from "@/pages/api/v1/projects/[id]/revisions/[rev]";
 import { POST as scheduleRoute } from "@/pages/api/v1/calc/schedule";
 import { POST as glazingRoute } from "@/pages/api/v1/calc/glazing";
-import { newOwner, uniqueEmail } from "./helpers";
+import { callRoute, invitedMember, newOwner } from "./helpers";
 import { clear, double, editMakeup, insertMakeup, insertOption, measuredClear, tinted } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
 
 const YEAR = 2025;
+/** A site of this run's own (cache rows are shared by equal inputs, so a rerun on the same database must not meet the last run's). */
+const LONGITUDE = -9.14 + Math.round(Math.random() * 1e6) / 1e9;
 type Caller = { id: string; name: string; email: string };
 type Route = typeof resultsRoute;
 
-async function call(route: Route, caller: Caller, path: string, params: Record<string, string>, init: { method?: string; body?: unknown } = {}) {
-  const request = new Request(`http://127.0.0.1${path}`, {
-    method: init.method ?? "GET",
-    ...(init.body !== undefined ? { body: JSON.stringify(init.body), headers: { "content-type": "application/json" } } : {}),
-  });
-  const res = (await route({ request, url: new URL(request.url), params, locals: { user: caller } } as never)) as Response;
-  return { status: res.status, body: await res.json() };
-}
-
-async function member(o: { headers: Headers; organizationId: string }, role: "consultant" | "architect" | "client") {
-  const email = uniqueEmail(role);
-  await inviteMember(o.headers, o.organizationId, email, role);
-  const id = (await db.select().from(invitation).where(eq(invitation.email, email)))[0]!.id;
-  const r = await signUp({ name: `Test ${role}`, email, password: "long password", invitationId: id });
-  return { id: r.userId!, name: `Test ${role}`, email };
-}
+const call = (route: Route, caller: Caller, path: string, params: Record<string, string>, init: { method?: string; body?: unknown } = {}) =>
+  callRoute(route as Parameters<typeof callRoute>[0], caller, path, params, init) as Promise<{ status: number; body: any }>; // eslint-disable-line @typescript-eslint/no-explicit-any -- each test reads its own response shape
+const member = invitedMember;
 
 let o: Awaited<ReturnType<typeof newOwner>>;
 let owner: Caller;
@@ -69,7 +56,7 @@ beforeAll(async () => {
       name: "Results test block",
       siteName: "Test plot",
       latitudeDeg: 38.7,
-      longitudeDeg: -9.14,
+      longitudeDeg: LONGITUDE,
       timeZone: "Europe/Lisbon",
       elevationM: 50,
       facades: [
@@ -124,7 +111,7 @@ describe("project results", () => {
       {
         method: "POST",
         body: {
-          site: { latitudeDeg: 38.7, longitudeDeg: -9.14, timeZone: "Europe/Lisbon", elevationM: 50 },
+          site: { latitudeDeg: 38.7, longitudeDeg: LONGITUDE, timeZone: "Europe/Lisbon", elevationM: 50 },
           from: `${YEAR}-01-01`,
           to: `${YEAR}-12-31`,
           sky: { model: "isotropic", albedo: 0.25, linkeTurbidity: [3, 3.2, 3.5, 3.8, 4, 4.1, 4.2, 4.1, 3.9, 3.6, 3.2, 3] },

@@ -4,11 +4,9 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/lib/server/db/client";
-import { facadeOption, invitation, makeup, makeupRevision, projectEvent } from "@/lib/server/db/schema";
-import { signUp } from "@/lib/server/services/accounts";
+import { facadeOption, makeup, makeupRevision, projectEvent } from "@/lib/server/db/schema";
 import { requireOption, requireProject } from "@/lib/server/services/access";
 import { createProject, facadesOf, projectsForUser, shareProject } from "@/lib/server/services/projects";
-import { inviteMember } from "@/lib/server/services/members";
 import { addComment, commentsOf, decide, historyOf } from "@/lib/server/services/review";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import { CommentRequest, DecisionRequest } from "@/lib/contracts/review";
@@ -16,7 +14,7 @@ import { InstantPageQuery } from "@/lib/contracts/pagination";
 import { permissionFor, type PermissionKey } from "@/lib/auth/roles";
 import { ROUTES } from "@/lib/auth/route-table";
 import { problemFor } from "@/lib/server/http";
-import { newOwner, uniqueEmail } from "./helpers";
+import { invitedMember, newOwner } from "./helpers";
 
 afterAll(() => pool.end());
 const status = async (p: Promise<unknown>) =>
@@ -25,13 +23,7 @@ const status = async (p: Promise<unknown>) =>
     (e) => problemFor(e)?.status ?? String(e),
   );
 
-async function join(o: Awaited<ReturnType<typeof newOwner>>, role: "consultant" | "architect" | "client") {
-  const email = uniqueEmail(role);
-  await inviteMember(o.headers, o.organizationId, email, role);
-  const id = (await db.select().from(invitation).where(eq(invitation.email, email)))[0]!.id;
-  const r = await signUp({ name: `Test ${role}`, email, password: "long password", invitationId: id });
-  return { id: r.userId!, name: `Test ${role}` };
-}
+const join = invitedMember;
 
 /** An organisation with one member per role, a project of two façades shared with the client, two options per façade. */
 async function world() {
