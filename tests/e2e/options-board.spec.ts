@@ -201,3 +201,14 @@ test("the requirements editor keeps its saved message after saving; a stale save
   await page.reload();
   await expect(gLimit).toHaveValue("0.45");
 });
+
+test("architects see the options but no way to re-point them", async ({ browser }) => {
+  const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+  const page = await ctx.newPage();
+  await signIn(page, demoUser("architect").email, DEMO_PASSWORD);
+  await page.goto(`/projects/${projectId}`);
+  await page.getByText("Loading the options…").scrollIntoViewIfNeeded();
+  await expect(page.getByTestId("facade-options")).toHaveCount(2);
+  await expect(page.locator('tr[data-option="B: clear"]')).toContainText(TINTED);
+  await expect(page.getByRole("button", { name: /Choose another make-up/ })).toHaveCount(0);
+});
