@@ -103,6 +103,7 @@ test("the consultant builds a project with two façades, two options each and th
   await expect(page.getByText(/Whole project: Maximum g-value —/)).toBeVisible();
   await page.getByLabel("Whole project: Maximum g-value").fill("0.7");
   await page.getByRole("button", { name: "Save the requirements" }).click();
+  await expect(page.getByRole("status").filter({ hasText: "Requirements saved" })).toBeVisible();
   await expect
     .poll(async () => ((await (await page.request.get(`/api/v1/projects/${projectId}/requirements`)).json()) as { version: number }).version)
     .toBe(1);

@@ -12,7 +12,7 @@ import { GET as listOptions, POST as createOptionRoute } from "@/pages/api/v1/pr
 import { DELETE as deleteOptionRoute, PATCH as patchOptionRoute } from "@/pages/api/v1/options/[id]/index";
 import { GET as getRequirements, PUT as putRequirementsRoute } from "@/pages/api/v1/projects/[id]/requirements";
 import { callRoute, invitedMember, newOwner, type RouteCaller } from "./helpers";
-import { clear, double, editMakeup, insertMakeup } from "./workspace-fixtures";
+import { clear, double, editMakeup, insertMakeup, tinted } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
 
@@ -140,6 +140,39 @@ describe("façade options", () => {
     const events = await db.select().from(projectEvent).where(eq(projectEvent.projectId, projectId));
     expect(events.map((e) => e.kind)).toEqual(expect.arrayContaining(["option.created", "option.repointed"]));
     expect(events.find((e) => e.kind === "option.repointed")!.summary).toMatch(/approval was withdrawn/);
+  });
+
+  it("are pointed at another make-up of the library, which withdraws an approval; a make-up of another organisation is refused", async () => {
+    const makeupB = await insertMakeup(o.organizationId, "Tinted double", double(tinted(6), clear(6)));
+    await db.update(facadeOption).set({ status: "approved" }).where(eq(facadeOption.id, option.id));
+    const path = `/api/v1/options/${option.id}`;
+    const foreign = await call(
+      patchOptionRoute,
+      consultant,
+      path,
+      { id: option.id },
+      { method: "PATCH", body: { version: 2, makeupId: foreignMakeup.makeup.id } },
+    );
+    expect(foreign.status).toBe(400);
+    expect((foreign.body as { errors: { field: string }[] }).errors.map((e) => e.field)).toEqual(["makeupId"]);
+    const unchanged = (await db.select().from(facadeOption).where(eq(facadeOption.id, option.id)))[0]!;
+    expect([unchanged.makeupId, unchanged.status, unchanged.version]).toEqual([makeupA.makeup.id, "approved", 2]);
+    const res = await call(
+      patchOptionRoute,
+      consultant,
+      path,
+      { id: option.id },
+      { method: "PATCH", body: { version: 2, makeupId: makeupB.makeup.id } },
+    );
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({
+      approvalWithdrawn: true,
+      option: { makeupId: makeupB.makeup.id, makeupName: "Tinted double", makeupRevision: 1, status: "proposed", version: 3 },
+    });
+    const events = await db.select().from(projectEvent).where(eq(projectEvent.projectId, projectId));
+    expect(events.map((e) => e.summary)).toContain(
+      "Pointed “Clear double” at Tinted double, revision 1; its approval was withdrawn (the make-up changed)",
+    );
   });
 
   it("are removed by consultants, with the removal in the history", async () => {

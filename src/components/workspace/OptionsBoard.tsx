@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, ApiError } from "@/lib/client/api";
 import { isConflict, withQueryClient } from "@/lib/client/query";
 import type { MakeupEntry } from "@/lib/contracts/library";
@@ -7,6 +7,7 @@ import type { OptionEntry } from "@/lib/contracts/options";
 import { FormMessage } from "@/components/forms/Field";
 import RequirementsEditor from "./RequirementsEditor";
 import MakeupSection from "@/components/glazing/MakeupSection";
+import ChangeMakeup, { type Library, type Repointed } from "./ChangeMakeup";
 
 interface FacadeRef {
   id: string;
@@ -42,15 +43,45 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
     queryKey: ["options", projectId],
     queryFn: () => api<{ options: OptionEntry[] }>("GET", `/api/v1/projects/${projectId}/options`),
   });
-  const library = useQuery({
+  // The organisation's library, a page of 100 make-ups at a time (by name); more pages on request.
+  const pages = useInfiniteQuery({
     queryKey: ["makeups", organizationId],
-    queryFn: () => api<{ items: MakeupEntry[]; nextCursor: string | null }>("GET", `/api/v1/orgs/${organizationId}/makeups?limit=100`),
+    initialPageParam: null as string | null,
+    queryFn: ({ pageParam }) =>
+      api<{ items: MakeupEntry[]; nextCursor: string | null }>(
+        "GET",
+        `/api/v1/orgs/${organizationId}/makeups?limit=100${pageParam ? `&cursor=${encodeURIComponent(pageParam)}` : ""}`,
+      ),
+    getNextPageParam: (last) => last.nextCursor,
     enabled: canAssign,
   });
+  const library: Library = {
+    items: pages.data?.pages.flatMap((p) => p.items),
+    isError: pages.isError,
+    hasMore: pages.hasNextPage,
+    loadingMore: pages.isFetchingNextPage,
+    loadMore: () => void pages.fetchNextPage(),
+  };
   const [failure, setFailure] = useState<{ text: string; conflict: boolean } | null>(null);
+  /** The option whose make-up is being changed, and the last change made (shown in its façade's card). */
+  const [choosing, setChoosing] = useState<string | null>(null);
+  const [notice, setNotice] = useState<{ facadeId: string; text: string } | null>(null);
   const onError = (err: unknown) => setFailure({ text: problemText(err), conflict: isConflict(err) });
+  const focusLater = (id: string) => requestAnimationFrame(() => document.getElementById(id)?.focus());
+  const closeChooser = (optionId: string) => {
+    setChoosing(null);
+    focusLater(`change-open-${optionId}`);
+  };
+  const repointed = ({ option, approvalWithdrawn }: Repointed) => {
+    setNotice({
+      facadeId: option.facadeId,
+      text: `“${option.name}” now uses ${option.makeupName}, revision ${option.makeupRevision}.${approvalWithdrawn ? " Its approval was withdrawn: it is under review again." : ""}`,
+    });
+    closeChooser(option.id);
+  };
   const refresh = () => {
     setFailure(null);
+    setNotice(null);
     void qc.invalidateQueries({ queryKey: ["options", projectId] });
     void qc.invalidateQueries({ queryKey: ["results", projectId] });
   };
@@ -95,6 +126,7 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
       <ol className="space-y-4" aria-label="Façades and their options">
         {facades.map((f, i) => {
           const mine = all.filter((o) => o.facadeId === f.id);
+          const chooserFor = mine.find((o) => o.id === choosing);
           return (
             <li key={f.id} className="card space-y-3" data-testid="facade-options" data-facade={f.name}>
               <div className="flex flex-wrap items-baseline gap-x-3">
@@ -105,6 +137,7 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                   faces {f.azimuthDeg}° · tilt {f.tiltDeg}°
                 </span>
               </div>
+              {notice?.facadeId === f.id && <FormMessage kind="ok">{notice.text}</FormMessage>}
               {mine.length === 0 ? (
                 <p className="text-sm text-slate">No options yet{canAssign ? ": add one from the library below." : "."}</p>
               ) : (
@@ -145,6 +178,21 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                                   )}
                                 </div>
                               )}
+                              {canAssign && (
+                                <button
+                                  type="button"
+                                  id={`change-open-${o.id}`}
+                                  className="mt-1 text-xs underline"
+                                  aria-expanded={choosing === o.id}
+                                  aria-controls={choosing === o.id ? `change-${o.id}` : undefined}
+                                  onClick={() => {
+                                    setNotice(null);
+                                    setChoosing(choosing === o.id ? null : o.id);
+                                  }}
+                                >
+                                  Choose another make-up<span className="sr-only"> for {o.name}</span>
+                                </button>
+                              )}
                             </td>
                             <td className="pr-3 text-right tabular-nums" data-value="solarTransmittance">
                               {fixed(o.values.normal.solarTransmittance)}
@@ -184,9 +232,21 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                   </table>
                 </div>
               )}
-              {canAssign && (
-                <AddOption projectId={projectId} facade={f} library={library.data?.items} libraryError={library.isError} onAdded={refresh} />
+              {canAssign && chooserFor && (
+                <div id={`change-${chooserFor.id}`}>
+                  <ChangeMakeup
+                    key={chooserFor.id}
+                    projectId={projectId}
+                    option={chooserFor}
+                    facadeName={f.name}
+                    library={library}
+                    onDone={repointed}
+                    onCancel={() => closeChooser(chooserFor.id)}
+                    onReload={refresh}
+                  />
+                </div>
               )}
+              {canAssign && <AddOption projectId={projectId} facade={f} library={library} onAdded={refresh} />}
             </li>
           );
         })}
@@ -196,8 +256,9 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
   );
 }
 
-function AddOption(props: { projectId: string; facade: FacadeRef; library: MakeupEntry[] | undefined; libraryError: boolean; onAdded: () => void }) {
-  const { projectId, facade, library } = props;
+function AddOption(props: { projectId: string; facade: FacadeRef; library: Library; onAdded: () => void }) {
+  const { projectId, facade } = props;
+  const library = props.library.items;
   const [makeupId, setMakeupId] = useState("");
   const [name, setName] = useState("");
   const [error, setError] = useState<string | null>(null);
@@ -211,7 +272,7 @@ function AddOption(props: { projectId: string; facade: FacadeRef; library: Makeu
     },
     onError: (err) => setError(problemText(err)),
   });
-  if (props.libraryError) return <p className="text-sm text-alert">The library could not be loaded.</p>;
+  if (props.library.isError) return <p className="text-sm text-alert">The library could not be loaded.</p>;
   if (!library) return <p className="text-sm text-slate">Loading the library…</p>;
   if (library.length === 0)
     return (
@@ -254,6 +315,11 @@ function AddOption(props: { projectId: string; facade: FacadeRef; library: Makeu
         <span className="font-bold text-slate">Option name</span>
         <input id={`${idBase}-name`} value={name} maxLength={120} onChange={(e) => setName(e.target.value)} />
       </label>
+      {props.library.hasMore && (
+        <button type="button" className="btn-quiet text-sm" disabled={props.library.loadingMore} onClick={props.library.loadMore}>
+          {props.library.loadingMore ? "Loading more…" : "More make-ups from the library"}
+        </button>
+      )}
       <button type="submit" className="btn" disabled={add.isPending}>
         {add.isPending ? "Adding…" : "Add option"}
       </button>

@@ -23,6 +23,11 @@ const toLimits = (row: Partial<Record<RequirementKey, string>> = {}) =>
     REQUIREMENT_KEYS.filter((k) => (row[k] ?? "").trim() !== "").map((k) => [k, Number((row[k] ?? "").trim().replace(",", "."))]),
   ) as Limits;
 
+const draftOf = (entry: Entry): Draft => ({
+  [PROJECT]: toDraft(entry.project),
+  ...Object.fromEntries(Object.entries(entry.facades).map(([id, l]) => [id, toDraft(l)])),
+});
+
 /** The brief's limits: one row for the project and an optional row of overrides per façade. */
 export default function RequirementsEditor(props: { projectId: string; facades: { id: string; name: string }[]; canEdit: boolean }) {
   const q = useQuery({
@@ -31,19 +36,24 @@ export default function RequirementsEditor(props: { projectId: string; facades: 
   });
   if (q.isPending) return <p className="text-sm text-slate">Loading the requirements…</p>;
   if (q.isError) return <FormMessage kind="error">The requirements could not be loaded.</FormMessage>;
-  // A new version read from the server starts the form afresh.
-  return <RequirementsForm key={q.data.version} {...props} entry={q.data} reload={() => void q.refetch()} />;
+  // One form for the page's life: a new version from the server resets its fields (RequirementsForm), so the
+  // confirmation of a save and the keyboard focus survive the save.
+  return <RequirementsForm {...props} entry={q.data} reload={() => void q.refetch()} />;
 }
 
 function RequirementsForm(props: { projectId: string; facades: { id: string; name: string }[]; canEdit: boolean; entry: Entry; reload: () => void }) {
   const { projectId, facades, canEdit, entry } = props;
   const qc = useQueryClient();
-  const [draft, setDraft] = useState<Draft>(() => ({
-    [PROJECT]: toDraft(entry.project),
-    ...Object.fromEntries(Object.entries(entry.facades).map(([id, l]) => [id, toDraft(l)])),
-  }));
+  const [draft, setDraft] = useState<Draft>(() => draftOf(entry));
   const [errors, setErrors] = useState<string[]>([]);
   const [saved, setSaved] = useState(false);
+  // A new version read from the server (this form's save, or a reload after a stale save) starts the fields
+  // afresh from it; the messages of the save stay as the save left them.
+  const [shownVersion, setShownVersion] = useState(entry.version);
+  if (entry.version !== shownVersion) {
+    setShownVersion(entry.version);
+    setDraft(draftOf(entry));
+  }
   const save = useMutation({
     mutationFn: (body: unknown) => api<Entry>("PUT", `/api/v1/projects/${projectId}/requirements`, body),
     onSuccess: (data) => {
@@ -52,7 +62,10 @@ function RequirementsForm(props: { projectId: string; facades: { id: string; nam
       setErrors([]);
       setSaved(true);
     },
-    onError: (err) => setErrors([err instanceof ApiError ? err.message : "The requirements could not be saved."]),
+    onError: (err) => {
+      setSaved(false);
+      setErrors([err instanceof ApiError ? err.message : "The requirements could not be saved."]);
+    },
   });
   const rows = [{ id: PROJECT, name: "Whole project" }, ...facades];
   const set = (row: string, k: RequirementKey, v: string) => {
@@ -92,7 +105,15 @@ function RequirementsForm(props: { projectId: string; facades: { id: string; nam
             ))}
           </ul>
           {save.error && isConflict(save.error) && (
-            <button type="button" className="underline" onClick={props.reload}>
+            <button
+              type="button"
+              className="underline"
+              onClick={() => {
+                setErrors([]);
+                save.reset();
+                props.reload();
+              }}
+            >
               Reload the requirements
             </button>
           )}
