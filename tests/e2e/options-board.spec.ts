@@ -7,6 +7,7 @@ import { expect, test, type Browser, type Page } from "@playwright/test";
 import type { OptionEntry } from "@/lib/contracts/options";
 import { call, signInDemo, type Caller } from "./api-actors";
 import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+import { lightText, makeupLight } from "@/lib/calc/makeup-light";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow, tintedPane } from "./workspace-rows";
 
 const stamp = Date.now().toString(36);
@@ -77,7 +78,7 @@ async function expectRowShows(page: Page, facade: string, o: OptionEntry) {
   await expect(row.locator('[data-value="gValue"]')).toHaveText(o.values.normal.gValue.toFixed(2));
   await expect(row.locator('[data-value="uValue"]')).toHaveText(o.values.uValue.toFixed(2));
   await expect(row.locator('[data-value="solarTransmittance"]')).toHaveText(o.values.normal.solarTransmittance.toFixed(2));
-  await expect(row.locator('[data-value="visibleTransmittance"]')).toHaveText(o.values.normal.visibleTransmittance?.toFixed(2) ?? "—");
+  await expect(row.locator('[data-value="visibleTransmittance"]')).toHaveText(lightText(makeupLight(o.values)));
 }
 
 test("the consultant points an option at another make-up and the board shows its description and values", async ({ browser }) => {
@@ -200,6 +201,23 @@ test("the requirements editor keeps its saved message after saving; a stale save
   expect(await version()).toBe(3);
   await page.reload();
   await expect(gLimit).toHaveValue("0.45");
+});
+
+test("removing an option asks in the page first and keeps everything until confirmed", async ({ browser }) => {
+  const page = await phone(browser);
+  const south = card(page, "South");
+  await south.getByRole("button", { name: "Remove C: clear" }).click();
+  const ask = south.getByTestId("option-confirm");
+  await expect(ask).toContainText("Remove the option “C: clear” from South? Its comments and decisions go with it");
+  await expect(ask.getByRole("button", { name: "Remove the option" })).toBeFocused();
+  expect(await overflow(page)).toBe(0);
+  await ask.getByRole("button", { name: "Keep it as it is" }).click();
+  await expect(south.getByTestId("option-confirm")).toHaveCount(0);
+  expect((await optionsNow()).some((o) => o.id === ids.stale)).toBe(true);
+  await south.getByRole("button", { name: "Remove C: clear" }).click();
+  await south.getByTestId("option-confirm").getByRole("button", { name: "Remove the option" }).click();
+  await expect(south.locator('tr[data-option="C: clear"]')).toHaveCount(0);
+  expect((await optionsNow()).some((o) => o.id === ids.stale)).toBe(false);
 });
 
 test("architects see the options but no way to re-point them", async ({ browser }) => {

@@ -5,6 +5,7 @@ import { isConflict } from "@/lib/client/query";
 import type { MakeupEntry } from "@/lib/contracts/library";
 import { OptionPatchRequest, type OptionEntry } from "@/lib/contracts/options";
 import MakeupSection from "@/components/glazing/MakeupSection";
+import { lightText, makeupLight } from "@/lib/calc/makeup-light";
 
 export interface Library {
   items: MakeupEntry[] | undefined;
@@ -169,7 +170,7 @@ export default function ChangeMakeup(props: {
           </div>
           <div className="tabular-nums text-slate">
             τe {fixed(chosen.values.normal.solarTransmittance)} · g {fixed(chosen.values.normal.gValue)} · U {fixed(chosen.values.uValue)} W/m²K · τv{" "}
-            {fixed(chosen.values.normal.visibleTransmittance)}
+            {lightText(makeupLight(chosen.values))}
           </div>
         </div>
       )}

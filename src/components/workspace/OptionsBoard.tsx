@@ -8,6 +8,7 @@ import { FormMessage } from "@/components/forms/Field";
 import RequirementsEditor from "./RequirementsEditor";
 import MakeupSection from "@/components/glazing/MakeupSection";
 import ChangeMakeup, { type Library, type Repointed } from "./ChangeMakeup";
+import { lightText, makeupLight } from "@/lib/calc/makeup-light";
 
 interface FacadeRef {
   id: string;
@@ -66,6 +67,8 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
   /** The option whose make-up is being changed, and the last change made (shown in its façade's card). */
   const [choosing, setChoosing] = useState<string | null>(null);
   const [notice, setNotice] = useState<{ facadeId: string; text: string } | null>(null);
+  /** An action waiting for the consultant's yes in the façade's card: removing an option, or moving an approved one to its newest revision. */
+  const [asking, setAsking] = useState<{ option: OptionEntry; action: "remove" | "newest" } | null>(null);
   const onError = (err: unknown) => setFailure({ text: problemText(err), conflict: isConflict(err) });
   const focusLater = (id: string) => requestAnimationFrame(() => document.getElementById(id)?.focus());
   const closeChooser = (optionId: string) => {
@@ -171,7 +174,12 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                                 <div className="mt-1 text-xs text-alert">
                                   The library holds revision {o.latestMakeupRevision} now.{" "}
                                   {canAssign && (
-                                    <button type="button" className="underline" disabled={repoint.isPending} onClick={() => repoint.mutate(o)}>
+                                    <button
+                                      type="button"
+                                      className="underline"
+                                      disabled={repoint.isPending}
+                                      onClick={() => (o.status === "approved" ? setAsking({ option: o, action: "newest" }) : repoint.mutate(o))}
+                                    >
                                       Use revision {o.latestMakeupRevision}
                                       {o.status === "approved" ? " (withdraws the approval)" : ""}
                                     </button>
@@ -204,7 +212,7 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                               {fixed(o.values.uValue)}
                             </td>
                             <td className="pr-3 text-right tabular-nums" data-value="visibleTransmittance">
-                              {fixed(o.values.normal.visibleTransmittance)}
+                              {lightText(makeupLight(o.values))}
                             </td>
                             <td className="pr-3">
                               <span className={`rounded border px-1.5 py-0.5 text-xs ${STATUS_STYLE[o.status]}`}>{STATUS_LABEL[o.status]}</span>
@@ -215,13 +223,9 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                                   type="button"
                                   className="btn-quiet text-xs"
                                   disabled={remove.isPending}
-                                  onClick={() => {
-                                    const warn = o.status === "approved" ? " It is the approved option of this façade." : "";
-                                    if (window.confirm(`Remove the option “${o.name}” from ${f.name}?${warn} Its comments go with it.`))
-                                      remove.mutate(o);
-                                  }}
+                                  onClick={() => setAsking({ option: o, action: "remove" })}
                                 >
-                                  Remove
+                                  Remove<span className="sr-only"> {o.name}</span>
                                 </button>
                               </td>
                             )}
@@ -230,6 +234,34 @@ function OptionsBoard({ projectId, organizationId, facades, canAssign }: Props) 
                       })}
                     </tbody>
                   </table>
+                </div>
+              )}
+              {canAssign && asking && asking.option.facadeId === f.id && (
+                <div className="notice space-y-2" role="alertdialog" aria-labelledby={`ask-${asking.option.id}`} data-testid="option-confirm">
+                  <p id={`ask-${asking.option.id}`}>
+                    {asking.action === "remove"
+                      ? `Remove the option “${asking.option.name}” from ${f.name}? Its comments and decisions go with it${asking.option.status === "approved" ? "; it is the approved option of this façade, so the façade will have none" : ""}. Issued revisions keep their copy.`
+                      : `Move “${asking.option.name}” to revision ${asking.option.latestMakeupRevision} of its make-up? Its approval is withdrawn: the architect reviews it again.`}
+                  </p>
+                  <div className="flex flex-wrap gap-2">
+                    <button
+                      type="button"
+                      className={asking.action === "remove" ? "btn-danger" : "btn"}
+                      autoFocus
+                      disabled={remove.isPending || repoint.isPending}
+                      onClick={() => {
+                        const { option, action } = asking;
+                        setAsking(null);
+                        if (action === "remove") remove.mutate(option);
+                        else repoint.mutate(option);
+                      }}
+                    >
+                      {asking.action === "remove" ? "Remove the option" : "Withdraw the approval and move"}
+                    </button>
+                    <button type="button" className="btn-quiet" onClick={() => setAsking(null)}>
+                      Keep it as it is
+                    </button>
+                  </div>
                 </div>
               )}
               {canAssign && chooserFor && (
