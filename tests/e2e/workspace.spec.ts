@@ -166,3 +166,32 @@ test("the workspace pages have no horizontal overflow at 390 px", async ({ brows
     expect(await overflow(page), path).toBe(0);
   }
 });
+
+/** The on-screen size of the smallest chart label of the page (SVG text scaled by its drawing), px. */
+const smallestChartLabel = (page: Page) =>
+  page.evaluate(() => {
+    let smallest = Infinity;
+    for (const t of document.querySelectorAll<SVGTextElement>("main svg text")) {
+      const m = t.getScreenCTM();
+      if (!m || !t.textContent?.trim() || t.getBoundingClientRect().width === 0) continue;
+      smallest = Math.min(smallest, Number.parseFloat(getComputedStyle(t).fontSize) * Math.hypot(m.a, m.b));
+    }
+    return smallest;
+  });
+
+test("chart and drawing labels are at least 10 px at 390 px wide", async ({ browser }) => {
+  const page = await as(browser, "consultant", 390);
+  await page.goto("/glazing");
+  await expect(page.getByTestId("g-normal")).toBeVisible();
+  expect(await smallestChartLabel(page), "/glazing").toBeGreaterThanOrEqual(10);
+  await page.goto(`/projects/${projectId}/sun`);
+  await page.getByRole("button", { name: "Calculate the year" }).click();
+  await expect(page.getByTestId("daily-profile").or(page.getByTestId("heatmap")).first()).toBeVisible();
+  expect(await smallestChartLabel(page), "sun page").toBeGreaterThanOrEqual(10);
+  await page.goto(`/projects/${projectId}/results`);
+  await page.mouse.wheel(0, 4000);
+  await page.waitForTimeout(500);
+  expect(await smallestChartLabel(page), "results page").toBeGreaterThanOrEqual(10);
+  await page.goto(`/projects/${projectId}/edit`);
+  expect(await smallestChartLabel(page), "project form plan").toBeGreaterThanOrEqual(10);
+});

@@ -1,5 +1,6 @@
 import { useEffect, useMemo, useRef } from "react";
 import { interpolateYlOrRd, scaleSequential } from "d3";
+import { useWidth } from "@/components/charts/useWidth";
 
 export interface HeatCell {
   /** index of the day in the period (x) */
@@ -21,13 +22,18 @@ interface Props {
   onSelectDay: (day: number) => void;
 }
 
-const W = 760;
+const MAX_W = 760;
 const H = 300;
+/** Day labels closer than this are thinned out (px). */
+const LABEL_GAP = 44;
 const M = { top: 8, right: 64, bottom: 28, left: 40 };
 
 /** Day of period (x) × local hour (y) heat map on a canvas, with a colour key. Click picks a day. */
 export default function ScheduleHeatmap({ cells, dayCount, dayLabels, max, stepHours, unit, title, selectedDay, onSelectDay }: Props) {
   const ref = useRef<HTMLCanvasElement>(null);
+  // Drawn at its real width so that its 11 px labels stay 11 px on a phone.
+  const [box, boxWidth] = useWidth<HTMLElement>(MAX_W);
+  const W = Math.min(MAX_W, boxWidth);
   const color = useMemo(() => scaleSequential(interpolateYlOrRd).domain([0, max > 0 ? max : 1]), [max]);
   const pw = W - M.left - M.right;
   const ph = H - M.top - M.bottom;
@@ -61,7 +67,13 @@ export default function ScheduleHeatmap({ cells, dayCount, dayLabels, max, stepH
     g.textAlign = "right";
     for (let h = 0; h <= 24; h += 6) g.fillText(`${String(h).padStart(2, "0")}:00`, M.left - 4, M.top + (h / 24) * ph + 4);
     g.textAlign = "center";
-    for (const l of dayLabels) g.fillText(l.label, M.left + (l.day + 0.5) * cw, H - 10);
+    let lastX = -Infinity;
+    for (const l of dayLabels) {
+      const x = M.left + (l.day + 0.5) * cw;
+      if (x - lastX < LABEL_GAP) continue;
+      g.fillText(l.label, x, H - 10);
+      lastX = x;
+    }
     // colour key
     const kx = W - M.right + 16;
     for (let i = 0; i < ph; i++) {
@@ -73,14 +85,14 @@ export default function ScheduleHeatmap({ cells, dayCount, dayLabels, max, stepH
     g.fillText(max.toFixed(max < 2 ? 2 : 0), kx + 14, M.top + 8);
     g.fillText("0", kx + 14, M.top + ph);
     g.fillText(unit, kx - 2, H - 10);
-  }, [cells, color, dayCount, dayLabels, max, ph, pw, selectedDay, stepHours, unit]);
+  }, [W, cells, color, dayCount, dayLabels, max, ph, pw, selectedDay, stepHours, unit]);
 
   return (
-    <figure className="space-y-1">
+    <figure className="min-w-0 space-y-1" ref={box}>
       <figcaption className="text-sm font-bold">{title}</figcaption>
       <canvas
         ref={ref}
-        style={{ width: "100%", maxWidth: W, aspectRatio: `${W} / ${H}` }}
+        style={{ width: W, height: H }}
         role="img"
         aria-label={`${title}: days across, local time of day down`}
         data-testid="heatmap"

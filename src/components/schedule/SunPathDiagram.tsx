@@ -3,6 +3,7 @@ import { line, scaleLinear } from "d3";
 import { sunPositionSuncalc } from "@/lib/physics/sun-position";
 import { localTimeline } from "@/lib/time/local-timeline";
 import { compassPoint } from "@/lib/format";
+import { useWidth } from "@/components/charts/useWidth";
 
 interface Props {
   latitudeDeg: number;
@@ -13,6 +14,9 @@ interface Props {
 }
 
 const R = 150;
+const VIEW_W = 2 * R + 80;
+/** The smallest label on screen, px (half a pixel above 10 for the rounding of the measured width). */
+const MIN_LABEL_PX = 10.5;
 const FACADE_COLORS = ["#0f4c5c", "#7a3e9d", "#c2410c", "#4d7c0f", "#9f1239", "#1d4ed8", "#0e7490", "#a16207"];
 const DAYS = [
   { md: "06-21", label: "21 Jun", color: "#c2410c" },
@@ -26,6 +30,10 @@ const DAYS = [
  */
 export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, year, facades }: Props) {
   const r = scaleLinear().domain([90, 0]).range([0, R]);
+  // The drawing scales with its box; labels are sized so that none is drawn smaller than 10 px.
+  const [box, boxWidth] = useWidth<HTMLElement>(VIEW_W);
+  const k = VIEW_W / Math.min(448, boxWidth);
+  const font = (px: number) => Math.max(px, MIN_LABEL_PX * k);
   const xy = (altDeg: number, azDeg: number) => {
     const rad = (azDeg * Math.PI) / 180;
     const rr = r(Math.max(0, altDeg));
@@ -57,7 +65,7 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
     .x((p) => p[0])
     .y((p) => p[1]);
   return (
-    <figure className="space-y-2">
+    <figure className="space-y-2" ref={box}>
       <svg
         viewBox={`${-R - 40} ${-R - 30} ${2 * R + 80} ${2 * R + 60}`}
         className="w-full max-w-md"
@@ -68,7 +76,7 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
         {[0, 30, 60].map((a) => (
           <g key={a}>
             <circle r={r(a)} fill={a === 0 ? "#fff" : "none"} stroke="#ddd8cc" />
-            <text x={4} y={-r(a) + 12} fontSize="10" fill="#4a5a66">
+            <text x={4} y={-r(a) + 12} fontSize={font(10)} fill="#4a5a66">
               {a}°
             </text>
           </g>
@@ -79,7 +87,7 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
           return (
             <g key={az}>
               <line x1={0} y1={0} x2={x} y2={y} stroke="#ddd8cc" strokeDasharray="2 3" />
-              <text x={lx} y={ly + 4} textAnchor="middle" fontSize="11" fontWeight={az % 90 === 0 ? 700 : 400} fill="#4a5a66">
+              <text x={lx} y={ly + 4} textAnchor="middle" fontSize={font(11)} fontWeight={az % 90 === 0 ? 700 : 400} fill="#4a5a66">
                 {compassPoint(az)}
               </text>
             </g>
@@ -105,7 +113,7 @@ export default function SunPathDiagram({ latitudeDeg, longitudeDeg, timeZone, ye
               <g key={h.h}>
                 <circle cx={h.x} cy={h.y} r={2.5} fill={p.color} />
                 {p.md === "06-21" && (
-                  <text x={h.x} y={h.y - 6} textAnchor="middle" fontSize="9" fill="#4a5a66">
+                  <text x={h.x} y={h.y - 6} textAnchor="middle" fontSize={font(10)} fill="#4a5a66">
                     {h.h}
                   </text>
                 )}
