@@ -232,8 +232,16 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
   const [confirming, setConfirming] = useState<string | null>(null);
   const keepButton = useRef<HTMLButtonElement>(null);
   const addButton = useRef<HTMLButtonElement>(null);
+  /** The rows' Remove buttons by field key (the keys differ between the server's markup and the browser's). */
+  const removeButtons = useRef(new Map<string, HTMLButtonElement>());
+  /** Where the focus goes once the question is answered: the row's Remove button, or Add a façade. */
+  const focusAfter = useRef<HTMLElement | null>(null);
   useEffect(() => {
     if (confirming) keepButton.current?.focus();
+    else if (focusAfter.current) {
+      focusAfter.current.focus();
+      focusAfter.current = null;
+    }
   }, [confirming]);
   const optionsOf = (i: number) => {
     const id = watchedFacades[i]?.id;
@@ -241,12 +249,14 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
   };
   const removeRow = (i: number) => {
     facades.remove(i);
-    setConfirming(null);
-    addButton.current?.focus();
+    if (confirming) {
+      focusAfter.current = addButton.current;
+      setConfirming(null);
+    } else addButton.current?.focus();
   };
   const keepRow = (key: string) => {
+    focusAfter.current = removeButtons.current.get(key) ?? null;
     setConfirming(null);
-    document.getElementById(`remove-${key}`)?.focus();
   };
 
   const onSubmit = handleSubmit(async (v) => {
@@ -416,7 +426,10 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
               </Field>
               <button
                 type="button"
-                id={`remove-${f.id}`}
+                ref={(el) => {
+                  if (el) removeButtons.current.set(f.id, el);
+                  else removeButtons.current.delete(f.id);
+                }}
                 className="btn-quiet mb-0.5"
                 onClick={() => (optionsOf(i) > 0 ? setConfirming(f.id) : removeRow(i))}
                 aria-label={`Remove façade ${i + 1}`}
@@ -428,13 +441,13 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                 <div
                   className="notice col-span-full"
                   role="alertdialog"
-                  aria-labelledby={`confirm-${f.id}`}
+                  aria-labelledby={`confirm-facade-${i}`}
                   data-testid="remove-facade-confirmation"
                   onKeyDown={(ev) => {
                     if (ev.key === "Escape") keepRow(f.id);
                   }}
                 >
-                  <p id={`confirm-${f.id}`}>
+                  <p id={`confirm-facade-${i}`}>
                     Remove façade {i + 1}
                     {watchedFacades[i]?.name ? ` (${watchedFacades[i]!.name})` : ""}? Its{" "}
                     {optionsOf(i) === 1 ? "glazing option goes" : `${optionsOf(i)} glazing options go`} with it, with their comments and decisions,
