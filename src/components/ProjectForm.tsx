@@ -1,5 +1,5 @@
-import { useMemo, useState } from "react";
-import { useFieldArray, useForm, useWatch } from "react-hook-form";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { useFieldArray, useForm, useWatch, type FieldErrors, type UseFormRegister, type UseFormSetValue } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import type { z } from "zod";
 import { ProjectCreateRequest, SKY_MODEL_LABELS, SKY_MODELS } from "@/lib/contracts/projects";
@@ -17,6 +17,8 @@ interface Props {
   defaultOrganizationId: string;
   /** Edit mode: the project as stored, with its façades. */
   project?: Omit<Input, "organizationId"> & { id: string };
+  /** Edit mode: glazing options per façade id (absent = none); removing such a façade asks first. */
+  optionCounts?: Record<string, number>;
 }
 
 const FIELDS = [
@@ -44,11 +46,162 @@ const monthlyValues = (v: unknown) => {
   return text.split(/[\s,;]+/).map((x) => Number(x.replace(",", ".")));
 };
 
-export default function ProjectForm({ organizations, defaultOrganizationId, project }: Props) {
+/** An empty number field of a shading device: absent (an optional value) or left for the schema to name (a required one). */
+const numberOrAbsent = (v: unknown) => (v === "" || v === null || v === undefined ? undefined : Number(v));
+
+/** The server's names of a façade's shading fields, as the form registers them. */
+const SHADING_PATHS = [
+  "shading.overhang.depthM",
+  "shading.overhang.gapAboveM",
+  "shading.overhang.extensionLeftM",
+  "shading.overhang.extensionRightM",
+  "shading.fins.depthM",
+  "shading.fins.gapM",
+  "shading.horizonDeg",
+] as const;
+
+/** A shading field's message in its row: "Façade 2: overhang depth (m) must be …". */
+const inRow = (i: number, error: { message?: string } | undefined) =>
+  error?.message ? { message: `Façade ${i + 1}: ${error.message.charAt(0).toLowerCase()}${error.message.slice(1)}` } : undefined;
+
+/** Every message under an error object (the devices of a façade whose window is not given are hidden). */
+function messagesOf(error: unknown): string[] {
+  if (!error || typeof error !== "object") return [];
+  const e = error as { message?: unknown };
+  if (typeof e.message === "string") return [e.message];
+  return Object.entries(error).flatMap(([k, v]) => (k === "ref" ? [] : messagesOf(v)));
+}
+
+const isSize = (v: unknown) => typeof v === "number" && Number.isFinite(v) && v > 0;
+
+type Facade = NonNullable<Input["facades"]>[number];
+
+/** The overhang, fins and horizon of one façade, around its typical window. */
+function ShadingDevices({
+  i,
+  facade,
+  register,
+  setValue,
+  errors,
+}: {
+  i: number;
+  facade: Facade | undefined;
+  register: UseFormRegister<Input>;
+  setValue: UseFormSetValue<Input>;
+  errors: FieldErrors<Input>;
+}) {
+  const shading = facade?.shading ?? {};
+  const hasWindow = isSize(facade?.windowWidthM) && isSize(facade?.windowHeightM);
+  const e = errors.facades?.[i]?.shading;
+  const id = (path: string) => `facades.${i}.shading.${path}`;
+  const toggle = (device: "overhang" | "fins" | "horizonDeg", on: boolean) => {
+    const start = { overhang: { depthM: undefined, gapAboveM: 0 }, fins: { depthM: undefined, gapM: 0 }, horizonDeg: undefined }[device];
+    // A device switched off is absent from what is sent, not an empty object.
+    const { [device]: _old, ...others } = shading;
+    setValue(`facades.${i}.shading`, (on ? { ...others, [device]: start } : others) as never, { shouldDirty: true });
+  };
+  const has = { overhang: shading.overhang != null, fins: shading.fins != null, horizonDeg: "horizonDeg" in shading };
+  const saved = [has.overhang && "an overhang", has.fins && "side fins", shading.horizonDeg != null && "a horizon angle"].filter(Boolean);
+  const number = (path: (typeof SHADING_PATHS)[number]) =>
+    register(`facades.${i}.${path}` as `facades.${number}.shading.horizonDeg`, { setValueAs: numberOrAbsent });
+
+  return (
+    <fieldset className="col-span-full min-w-0 rounded border border-line px-3 pb-3" data-testid="shading-devices">
+      <legend className="px-1 text-sm font-bold text-slate">Shading devices</legend>
+      {!hasWindow ? (
+        <div className="text-xs text-slate" data-testid="shading-needs-window">
+          <p>
+            Shading devices count only once the façade has a typical window (width and height): give both above to add an overhang, fins or a horizon
+            angle.
+          </p>
+          {saved.length > 0 && <p className="mt-1">The saved {saved.join(", ")} stay with the façade and count again once the window is given.</p>}
+          {messagesOf(e).map((m) => (
+            <p key={m} className="field-error" role="alert">
+              {inRow(i, { message: m })!.message}
+            </p>
+          ))}
+        </div>
+      ) : (
+        <div className="space-y-3">
+          <div className="flex flex-wrap gap-x-5 gap-y-1">
+            {(
+              [
+                ["overhang", "Overhang above"],
+                ["fins", "Side fins"],
+                ["horizonDeg", "Horizon obstruction"],
+              ] as const
+            ).map(([device, label]) => (
+              <label key={device} className="flex items-center gap-2 font-normal text-ink">
+                <input type="checkbox" className="mt-0 w-auto" checked={has[device]} onChange={(ev) => toggle(device, ev.target.checked)} />
+                {label}
+              </label>
+            ))}
+          </div>
+          {has.overhang && (
+            <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+              <Field label="Overhang depth m" htmlFor={id("overhang.depthM")} error={inRow(i, e?.overhang?.depthM)}>
+                <input id={id("overhang.depthM")} type="number" step="any" min="0" {...number("shading.overhang.depthM")} />
+              </Field>
+              <Field label="Gap above window m" htmlFor={id("overhang.gapAboveM")} error={inRow(i, e?.overhang?.gapAboveM)}>
+                <input id={id("overhang.gapAboveM")} type="number" step="any" min="0" {...number("shading.overhang.gapAboveM")} />
+              </Field>
+              <Field label="Runs past left m" htmlFor={id("overhang.extensionLeftM")} error={inRow(i, e?.overhang?.extensionLeftM)}>
+                <input
+                  id={id("overhang.extensionLeftM")}
+                  type="number"
+                  step="any"
+                  min="0"
+                  placeholder="very long"
+                  {...number("shading.overhang.extensionLeftM")}
+                />
+              </Field>
+              <Field label="Runs past right m" htmlFor={id("overhang.extensionRightM")} error={inRow(i, e?.overhang?.extensionRightM)}>
+                <input
+                  id={id("overhang.extensionRightM")}
+                  type="number"
+                  step="any"
+                  min="0"
+                  placeholder="very long"
+                  {...number("shading.overhang.extensionRightM")}
+                />
+              </Field>
+              <p className="col-span-full text-xs text-slate">
+                How far the overhang runs past each side of the window; leave empty for one that runs far past both sides.
+              </p>
+            </div>
+          )}
+          {has.fins && (
+            <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+              <Field label="Fin depth m" htmlFor={id("fins.depthM")} error={inRow(i, e?.fins?.depthM)}>
+                <input id={id("fins.depthM")} type="number" step="any" min="0" {...number("shading.fins.depthM")} />
+              </Field>
+              <Field label="Gap from window edge m" htmlFor={id("fins.gapM")} error={inRow(i, e?.fins?.gapM)}>
+                <input id={id("fins.gapM")} type="number" step="any" min="0" {...number("shading.fins.gapM")} />
+              </Field>
+              <p className="col-span-2 self-center text-xs text-slate">One fin on each side of the window, as tall as the window.</p>
+            </div>
+          )}
+          {has.horizonDeg && (
+            <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+              <Field label="Horizon angle °" htmlFor={id("horizonDeg")} error={inRow(i, e?.horizonDeg)}>
+                <input id={id("horizonDeg")} type="number" step="any" min="0" max="89" {...number("shading.horizonDeg")} />
+              </Field>
+              <p className="col-span-1 self-center text-xs text-slate sm:col-span-3">
+                Buildings or terrain in front of the window, in degrees above the horizontal.
+              </p>
+            </div>
+          )}
+        </div>
+      )}
+    </fieldset>
+  );
+}
+
+export default function ProjectForm({ organizations, defaultOrganizationId, project, optionCounts = {} }: Props) {
   const hydrated = useHydrated();
   const [failure, setFailure] = useState<string | null>(null);
   const zones = useMemo(() => (typeof Intl.supportedValuesOf === "function" ? Intl.supportedValuesOf("timeZone") : []), []);
-  const { register, handleSubmit, control, formState, setError } = useForm<Input, unknown, Output>({
+  const { register, handleSubmit, control, formState, setError, setValue } = useForm<Input, unknown, Output>({
     resolver: zodResolver(ProjectCreateRequest),
     defaultValues: project
       ? { organizationId: defaultOrganizationId, ...project }
@@ -75,6 +228,36 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
   const facades = useFieldArray({ control, name: "facades" });
   const watchedFacades = useWatch({ control, name: "facades" }) ?? [];
   const errors = formState.errors;
+  /** The row (by its field key) whose removal waits for the consultant's yes, because options go with it. */
+  const [confirming, setConfirming] = useState<string | null>(null);
+  const keepButton = useRef<HTMLButtonElement>(null);
+  const addButton = useRef<HTMLButtonElement>(null);
+  /** The rows' Remove buttons by field key (the keys differ between the server's markup and the browser's). */
+  const removeButtons = useRef(new Map<string, HTMLButtonElement>());
+  /** Where the focus goes once the question is answered: the row's Remove button, or Add a façade. */
+  const focusAfter = useRef<HTMLElement | null>(null);
+  useEffect(() => {
+    if (confirming) keepButton.current?.focus();
+    else if (focusAfter.current) {
+      focusAfter.current.focus();
+      focusAfter.current = null;
+    }
+  }, [confirming]);
+  const optionsOf = (i: number) => {
+    const id = watchedFacades[i]?.id;
+    return id ? (optionCounts[id] ?? 0) : 0;
+  };
+  const removeRow = (i: number) => {
+    facades.remove(i);
+    if (confirming) {
+      focusAfter.current = addButton.current;
+      setConfirming(null);
+    } else addButton.current?.focus();
+  };
+  const keepRow = (key: string) => {
+    focusAfter.current = removeButtons.current.get(key) ?? null;
+    setConfirming(null);
+  };
 
   const onSubmit = handleSubmit(async (v) => {
     setFailure(null);
@@ -89,7 +272,8 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
       }
     } catch (e) {
       const err = e instanceof ApiError ? e : new ApiError(0, String(e));
-      applyServerErrors(err.errors, FIELDS, setError);
+      const facadeFields = (v.facades ?? []).flatMap((_, i) => SHADING_PATHS.map((p) => `facades.${i}.${p}`));
+      applyServerErrors(err.errors, [...FIELDS, ...facadeFields], setError);
       setFailure(err.message);
     }
   });
@@ -196,8 +380,8 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
         <FacadePlan facades={watchedFacades} />
         <p className="text-xs text-slate">
           Azimuth of the outward normal in degrees clockwise from north (south = 180). Tilt from horizontal: 90 for a wall, less for sloped glazing.
-          Glazed area gives W and kWh for the whole façade; the typical window (width × height) is what overhangs and fins shade. Removing a façade
-          removes its options and their comments when you save.
+          Glazed area gives W and kWh for the whole façade; the typical window (width × height) is what the shading devices (overhang, fins, horizon)
+          shade. Removing a façade removes its options and their comments when you save.
         </p>
         {errors.facades?.message && <p className="field-error">{errors.facades.message}</p>}
         <ul className="space-y-2">
@@ -240,14 +424,52 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                   {...register(`facades.${i}.windowHeightM`, { setValueAs: numberOrNull })}
                 />
               </Field>
-              <button type="button" className="btn-quiet mb-0.5" onClick={() => facades.remove(i)} aria-label={`Remove façade ${i + 1}`}>
+              <button
+                type="button"
+                ref={(el) => {
+                  if (el) removeButtons.current.set(f.id, el);
+                  else removeButtons.current.delete(f.id);
+                }}
+                className="btn-quiet mb-0.5"
+                onClick={() => (optionsOf(i) > 0 ? setConfirming(f.id) : removeRow(i))}
+                aria-label={`Remove façade ${i + 1}`}
+                aria-expanded={optionsOf(i) > 0 ? confirming === f.id : undefined}
+              >
                 Remove
               </button>
+              {confirming === f.id && (
+                <div
+                  className="notice col-span-full"
+                  role="alertdialog"
+                  aria-labelledby={`confirm-facade-${i}`}
+                  data-testid="remove-facade-confirmation"
+                  onKeyDown={(ev) => {
+                    if (ev.key === "Escape") keepRow(f.id);
+                  }}
+                >
+                  <p id={`confirm-facade-${i}`}>
+                    Remove façade {i + 1}
+                    {watchedFacades[i]?.name ? ` (${watchedFacades[i]!.name})` : ""}? Its{" "}
+                    {optionsOf(i) === 1 ? "glazing option goes" : `${optionsOf(i)} glazing options go`} with it, with their comments and decisions,
+                    when you save.
+                  </p>
+                  <div className="mt-2 flex flex-wrap gap-2">
+                    <button type="button" className="btn-danger" onClick={() => removeRow(i)}>
+                      Remove façade and {optionsOf(i) === 1 ? "its option" : `its ${optionsOf(i)} options`}
+                    </button>
+                    <button type="button" className="btn-quiet" ref={keepButton} onClick={() => keepRow(f.id)}>
+                      Keep the façade
+                    </button>
+                  </div>
+                </div>
+              )}
+              <ShadingDevices i={i} facade={watchedFacades[i]} register={register} setValue={setValue} errors={errors} />
             </li>
           ))}
         </ul>
         <button
           type="button"
+          ref={addButton}
           className="btn-quiet"
           onClick={() => {
             const az = (facades.fields.length * 90) % 360;

@@ -2,14 +2,23 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/lib/server/db/client";
-import { invitation } from "@/lib/server/db/schema";
+import { facadeOption, invitation, optionComment, optionDecision, projectEvent } from "@/lib/server/db/schema";
 import { signUp } from "@/lib/server/services/accounts";
 import { requireProject } from "@/lib/server/services/access";
-import { createProject, facadesOf, projectsForUser, shareProject, unshareProject, updateProject } from "@/lib/server/services/projects";
+import {
+  createProject,
+  facadesOf,
+  optionCountsOf,
+  projectsForUser,
+  shareProject,
+  unshareProject,
+  updateProject,
+} from "@/lib/server/services/projects";
 import { inviteMember } from "@/lib/server/services/members";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import { problemFor } from "@/lib/server/http";
 import { newOwner, uniqueEmail } from "./helpers";
+import { clear, double, insertMakeup, insertOption } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
 const status = async (p: Promise<unknown>) =>
@@ -93,5 +102,41 @@ describe("project editing", () => {
   it("the database itself refuses an out-of-range latitude", async () => {
     const { p } = await orgWithClient();
     await expect(updateProject(p.id, { latitudeDeg: 123 })).rejects.toThrow();
+  });
+
+  it("saving without a façade takes its options, their comments and decisions with it, records that, and keeps the others'", async () => {
+    const { o, p } = await orgWithClient();
+    const [north, west] = await facadesOf(p.id);
+    const mk = await insertMakeup(o.organizationId, "Cascade clear", double(clear(6), clear(4)));
+    const gone = [await insertOption(p.id, west!.id, mk, "W1", "approved"), await insertOption(p.id, west!.id, mk, "W2")];
+    const kept = await insertOption(p.id, north!.id, mk, "N1");
+    await db.insert(optionComment).values({ optionId: gone[0]!.id, authorId: o.userId, authorName: "Owner", body: "Fine by me" });
+    await db.insert(optionDecision).values({ optionId: gone[0]!.id, decision: "approved", decidedById: o.userId, decidedByName: "Owner" });
+    expect(await optionCountsOf(p.id)).toEqual({ [west!.id]: 2, [north!.id]: 1 });
+
+    await updateProject(p.id, { facades: [{ id: north!.id, name: "North", azimuthDeg: 0, tiltDeg: 90 }] }, { id: o.userId, name: "Owner" });
+
+    expect((await facadesOf(p.id)).map((f) => f.id)).toEqual([north!.id]);
+    const left = await db.select({ id: facadeOption.id }).from(facadeOption).where(eq(facadeOption.projectId, p.id));
+    expect(left.map((r) => r.id)).toEqual([kept.id]);
+    expect(await db.select().from(optionComment).where(eq(optionComment.optionId, gone[0]!.id))).toHaveLength(0);
+    expect(await db.select().from(optionDecision).where(eq(optionDecision.optionId, gone[0]!.id))).toHaveLength(0);
+    expect(await optionCountsOf(p.id)).toEqual({ [north!.id]: 1 });
+    const events = await db.select().from(projectEvent).where(eq(projectEvent.projectId, p.id));
+    expect(events.map((e) => [e.kind, e.summary])).toEqual([["facade.deleted", "Removed façade West with its 2 options"]]);
+  });
+
+  it("stores a façade's shading devices as sent, and drops a device sent as absent", async () => {
+    const { p } = await orgWithClient();
+    const [north, west] = await facadesOf(p.id);
+    const window = { windowWidthM: 1.5, windowHeightM: 2 };
+    const shading = { overhang: { depthM: 0.8, gapAboveM: 0.3, extensionLeftM: 0.5 }, fins: { depthM: 0.4, gapM: 0.1 }, horizonDeg: 12 };
+    const keep = { id: west!.id, name: "West", azimuthDeg: 270, tiltDeg: 90 };
+    await updateProject(p.id, { facades: [{ id: north!.id, name: "North", azimuthDeg: 0, tiltDeg: 90, ...window, shading }, keep] });
+    expect((await facadesOf(p.id))[0]).toMatchObject({ ...window, shading });
+    await updateProject(p.id, {
+      facades: [{ id: north!.id, name: "North", azimuthDeg: 0, tiltDeg: 90, ...window, shading: { fins: shading.fins } }, keep],
+    });
+    expect((await facadesOf(p.id))[0]!.shading).toEqual({ fins: shading.fins });
   });
 });

@@ -1,14 +1,27 @@
 import { z } from "./zod";
 import { name, optionalText, rowId, timeZone } from "./common";
 import { finite, positive } from "./numbers";
-import { Shading } from "./schedule";
+import { shadingDevices } from "./schedule";
 
 /** An empty number field (a form's NaN, "" or null) is "not given". */
 const optionalNumber = <T extends z.ZodType>(schema: T) =>
   z.preprocess((v) => (v === "" || v === null || (typeof v === "number" && Number.isNaN(v)) ? null : v), schema.nullable()).optional();
 
-/** Shading devices of a façade as the schedule engine takes them, around the façade's typical window. */
-export const FacadeShading = Shading.omit({ window: true });
+/**
+ * Shading devices of a façade as the schedule engine takes them (its Shading without the window: the
+ * façade's typical window is the window), with messages that name the fields in words.
+ */
+export const FacadeShading = z.object(
+  shadingDevices({
+    overhangDepth: "Overhang depth (m)",
+    overhangGapAbove: "Overhang gap above the window (m)",
+    overhangExtensionLeft: "Overhang run past the left side (m)",
+    overhangExtensionRight: "Overhang run past the right side (m)",
+    finDepth: "Fin depth (m)",
+    finGap: "Fin gap from the window edge (m)",
+    horizon: "Horizon angle (°)",
+  }),
+);
 export type FacadeShading = z.infer<typeof FacadeShading>;
 
 export const SKY_MODELS = ["perez", "hay-davies", "isotropic"] as const;

@@ -28,20 +28,47 @@ export const Site = z.object({
   elevationM: finite("elevationM", -500, 9000).optional().default(0),
 });
 
-export const Shading = z.object({
-  window: z.object({ widthM: positive("widthM", 100), heightM: positive("heightM", 100) }),
+/** The words a shading device's messages use for each of its fields. */
+export interface ShadingLabels {
+  overhangDepth: string;
+  overhangGapAbove: string;
+  overhangExtensionLeft: string;
+  overhangExtensionRight: string;
+  finDepth: string;
+  finGap: string;
+  horizon: string;
+}
+
+/**
+ * The shading devices around a window (overhang, side fins, horizon), their ranges in one place; the
+ * labels only change how the messages name the fields.
+ */
+export const shadingDevices = (l: ShadingLabels) => ({
   overhang: z
     .object({
-      depthM: finite("depthM", 0, 50),
-      gapAboveM: finite("gapAboveM", 0, 50),
+      depthM: finite(l.overhangDepth, 0, 50),
+      gapAboveM: finite(l.overhangGapAbove, 0, 50),
       /** How far the overhang runs past each side of the window; omitted = very long. */
-      extensionLeftM: finite("extensionLeftM", 0, 100).optional(),
-      extensionRightM: finite("extensionRightM", 0, 100).optional(),
+      extensionLeftM: finite(l.overhangExtensionLeft, 0, 100).optional(),
+      extensionRightM: finite(l.overhangExtensionRight, 0, 100).optional(),
     })
     .optional(),
-  fins: z.object({ depthM: finite("depthM", 0, 50), gapM: finite("gapM", 0, 50) }).optional(),
+  fins: z.object({ depthM: finite(l.finDepth, 0, 50), gapM: finite(l.finGap, 0, 50) }).optional(),
   /** Obstructions on the horizon in front of the window (buildings, terrain), degrees above horizontal. */
-  horizonDeg: finite("horizonDeg", 0, 89).optional(),
+  horizonDeg: finite(l.horizon, 0, 89).optional(),
+});
+
+export const Shading = z.object({
+  window: z.object({ widthM: positive("widthM", 100), heightM: positive("heightM", 100) }),
+  ...shadingDevices({
+    overhangDepth: "depthM",
+    overhangGapAbove: "gapAboveM",
+    overhangExtensionLeft: "extensionLeftM",
+    overhangExtensionRight: "extensionRightM",
+    finDepth: "depthM",
+    finGap: "gapM",
+    horizon: "horizonDeg",
+  }),
 });
 
 const MONTHS = 12;

@@ -1,7 +1,7 @@
 /** View models of the project pages (overview, edit, sun and schedules). */
 import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
 import { requireProject, type ProjectRow } from "@/lib/server/services/access";
-import { facadesOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
+import { facadesOf, optionCountsOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
 import { revisionListOf } from "@/lib/server/services/revisions";
 import type { FacadeShading } from "@/lib/contracts/projects";
 
@@ -90,6 +90,8 @@ export interface ProjectEditPage {
     description: string;
     facades: FacadeView[];
   };
+  /** Glazing options per façade id (absent = none): removing such a façade takes its options with it. */
+  optionCounts: Record<string, number>;
 }
 
 /** The edit form; ForbiddenError (naming the role) when the user may see but not edit the project. */
@@ -113,6 +115,7 @@ export async function loadProjectEditPage(user: PageUser, projectId: string | un
       description: p.description ?? "",
       facades: await facadeViews(p.id),
     },
+    optionCounts: await optionCountsOf(p.id),
   };
 }
 

@@ -1,11 +1,12 @@
 import { and, asc, count, desc, eq, exists, gt, inArray, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
-import { facade, member, organization, project, projectShare, user } from "@/lib/server/db/schema";
+import { facade, facadeOption, member, organization, project, projectShare, user } from "@/lib/server/db/schema";
 import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { isRoleName, ROLE_NAMES, roleCan } from "@/lib/auth/roles";
 import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
 import { DEFAULT_PAGE_LIMIT, pageOf, type Cursor, type Page } from "@/lib/contracts/pagination";
 import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
+import { recordEvent, type Actor } from "./history";
 
 export type FacadeRow = typeof facade.$inferSelect;
 
@@ -156,8 +157,22 @@ export async function createProject(input: ProjectCreateRequest, userId: string)
   });
 }
 
-/** Updates fields; a given façade list replaces the old one (rows named by id are kept and updated). */
-export async function updateProject(projectId: string, input: ProjectUpdateRequest): Promise<ProjectRow> {
+/** How many glazing options each façade of the project has, by façade id (façades without options are absent). */
+export async function optionCountsOf(projectId: string): Promise<Record<string, number>> {
+  const rows = await db
+    .select({ facadeId: facadeOption.facadeId, n: count() })
+    .from(facadeOption)
+    .where(eq(facadeOption.projectId, projectId))
+    .groupBy(facadeOption.facadeId);
+  return Object.fromEntries(rows.map((r) => [r.facadeId, r.n]));
+}
+
+/**
+ * Updates fields; a given façade list replaces the old one (rows named by id are kept and updated).
+ * A façade left out is deleted with its options (their comments and decisions go with them, by the
+ * foreign keys' cascade); with an actor, each such façade that had options is recorded in the history.
+ */
+export async function updateProject(projectId: string, input: ProjectUpdateRequest, actor?: Actor): Promise<ProjectRow> {
   const { facades, ...fields } = input;
   return db.transaction(async (tx) => {
     let row: ProjectRow | undefined;
@@ -167,16 +182,34 @@ export async function updateProject(projectId: string, input: ProjectUpdateReque
       [row] = await tx.update(project).set({ updatedAt: new Date() }).where(eq(project.id, projectId)).returning();
     }
     if (facades) {
-      const existing = await tx.select({ id: facade.id }).from(facade).where(eq(facade.projectId, projectId));
+      const existing = await tx.select({ id: facade.id, name: facade.name }).from(facade).where(eq(facade.projectId, projectId));
       const existingIds = new Set(existing.map((f) => f.id));
       for (const f of facades) {
         if (f.id && !existingIds.has(f.id))
           throw new InvalidError("facades", "unknown façade id", `Façade id "${f.id}" does not belong to this project`);
       }
-      const keep = facades.flatMap((f) => (f.id ? [f.id] : []));
-      await tx
-        .delete(facade)
-        .where(keep.length ? and(eq(facade.projectId, projectId), notInArray(facade.id, keep)) : eq(facade.projectId, projectId));
+      const keep = new Set(facades.flatMap((f) => (f.id ? [f.id] : [])));
+      const removed = existing.filter((f) => !keep.has(f.id));
+      if (removed.length) {
+        const ids = removed.map((f) => f.id);
+        // Counted before the delete, whose cascade takes the options (and their comments and decisions) away.
+        const options = await tx
+          .select({ facadeId: facadeOption.facadeId, n: count() })
+          .from(facadeOption)
+          .where(inArray(facadeOption.facadeId, ids))
+          .groupBy(facadeOption.facadeId);
+        await tx.delete(facade).where(inArray(facade.id, ids));
+        for (const o of actor ? options : []) {
+          const name = removed.find((f) => f.id === o.facadeId)!.name;
+          await recordEvent(tx, {
+            projectId,
+            actor: actor!,
+            kind: "facade.deleted",
+            summary: `Removed façade ${name} with its ${o.n === 1 ? "option" : `${o.n} options`}`,
+            detail: { facadeId: o.facadeId, options: o.n },
+          });
+        }
+      }
       for (const [i, { id, ...f }] of facades.entries()) {
         if (id)
           await tx

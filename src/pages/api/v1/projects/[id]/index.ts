@@ -12,7 +12,8 @@ export const GET = endpoint({ auth: { project: "id" }, params }, async ({ projec
 
 export const PATCH = endpoint(
   { auth: { project: "id", permission: "project:update" }, params, body: ProjectUpdateRequest },
-  async ({ project, body }) => json({ project: await updateProject(project.id, body), facades: await facadesOf(project.id) }),
+  async ({ project, body, user }) =>
+    json({ project: await updateProject(project.id, body, { id: user.id, name: user.name }), facades: await facadesOf(project.id) }),
 );
 
 export const DELETE = endpoint({ auth: { project: "id", permission: "project:delete" }, params }, async ({ project }) => {
