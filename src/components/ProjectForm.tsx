@@ -60,6 +60,31 @@ const SHADING_PATHS = [
   "shading.horizonDeg",
 ] as const;
 
+/** The schema's field keys as the form labels them (the endpoint's messages start with the key). */
+const FIELD_WORDS: Record<string, string> = {
+  organizationId: "Organisation",
+  name: "Name",
+  reference: "Job number",
+  buildingName: "Building",
+  description: "Description",
+  siteName: "Site name",
+  latitudeDeg: "Latitude (°)",
+  longitudeDeg: "Longitude (°)",
+  elevationM: "Elevation (m)",
+  timeZone: "Time zone",
+  azimuthDeg: "Azimuth (°)",
+  tiltDeg: "Tilt (°)",
+  windowWidthM: "Window width (m)",
+  windowHeightM: "Window height (m)",
+};
+
+/** A message in words: "Latitude (°) must be between -90 and 90"; a façade's starts with its row, "Façade 3: name is required". */
+function worded(error: { message?: string } | undefined, row?: number): { message?: string } | undefined {
+  if (!error?.message) return undefined;
+  const m = error.message.replace(/^([A-Za-z]+)\b/, (key) => FIELD_WORDS[key] ?? key).replace(/\bgive the window's/, "Give the window's");
+  return { message: row === undefined ? m : `Façade ${row + 1}: ${m.charAt(0).toLowerCase()}${m.slice(1)}` };
+}
+
 /** A shading field's message in its row: "Façade 2: overhang depth (m) must be …". */
 const inRow = (i: number, error: { message?: string } | undefined) =>
   error?.message ? { message: `Façade ${i + 1}: ${error.message.charAt(0).toLowerCase()}${error.message.slice(1)}` } : undefined;
@@ -284,7 +309,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
       <fieldset className="card grid gap-4 md:grid-cols-2">
         <legend className="px-1 font-bold">Project</legend>
         {!project && organizations.length > 1 && (
-          <Field label="Organisation" htmlFor="organizationId" error={errors.organizationId}>
+          <Field label="Organisation" htmlFor="organizationId" error={worded(errors.organizationId)}>
             <select id="organizationId" {...register("organizationId")}>
               {organizations.map((o) => (
                 <option key={o.id} value={o.id}>
@@ -294,17 +319,17 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
             </select>
           </Field>
         )}
-        <Field label="Project name" htmlFor="name" error={errors.name}>
+        <Field label="Project name" htmlFor="name" error={worded(errors.name)}>
           <input id="name" {...register("name")} />
         </Field>
-        <Field label="Job number" htmlFor="reference" error={errors.reference} hint="Your firm's reference, optional.">
+        <Field label="Job number" htmlFor="reference" error={worded(errors.reference)} hint="Your firm's reference, optional.">
           <input id="reference" {...register("reference")} />
         </Field>
-        <Field label="Building" htmlFor="buildingName" error={errors.buildingName}>
+        <Field label="Building" htmlFor="buildingName" error={worded(errors.buildingName)}>
           <input id="buildingName" {...register("buildingName")} />
         </Field>
         <div className="md:col-span-2">
-          <Field label="Description" htmlFor="description" error={errors.description}>
+          <Field label="Description" htmlFor="description" error={worded(errors.description)}>
             <textarea id="description" rows={3} {...register("description")} />
           </Field>
         </div>
@@ -313,17 +338,17 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
       <fieldset className="card grid gap-4 md:grid-cols-3">
         <legend className="px-1 font-bold">Site</legend>
         <div className="md:col-span-3">
-          <Field label="Site name" htmlFor="siteName" error={errors.siteName}>
+          <Field label="Site name" htmlFor="siteName" error={worded(errors.siteName)}>
             <input id="siteName" {...register("siteName")} />
           </Field>
         </div>
-        <Field label="Latitude (°, north +)" htmlFor="latitudeDeg" error={errors.latitudeDeg}>
+        <Field label="Latitude (°, north +)" htmlFor="latitudeDeg" error={worded(errors.latitudeDeg)}>
           <input id="latitudeDeg" type="number" step="any" {...register("latitudeDeg", { valueAsNumber: true })} />
         </Field>
-        <Field label="Longitude (°, east +)" htmlFor="longitudeDeg" error={errors.longitudeDeg}>
+        <Field label="Longitude (°, east +)" htmlFor="longitudeDeg" error={worded(errors.longitudeDeg)}>
           <input id="longitudeDeg" type="number" step="any" {...register("longitudeDeg", { valueAsNumber: true })} />
         </Field>
-        <Field label="Elevation (m)" htmlFor="elevationM" error={errors.elevationM}>
+        <Field label="Elevation (m)" htmlFor="elevationM" error={worded(errors.elevationM)}>
           <input id="elevationM" type="number" step="any" {...register("elevationM", { valueAsNumber: true })} />
         </Field>
         <Field
@@ -362,7 +387,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
           <Field
             label="Time zone"
             htmlFor="timeZone"
-            error={errors.timeZone}
+            error={worded(errors.timeZone)}
             hint="IANA name, e.g. Europe/Lisbon: fixes local clock time and daylight saving."
           >
             <input id="timeZone" list="tz-list" {...register("timeZone")} />
@@ -391,16 +416,16 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
               className="grid grid-cols-2 items-end gap-3 border-b border-line pb-3 sm:grid-cols-[1fr_110px_90px_110px_100px_100px_auto]"
               data-testid="facade-row"
             >
-              <Field label="Name" htmlFor={`facades.${i}.name`} error={errors.facades?.[i]?.name}>
+              <Field label="Name" htmlFor={`facades.${i}.name`} error={worded(errors.facades?.[i]?.name, i)}>
                 <input id={`facades.${i}.name`} {...register(`facades.${i}.name`)} />
               </Field>
-              <Field label="Azimuth °" htmlFor={`facades.${i}.azimuthDeg`} error={errors.facades?.[i]?.azimuthDeg}>
+              <Field label="Azimuth °" htmlFor={`facades.${i}.azimuthDeg`} error={worded(errors.facades?.[i]?.azimuthDeg, i)}>
                 <input id={`facades.${i}.azimuthDeg`} type="number" step="any" {...register(`facades.${i}.azimuthDeg`, { valueAsNumber: true })} />
               </Field>
-              <Field label="Tilt °" htmlFor={`facades.${i}.tiltDeg`} error={errors.facades?.[i]?.tiltDeg}>
+              <Field label="Tilt °" htmlFor={`facades.${i}.tiltDeg`} error={worded(errors.facades?.[i]?.tiltDeg, i)}>
                 <input id={`facades.${i}.tiltDeg`} type="number" step="any" {...register(`facades.${i}.tiltDeg`, { valueAsNumber: true })} />
               </Field>
-              <Field label="Glazed m²" htmlFor={`facades.${i}.glazedAreaM2`} error={errors.facades?.[i]?.glazedAreaM2}>
+              <Field label="Glazed m²" htmlFor={`facades.${i}.glazedAreaM2`} error={worded(errors.facades?.[i]?.glazedAreaM2, i)}>
                 <input
                   id={`facades.${i}.glazedAreaM2`}
                   type="number"
@@ -408,7 +433,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                   {...register(`facades.${i}.glazedAreaM2`, { setValueAs: numberOrNull })}
                 />
               </Field>
-              <Field label="Window w m" htmlFor={`facades.${i}.windowWidthM`} error={errors.facades?.[i]?.windowWidthM}>
+              <Field label="Window w m" htmlFor={`facades.${i}.windowWidthM`} error={worded(errors.facades?.[i]?.windowWidthM, i)}>
                 <input
                   id={`facades.${i}.windowWidthM`}
                   type="number"
@@ -416,7 +441,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                   {...register(`facades.${i}.windowWidthM`, { setValueAs: numberOrNull })}
                 />
               </Field>
-              <Field label="Window h m" htmlFor={`facades.${i}.windowHeightM`} error={errors.facades?.[i]?.windowHeightM}>
+              <Field label="Window h m" htmlFor={`facades.${i}.windowHeightM`} error={worded(errors.facades?.[i]?.windowHeightM, i)}>
                 <input
                   id={`facades.${i}.windowHeightM`}
                   type="number"

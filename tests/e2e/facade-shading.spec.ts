@@ -116,6 +116,17 @@ test("a typical window and an overhang are saved, shown again and lower that fa�
   expect(after).toBeLessThan(before);
 });
 
+test("the form's messages name the fields in words, façade fields with their row", async ({ page }) => {
+  await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
+  await openEdit(page);
+  await page.getByLabel("Latitude (°, north +)").fill("95");
+  await page.getByTestId("facade-row").nth(1).getByLabel("Name").fill("");
+  await page.getByRole("button", { name: "Save changes" }).click();
+  await expect(page.locator('[data-field="latitudeDeg"]')).toHaveText("Latitude (°) must be between -90 and 90");
+  await expect(page.locator('[data-field="facades.1.name"]')).toHaveText("Façade 2: name is required");
+  await expect(page).toHaveURL(new RegExp(`/projects/${projectId}/edit$`));
+});
+
 test("removing a device sends it as absent", async ({ page }) => {
   await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
   await openEdit(page);

@@ -60,8 +60,6 @@ async function phone(browser: Browser): Promise<Page> {
   const page = await ctx.newPage();
   await signIn(page, demoUser("consultant").email, DEMO_PASSWORD);
   await page.goto(`/projects/${projectId}`);
-  // The board hydrates when it comes into view.
-  await page.getByText("Loading the options…").scrollIntoViewIfNeeded();
   await expect(page.getByTestId("facade-options")).toHaveCount(2);
   return page;
 }
@@ -225,7 +223,6 @@ test("architects see the options but no way to re-point them", async ({ browser 
   const page = await ctx.newPage();
   await signIn(page, demoUser("architect").email, DEMO_PASSWORD);
   await page.goto(`/projects/${projectId}`);
-  await page.getByText("Loading the options…").scrollIntoViewIfNeeded();
   await expect(page.getByTestId("facade-options")).toHaveCount(2);
   await expect(page.locator('tr[data-option="B: clear"]')).toContainText(TINTED);
   await expect(page.getByRole("button", { name: /Choose another make-up/ })).toHaveCount(0);

@@ -6,14 +6,15 @@
 import type { LightSummary } from "@/lib/contracts/glazing";
 
 interface ValuesLike {
-  normal: { visibleTransmittance: number | null };
+  /** Stored values are read defensively: a row written by hand or by an older version may lack them. */
+  normal?: { visibleTransmittance?: number | null } | null;
   light?: LightSummary;
 }
 
 export function makeupLight(values: ValuesLike): LightSummary {
   if (values.light) return values.light;
-  const t = values.normal.visibleTransmittance;
-  return t === null
+  const t = values.normal?.visibleTransmittance;
+  return t === null || t === undefined || !Number.isFinite(t)
     ? { basis: "not given", transmittance: null, range: null, reflectanceFront: null, reflectanceBack: null }
     : { basis: "measured", transmittance: t, range: { low: t, high: t }, reflectanceFront: null, reflectanceBack: null };
 }
