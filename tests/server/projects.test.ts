@@ -2,7 +2,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { db, pool } from "@/lib/server/db/client";
-import { facadeOption, invitation, optionComment, optionDecision, projectEvent } from "@/lib/server/db/schema";
+import { facadeOption, invitation, optionComment, optionDecision, projectEvent, projectRequirements } from "@/lib/server/db/schema";
 import { signUp } from "@/lib/server/services/accounts";
 import { requireProject } from "@/lib/server/services/access";
 import {
@@ -113,6 +113,10 @@ describe("project editing", () => {
     await db.insert(optionComment).values({ optionId: gone[0]!.id, authorId: o.userId, authorName: "Owner", body: "Fine by me" });
     await db.insert(optionDecision).values({ optionId: gone[0]!.id, decision: "approved", decidedById: o.userId, decidedByName: "Owner" });
     expect(await optionCountsOf(p.id)).toEqual({ [west!.id]: 2, [north!.id]: 1 });
+    await db.insert(projectRequirements).values({
+      projectId: p.id,
+      limits: { project: { maxGValue: 0.5 }, facades: { [west!.id]: { maxGValue: 0.3 }, [north!.id]: { minLightTransmittance: 0.6 } } },
+    });
 
     await updateProject(p.id, { facades: [{ id: north!.id, name: "North", azimuthDeg: 0, tiltDeg: 90 }] }, { id: o.userId, name: "Owner" });
 
@@ -124,6 +128,10 @@ describe("project editing", () => {
     expect(await optionCountsOf(p.id)).toEqual({ [north!.id]: 1 });
     const events = await db.select().from(projectEvent).where(eq(projectEvent.projectId, p.id));
     expect(events.map((e) => [e.kind, e.summary])).toEqual([["facade.deleted", "Removed façade West with its 2 options"]]);
+
+    // The brief's override for the removed façade goes with it; the project's limits and the other façade's stay.
+    const [req] = await db.select().from(projectRequirements).where(eq(projectRequirements.projectId, p.id));
+    expect(req!.limits).toEqual({ project: { maxGValue: 0.5 }, facades: { [north!.id]: { minLightTransmittance: 0.6 } } });
   });
 
   it("stores a façade's shading devices as sent, and drops a device sent as absent", async () => {

@@ -1,6 +1,6 @@
 import { and, asc, count, desc, eq, exists, gt, inArray, lt, notInArray, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
-import { facade, facadeOption, member, organization, project, projectShare, user } from "@/lib/server/db/schema";
+import { facade, facadeOption, member, organization, project, projectRequirements, projectShare, user } from "@/lib/server/db/schema";
 import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { isRoleName, ROLE_NAMES, roleCan } from "@/lib/auth/roles";
 import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
@@ -199,6 +199,16 @@ export async function updateProject(projectId: string, input: ProjectUpdateReque
           .where(inArray(facadeOption.facadeId, ids))
           .groupBy(facadeOption.facadeId);
         await tx.delete(facade).where(inArray(facade.id, ids));
+        // The brief's overrides for those façades go too (the project's own limits stay).
+        await tx
+          .update(projectRequirements)
+          .set({
+            limits: sql`jsonb_set(${projectRequirements.limits}, '{facades}', coalesce(${projectRequirements.limits}->'facades', '{}'::jsonb) - array[${sql.join(
+              ids.map((i) => sql`${i}`),
+              sql`, `,
+            )}]::text[])`,
+          })
+          .where(eq(projectRequirements.projectId, projectId));
         for (const o of actor ? options : []) {
           const name = removed.find((f) => f.id === o.facadeId)!.name;
           await recordEvent(tx, {
