@@ -411,14 +411,12 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
         {errors.facades?.message && <p className="field-error">{errors.facades.message}</p>}
         <ul className="space-y-2">
           {facades.fields.map((f, i) => (
-            <li
-              key={f.id}
-              className="grid grid-cols-2 items-end gap-3 border-b border-line pb-3 sm:grid-cols-[1fr_110px_90px_110px_100px_100px_auto]"
-              data-testid="facade-row"
-            >
-              <Field label="Name" htmlFor={`facades.${i}.name`} error={worded(errors.facades?.[i]?.name, i)}>
-                <input id={`facades.${i}.name`} {...register(`facades.${i}.name`)} />
-              </Field>
+            <li key={f.id} className="grid grid-cols-2 items-end gap-3 border-b border-line pb-3 sm:grid-cols-5" data-testid="facade-row">
+              <div className="col-span-2 sm:col-span-4">
+                <Field label={`Façade ${i + 1}: name`} htmlFor={`facades.${i}.name`} error={worded(errors.facades?.[i]?.name, i)}>
+                  <input id={`facades.${i}.name`} {...register(`facades.${i}.name`)} />
+                </Field>
+              </div>
               <Field label="Azimuth °" htmlFor={`facades.${i}.azimuthDeg`} error={worded(errors.facades?.[i]?.azimuthDeg, i)}>
                 <input id={`facades.${i}.azimuthDeg`} type="number" step="any" {...register(`facades.${i}.azimuthDeg`, { valueAsNumber: true })} />
               </Field>
@@ -433,7 +431,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                   {...register(`facades.${i}.glazedAreaM2`, { setValueAs: numberOrNull })}
                 />
               </Field>
-              <Field label="Window w m" htmlFor={`facades.${i}.windowWidthM`} error={worded(errors.facades?.[i]?.windowWidthM, i)}>
+              <Field label="Window width m" htmlFor={`facades.${i}.windowWidthM`} error={worded(errors.facades?.[i]?.windowWidthM, i)}>
                 <input
                   id={`facades.${i}.windowWidthM`}
                   type="number"
@@ -441,7 +439,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                   {...register(`facades.${i}.windowWidthM`, { setValueAs: numberOrNull })}
                 />
               </Field>
-              <Field label="Window h m" htmlFor={`facades.${i}.windowHeightM`} error={worded(errors.facades?.[i]?.windowHeightM, i)}>
+              <Field label="Window height m" htmlFor={`facades.${i}.windowHeightM`} error={worded(errors.facades?.[i]?.windowHeightM, i)}>
                 <input
                   id={`facades.${i}.windowHeightM`}
                   type="number"
@@ -455,7 +453,7 @@ export default function ProjectForm({ organizations, defaultOrganizationId, proj
                   if (el) removeButtons.current.set(f.id, el);
                   else removeButtons.current.delete(f.id);
                 }}
-                className="btn-quiet mb-0.5"
+                className="btn-quiet mb-0.5 sm:col-start-5 sm:row-start-1"
                 onClick={() => (optionsOf(i) > 0 ? setConfirming(f.id) : removeRow(i))}
                 aria-label={`Remove façade ${i + 1}`}
                 aria-expanded={optionsOf(i) > 0 ? confirming === f.id : undefined}

@@ -80,8 +80,8 @@ test("a typical window and an overhang are saved, shown again and lower that fa�
   // Without a typical window the devices do not count, and the form says so instead of offering them.
   await expect(devices.getByTestId("shading-needs-window")).toContainText("count only once the façade has a typical window (width and height)");
   await expect(devices.getByLabel("Overhang above")).toHaveCount(0);
-  await south.getByLabel("Window w m").fill("1.5");
-  await south.getByLabel("Window h m").fill("2");
+  await south.getByLabel("Window width m").fill("1.5");
+  await south.getByLabel("Window height m").fill("2");
   await devices.getByLabel("Overhang above").check();
 
   // A depth out of range is named in words, with the façade, before anything is sent.
