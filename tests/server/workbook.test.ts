@@ -42,7 +42,11 @@ async function get(route: Route, caller: Caller, path: string, id: string): Prom
   return (await route({ request, url: new URL(request.url), params: { id }, locals: { user: caller } } as never)) as Response;
 }
 async function post(route: Route, caller: Caller, path: string, params: Record<string, string>, body: unknown): Promise<Response> {
-  const request = new Request(`http://127.0.0.1${path}`, { method: "POST", body: JSON.stringify(body), headers: { "content-type": "application/json" } });
+  const request = new Request(`http://127.0.0.1${path}`, {
+    method: "POST",
+    body: JSON.stringify(body),
+    headers: { "content-type": "application/json" },
+  });
   return (await route({ request, url: new URL(request.url), params, locals: { user: caller } } as never)) as Response;
 }
 async function load(res: Response): Promise<ExcelJS.Workbook> {
@@ -95,9 +99,14 @@ beforeAll(async () => {
   const fs = await db.select().from(facade).where(eq(facade.projectId, p.id));
   westId = fs.find((f) => f.azimuthDeg === 270)!.id;
   const northId = fs.find((f) => f.name === "North")!.id;
-  await db.update(facade).set({ windowWidthM: 1.5, windowHeightM: 2, glazedAreaM2: 120, shading: { overhang: westShading.overhang } }).where(eq(facade.id, westId));
+  await db
+    .update(facade)
+    .set({ windowWidthM: 1.5, windowHeightM: 2, glazedAreaM2: 120, shading: { overhang: westShading.overhang } })
+    .where(eq(facade.id, westId));
   await db.update(project).set({ groundAlbedo: 0.25, skyModel: "isotropic", linkeTurbidity: TURBIDITY }).where(eq(project.id, p.id));
-  await db.insert(projectRequirements).values({ projectId: p.id, limits: { project: { maxGValue: 0.6, minLightTransmittance: 0.7, maxPeakTransmittedWm2: 400 }, facades: {} } });
+  await db
+    .insert(projectRequirements)
+    .values({ projectId: p.id, limits: { project: { maxGValue: 0.6, minLightTransmittance: 0.7, maxPeakTransmittedWm2: 400 }, facades: {} } });
   const west = await insertMakeup(o.organizationId, "Measured double", westLayers);
   const north = await insertMakeup(o.organizationId, "Tinted double", northLayers);
   await insertOption(p.id, westId, west, HOSTILE_OPTION, "approved");
@@ -128,7 +137,8 @@ function scheduleRows(wb: ExcelJS.Workbook): Record<string, ExcelJS.CellValue>[]
 }
 
 /** The hourly sheet whose title (A1) names the option. */
-const hourlySheet = (wb: ExcelJS.Workbook, option: string) => wb.worksheets.find((w) => String(w.getCell("A1").value).includes(`hourly schedule of`) && String(w.getCell("A1").value).includes(option))!;
+const hourlySheet = (wb: ExcelJS.Workbook, option: string) =>
+  wb.worksheets.find((w) => String(w.getCell("A1").value).includes(`hourly schedule of`) && String(w.getCell("A1").value).includes(option))!;
 
 /** The fields of one CSV line (RFC 4180 quoting). */
 function csvFields(line: string): string[] {
@@ -139,8 +149,10 @@ function csvFields(line: string): string[] {
       let v = "";
       i++;
       while (i < line.length) {
-        if (line[i] === '"' && line[i + 1] === '"') (v += '"'), (i += 2);
-        else if (line[i] === '"') break;
+        if (line[i] === '"' && line[i + 1] === '"') {
+          v += '"';
+          i += 2;
+        } else if (line[i] === '"') break;
         else v += line[i++];
       }
       out.push(v);
@@ -171,7 +183,19 @@ describe("the workbook of an issued revision", () => {
     expect(new Set(names.map((n) => n.toLowerCase())).size).toBe(names.length);
     const cover = issued.getWorksheet("Cover")!;
     const text = JSON.stringify(cover.getSheetValues());
-    for (const want of ["41.15", "Europe/Lisbon", "isotropic", "0.25", "3.2, 3.5", "Revision", "Test consultant", "Perez", "EN 673", "not certified", "licensed professionals"])
+    for (const want of [
+      "41.15",
+      "Europe/Lisbon",
+      "isotropic",
+      "0.25",
+      "3.2, 3.5",
+      "Revision",
+      "Test consultant",
+      "Perez",
+      "EN 673",
+      "not certified",
+      "licensed professionals",
+    ])
       expect(text).toContain(want);
     expect(text).not.toContain("DRAFT");
   });
@@ -207,9 +231,11 @@ describe("the workbook of an issued revision", () => {
       expect(row["Peak at (ISO 8601 with UTC offset)"]).toBe(o.peak.at);
       expect(o.flags.length).toBe(3);
       for (const flag of o.flags) {
-        const label = { maxGValue: "Maximum g-value", minLightTransmittance: "Minimum light transmittance τv", maxPeakTransmittedWm2: "Maximum peak transmitted (W/m²)" }[
-          flag.requirement as string
-        ]!;
+        const label = {
+          maxGValue: "Maximum g-value",
+          minLightTransmittance: "Minimum light transmittance τv",
+          maxPeakTransmittedWm2: "Maximum peak transmitted (W/m²)",
+        }[flag.requirement as string]!;
         eq(`${label}: limit`, flag.limit);
         eq(`${label}: margin (≥ 0 meets it)`, flag.margin);
         expect(row[`${label}: result`]).toBe({ pass: "meets", fail: "does not meet", unknown: "unknown" }[flag.status]);
@@ -326,9 +352,17 @@ describe("the workbook of an issued revision", () => {
   });
 
   it("gives the hourly table of one façade as CSV with the same rows", async () => {
-    const res = await get(csvRoute as Route, owner, `/api/v1/projects/${projectId}/workbook.csv?revision=A&table=hourly&facadeId=${westId}`, projectId);
+    const res = await get(
+      csvRoute as Route,
+      owner,
+      `/api/v1/projects/${projectId}/workbook.csv?revision=A&table=hourly&facadeId=${westId}`,
+      projectId,
+    );
     expect(res.status).toBe(200);
-    const lines = (await res.text()).replace(/^\uFEFF/, "").trimEnd().split("\r\n");
+    const lines = (await res.text())
+      .replace(/^\uFEFF/, "")
+      .trimEnd()
+      .split("\r\n");
     expect(lines).toHaveLength(1 + 8760);
     const ws = hourlySheet(issued, HOSTILE_OPTION);
     for (let i = 1; i < lines.length; i++) {
@@ -362,7 +396,9 @@ describe("the draft workbook", () => {
     for (const ws of wb.worksheets) expect(String(ws.getCell("D1").value), ws.name).toMatch(/^DRAFT/);
     const rows = scheduleRows(wb);
     const issuedRows = scheduleRows(issued);
-    expect(rows.map((r) => r["Total solar energy transmittance g, EN 410 (−)"])).toEqual(issuedRows.map((r) => r["Total solar energy transmittance g, EN 410 (−)"]));
+    expect(rows.map((r) => r["Total solar energy transmittance g, EN 410 (−)"])).toEqual(
+      issuedRows.map((r) => r["Total solar energy transmittance g, EN 410 (−)"]),
+    );
   });
 
   it("is refused to architects and clients (403), who may download issued revisions", async () => {
@@ -396,7 +432,12 @@ describe("refusals", () => {
     const table = await get(csvRoute as Route, consultant, `/api/v1/projects/${projectId}/workbook.csv?revision=A&table=pivot`, projectId);
     expect(table.status).toBe(400);
     expect(((await table.json()) as { errors: { field: string }[] }).errors[0]!.field).toBe("table");
-    const facadeUnknown = await get(csvRoute as Route, consultant, `/api/v1/projects/${projectId}/workbook.csv?revision=A&table=hourly&facadeId=nope`, projectId);
+    const facadeUnknown = await get(
+      csvRoute as Route,
+      consultant,
+      `/api/v1/projects/${projectId}/workbook.csv?revision=A&table=hourly&facadeId=nope`,
+      projectId,
+    );
     expect(facadeUnknown.status).toBe(404);
   });
 });

@@ -8,8 +8,7 @@ import type { ScheduleRow } from "@/lib/contracts/schedule";
 
 describe("safeText", () => {
   it("neutralises text a spreadsheet would evaluate, and only that", () => {
-    for (const s of ["=1+1", "+A1", "-2+3", "@SUM(A1)", "\tx", "\rx", '=HYPERLINK("http://x","y")'])
-      expect(safeText(s)).toBe(`'${s}`);
+    for (const s of ["=1+1", "+A1", "-2+3", "@SUM(A1)", "\tx", "\rx", '=HYPERLINK("http://x","y")']) expect(safeText(s)).toBe(`'${s}`);
     for (const s of ["North", "1 = 1", "a-b", "Ø 6 mm", "'quoted"]) expect(safeText(s)).toBe(s);
     expect(safeText(null)).toBe("");
     expect(safeText(safeText("=x"))).toBe("'=x");

@@ -142,7 +142,12 @@ export function scheduleTable(entries: readonly ScheduleEntry[]): { columns: Col
     const o = e.option;
     if (!o) {
       const blanks = columns.length - head.length - 1;
-      return [...head, "(no approved option)", ...Array<CellValue>(blanks - 1).fill(null), "No option of this façade is approved yet; an architect or owner approves one."];
+      return [
+        ...head,
+        "(no approved option)",
+        ...Array<CellValue>(blanks - 1).fill(null),
+        "No option of this façade is approved yet; an architect or owner approves one.",
+      ];
     }
     const n = o.values.normal;
     const h = o.values.hemispherical;

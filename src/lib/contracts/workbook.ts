@@ -6,7 +6,10 @@ import { ResultsYear } from "./revisions";
 const REVISION_MESSAGE = "revision must be an issued revision's letter (A … Z, AA …), or left out for the current draft";
 
 /** An issued revision's letter; omitted = the current draft (owners and consultants only). */
-const revision = z.string({ error: REVISION_MESSAGE }).regex(/^[A-Z]{1,4}$/, REVISION_MESSAGE).optional();
+const revision = z
+  .string({ error: REVISION_MESSAGE })
+  .regex(/^[A-Z]{1,4}$/, REVISION_MESSAGE)
+  .optional();
 
 /** GET /projects/:id/workbook?revision=A (or ?year=YYYY for the draft; an issued revision keeps its own year). */
 export const WorkbookQuery = z.object({ revision, year: ResultsYear.optional() });
@@ -27,6 +30,10 @@ export const WorkbookCsvQuery = z
   })
   .superRefine((q, ctx) => {
     if ((q.table === "hourly" || q.table === "angles") && !q.facadeId)
-      ctx.addIssue({ code: "custom", path: ["facadeId"], message: `facadeId is required for the ${q.table} table (the façade whose option it shows)` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["facadeId"],
+        message: `facadeId is required for the ${q.table} table (the façade whose option it shows)`,
+      });
   });
 export type WorkbookCsvQuery = z.infer<typeof WorkbookCsvQuery>;

@@ -16,7 +16,7 @@ import { createHash } from "node:crypto";
 import { PassThrough, type Writable } from "node:stream";
 import { setImmediate as yieldToLoop } from "node:timers/promises";
 import ExcelJS from "exceljs";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { facade, facadeOption, makeupRevision, project } from "@/lib/server/db/schema";
 import { NotFoundError } from "@/lib/server/errors";
@@ -331,6 +331,9 @@ function rowsFor(e: HourlyEntry, res: ScheduleResponse): ScheduleRow[] {
   return rows.map((r) => ({ ...r, transmittedW: null, solarGainW: null }));
 }
 
+/** Hourly schedules computed ahead of the sheet being written: enough to keep the writer fed, few enough to keep memory flat. */
+const LOOKAHEAD = 2;
+
 /**
  * Computes the hourly schedules a few at a time ahead of the sheet being written (so that the workers
  * keep busy while exceljs writes, and memory holds only those few).
@@ -461,7 +464,7 @@ export async function writeWorkbookPlan(plan: WorkbookPlan, out: Writable, opts:
   wb.creator = "Paneray";
   wb.created = plan.revision ? new Date(plan.revision.issuedAt) : new Date();
   const names = new SheetNames();
-  const ahead = Math.max(2, pool?.size ?? 1);
+  const ahead = LOOKAHEAD;
   const hourly = new Lookahead(plan.hourly.length, ahead, (i) => {
     const e = plan.hourly[i]!;
     return e.problem ? Promise.resolve(null) : hourlyOf(plan, e, pool);
@@ -540,7 +543,7 @@ export async function writeWorkbookPlan(plan: WorkbookPlan, out: Writable, opts:
     );
     for (let k = 0; k < rows.length; k++) {
       addRow(ws, hourlyCells(rows[k]!), hourlyStyles);
-      if (k % 1000 === 999) await yieldToLoop(); // let the zip compress while rows are written
+      if (k % 250 === 249) await yieldToLoop(); // let the zip compress while rows are written
     }
     await previous; // at most the previous sheet still being compressed
     previous = sheetZipped(wb, ws);

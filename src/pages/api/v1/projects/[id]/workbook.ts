@@ -24,6 +24,9 @@ export const GET = endpoint(
       console.error(`[api] workbook of project ${project.id} failed while streaming:`, err);
       out.destroy(err instanceof Error ? err : new Error(String(err)));
     });
-    return new Response(Readable.toWeb(out) as ReadableStream<Uint8Array>, { status: 200, headers: workbookHeaders(plan.fileName, XLSX_CONTENT_TYPE) });
+    return new Response(Readable.toWeb(out) as ReadableStream<Uint8Array>, {
+      status: 200,
+      headers: workbookHeaders(plan.fileName, XLSX_CONTENT_TYPE),
+    });
   },
 );
