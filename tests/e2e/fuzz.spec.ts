@@ -538,3 +538,45 @@ for (const route of FUZZED) {
     if (process.env.FUZZ_VERBOSE) console.log(`${route.method} ${route.path}: answers ${JSON.stringify(statuses)}`);
   });
 }
+
+// The workbook downloads read no body but a query string: hostile values in each parameter. Every answer comes
+// within the timeout and below 500, refusals are problem+json, and nothing is ever stored.
+const QUERY_FUZZED = [
+  { path: "/api/v1/projects/:id/workbook", url: () => `/api/v1/projects/${projectId}/workbook`, keys: ["revision", "year"] },
+  {
+    path: "/api/v1/projects/:id/workbook.csv",
+    url: () => `/api/v1/projects/${projectId}/workbook.csv`,
+    keys: ["revision", "year", "table", "facadeId"],
+  },
+];
+
+test("every GET route with a query of its own is fuzzed", () => {
+  const fuzzed = new Set(QUERY_FUZZED.map((q) => q.path));
+  expect(
+    ROUTES.filter((r) => r.method === "GET" && r.path.includes("/workbook"))
+      .map((r) => r.path)
+      .filter((p) => !fuzzed.has(p)),
+  ).toEqual([]);
+});
+
+for (const route of QUERY_FUZZED) {
+  test(`GET ${route.path} never fails on a hostile query`, async () => {
+    const value = fc.oneof(
+      fc.constantFrom("A", "Z", "a", "AAAAA", "2026", "schedule", "hourly", "angles", "cover", ctx.facadeId, ""),
+      fc.constantFrom(...HOSTILE_STRINGS.map((s) => s.slice(0, 2000))),
+      spiked,
+    );
+    const queries = fc.dictionary(fc.constantFrom(...route.keys), value, { maxKeys: route.keys.length });
+    const before = await counts();
+    await fc.assert(
+      fc.asyncProperty(queries, async (q) => {
+        const search = new URLSearchParams(q as Record<string, string>).toString();
+        const res = await call(ctx.outsider, "GET", `${route.url()}${search ? `?${search}` : ""}`, undefined, REQUEST_TIMEOUT_MS);
+        if (res.status >= 500) throw new Error(`answered ${res.status} ${res.text.slice(0, 200)} for ?${search}`);
+        if (res.status >= 400) expect(res.headers.get("content-type") ?? "", `${res.status} for ?${search}`).toContain("application/problem+json");
+      }),
+      { seed: SEED, numRuns: RUNS, interruptAfterTimeLimit: 90_000, markInterruptAsFailure: false },
+    );
+    expect(await counts()).toEqual(before);
+  });
+}

@@ -58,6 +58,8 @@ interface Case {
   prepare: (actor: Actor) => Promise<Prepared>;
   /** Overrides the rule's answer for signed-in callers where the resource itself decides (and says why). */
   signedIn?: { status: number; why: string };
+  /** Adjusts the rule's answer where the handler asks for more (e.g. a permission for one form of the query). */
+  want?: (actor: Actor, ruleStatus: number) => number;
   after?: (actor: Actor, status: number, body: unknown) => void;
 }
 
@@ -327,6 +329,26 @@ const workspaceCases = (target: Target): Case[] => [
     target,
     prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/revisions/A` }),
   },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/workbook",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/workbook?revision=A` }),
+  },
+  {
+    // The draft (no revision named) needs export:create besides the row's rule: architects and clients get 403.
+    method: "GET",
+    path: "/api/v1/projects/:id/workbook",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target)).id}/workbook?year=2026` }),
+    want: (actor, ruled) => (ruled === 200 && !roleCan(actor, permissionFor("export:create")) ? 403 : ruled),
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/workbook.csv",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/workbook.csv?revision=A&table=schedule` }),
+  },
 ];
 
 const CASES: Case[] = [
@@ -471,7 +493,8 @@ for (const c of CASES) {
       const { path, body } = await c.prepare(actor);
       const res = await call(w.callers[actor], c.method, path, body);
       c.after?.(actor, res.status, res.body);
-      const want = actor !== "anonymous" && c.signedIn ? c.signedIn.status : expectedStatus(route, actor, c.target);
+      const ruled = actor !== "anonymous" && c.signedIn ? c.signedIn.status : expectedStatus(route, actor, c.target);
+      const want = c.want ? c.want(actor, ruled) : ruled;
       rows.push(`${actor.padEnd(10)} ${res.status} (expected ${want})`);
       expect.soft(res.status, `${actor}: ${c.method} ${path} answered ${res.text.slice(0, 160)}`).toBe(want);
       if (res.status >= 400)

@@ -197,6 +197,24 @@ export const ROUTES: readonly RouteEntry[] = [
     ok: 200,
     writes: false,
   },
+  // The schedule workbook of an issued revision (every role that sees the project) or of the draft (the
+  // handler refuses roles without export:create when no revision is named), and each of its tables as CSV.
+  {
+    file: "v1/projects/[id]/workbook.ts",
+    path: "/api/v1/projects/:id/workbook",
+    method: "GET",
+    auth: { project: "id", permission: "export:receive" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/projects/[id]/workbook.csv.ts",
+    path: "/api/v1/projects/:id/workbook.csv",
+    method: "GET",
+    auth: { project: "id", permission: "export:receive" },
+    ok: 200,
+    writes: false,
+  },
   {
     file: "v1/orgs/[orgId]/makeups/index.ts",
     path: "/api/v1/orgs/:orgId/makeups",

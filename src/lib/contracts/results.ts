@@ -77,6 +77,9 @@ export interface RevisionFacadeSnapshot {
   peak: OptionResult["peak"];
   monthly: OptionResult["monthly"];
   flags: RequirementFlag[];
+  /** The façade's glazed area (m²) and window with shading devices as the engine took them when issued (absent in revisions issued before they were kept). */
+  glazedAreaM2?: number | null;
+  shading?: unknown;
 }
 
 export interface RevisionSnapshot {

@@ -143,6 +143,8 @@ export async function issueRevision(
           peak: o.peak,
           monthly: o.monthly,
           flags: o.flags,
+          glazedAreaM2: f.glazedAreaM2,
+          shading: f.shading ?? null,
         });
       }
     }
