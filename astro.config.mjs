@@ -41,6 +41,20 @@ const calcWorker = {
         logLevel: "warning",
       });
       logger.info(`calculation worker bundled into ${outfile}`);
+      // The job worker that scripts/server.mjs runs inside the web server (packages stay in node_modules).
+      const jobs = fileURLToPath(new URL("./dist/server/jobs.mjs", import.meta.url));
+      await esbuild({
+        entryPoints: [fileURLToPath(new URL("./src/lib/server/jobs/main.ts", import.meta.url))],
+        outfile: jobs,
+        bundle: true,
+        packages: "external",
+        platform: "node",
+        format: "esm",
+        target: "node20",
+        tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
+        logLevel: "warning",
+      });
+      logger.info(`job worker bundled into ${jobs}`);
     },
   },
 };

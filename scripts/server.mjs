@@ -8,6 +8,9 @@
  * costs no file-system lookup: the adapter's own standalone server looks each request's path up on disk
  * twice before rendering, about a twentieth of the CPU time of a project-list request.
  *
+ * It also runs the job worker (e-mail deliveries, dist/server/jobs.mjs) in this process unless WORKER=off; then
+ * `npm run worker` runs it elsewhere. The worker never ends the process: while the database is away it retries.
+ *
  *   node scripts/server.mjs        (after `astro build`; HOST and PORT as for the adapter, default 127.0.0.1:4321)
  */
 import { readdirSync, readFileSync } from "node:fs";
@@ -85,9 +88,18 @@ server.listen(port, host, () => {
   console.log(`[server] listening on ${tls ? "https" : "http"}://${shown}`);
 });
 
+/** The job worker of this process, when it runs one. */
+const jobs = process.env.WORKER === "off" ? null : await import(new URL("../dist/server/jobs.mjs", import.meta.url).href);
+jobs?.startWorker();
+
 const stop = () => {
-  server.close(() => process.exit(0));
+  let open = 2;
+  const done = () => --open === 0 && process.exit(0);
+  server.close(done);
   server.closeAllConnections();
+  // The job in hand finishes (or is handed back to the queue) before the process ends.
+  if (jobs) jobs.stopWorker(4000).then(done, (err) => (console.error(`[jobs] ${err.message}`), done()));
+  else done();
   setTimeout(() => process.exit(0), 5000).unref();
 };
 process.once("SIGTERM", stop);

@@ -73,6 +73,9 @@ if [ -z "${SMTP_URL:-}" ]; then
 fi
 
 if [ -n "$DEV" ]; then
+  # astro dev has no startup hook of ours: the job worker (e-mail deliveries) runs beside it from the sources.
+  node_modules/.bin/tsx scripts/worker.ts &
+  PIDS+=("$!")
   node_modules/.bin/astro dev --host "$HOST" --port "$PORT" &
   MODE=" (development server: reloads on change)"
 else

@@ -20,6 +20,7 @@ import { OptionCreateRequest, OptionPatchRequest } from "@/lib/contracts/options
 import { RequirementsRequest } from "@/lib/contracts/requirements";
 import { call, createOutsider, type Outsider } from "./api-actors";
 import { CommentRequest, DecisionRequest } from "@/lib/contracts/review";
+import { DeliveryRequest } from "@/lib/contracts/deliveries";
 
 const SEED = Number(process.env.FC_SEED ?? 20261202);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 25);
@@ -429,6 +430,14 @@ const FUZZED: FuzzRoute[] = [
     schema: DecisionRequest,
     url: (c) => `/api/v1/options/${c.optionId}/decision`,
     example: () => ({ decision: "rejected", note: "Fuzzed note" }),
+  },
+  {
+    // The fuzz target has no issued revision: a valid body is answered 400 naming `revision`, nothing is queued.
+    method: "POST",
+    path: "/api/v1/projects/:id/deliveries",
+    schema: DeliveryRequest,
+    url: () => `/api/v1/projects/${projectId}/deliveries`,
+    example: (c) => ({ revision: "A", to: ["fuzz.design@e2e.example"], memberIds: [c.memberId], message: "Fuzzed message" }),
   },
 ];
 

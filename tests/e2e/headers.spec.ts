@@ -63,7 +63,14 @@ test("every main page renders under its Content-Security-Policy: no violations, 
   await signIn(page, demoUser("owner").email, DEMO_PASSWORD);
   const list = await (await page.request.get("/api/v1/projects")).json();
   const projectId: string = list.organizations[0].projects.find((p: { name: string }) => p.name === DEMO_PROJECTS[0].name).id;
-  for (const path of ["/dashboard", "/glazing", `/projects/${projectId}`, `/projects/${projectId}/sun`, `/orgs/${DEMO_ORGANIZATION.slug}/members`]) {
+  for (const path of [
+    "/dashboard",
+    "/glazing",
+    `/projects/${projectId}`,
+    `/projects/${projectId}/sun`,
+    `/projects/${projectId}/outbox`,
+    `/orgs/${DEMO_ORGANIZATION.slug}/members`,
+  ]) {
     expect(await visit(path), path).toBeGreaterThan(0);
   }
   // The sun page: its chart with the coloured legend, and a year's heat map drawn by the island.

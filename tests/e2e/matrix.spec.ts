@@ -70,7 +70,7 @@ function expectedStatus(route: RouteEntry, actor: Actor, target?: Target): numbe
   if (actor === "anonymous") return 401;
   if (rule === "user") return route.ok;
   if (actor === "outsider") return 404;
-  if ("project" in rule || "option" in rule) {
+  if ("project" in rule || "option" in rule || "delivery" in rule) {
     const visible = roleCan(actor, { project: ["readAll"] }) || (target === "shared" && roleCan(actor, { project: ["readShared"] }));
     if (!visible) return 404;
   }
@@ -351,6 +351,45 @@ const workspaceCases = (target: Target): Case[] => [
   },
 ];
 
+/** A delivery of revision A of a fresh issued project, queued by the consultant; `built` waits for its workbook. */
+async function throwawayDelivery(target: Target, built = false): Promise<string> {
+  const p = await workspaceProject(target, true);
+  const res = await call(consultant(), "POST", `/api/v1/projects/${p.id}/deliveries`, { revision: "A", to: ["matrix.delivery@e2e.example"] });
+  expect(res.status, res.text.slice(0, 200)).toBe(202);
+  const id = (res.body as { id: string }).id;
+  for (let i = 0; built && i < 100; i++) {
+    const d = (await call(consultant(), "GET", `/api/v1/deliveries/${id}`)).body as { delivery: { attachment: unknown } };
+    if (d.delivery.attachment) break;
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  return id;
+}
+
+const deliveryCases = (target: Target): Case[] => [
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/deliveries",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/deliveries` }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/deliveries",
+    target,
+    prepare: async () => ({
+      path: `/api/v1/projects/${(await workspaceProject(target, true)).id}/deliveries`,
+      body: { revision: "A", to: ["matrix.delivery@e2e.example"], message: "Sent by the access matrix" },
+    }),
+  },
+  { method: "GET", path: "/api/v1/deliveries/:id", target, prepare: async () => ({ path: `/api/v1/deliveries/${await throwawayDelivery(target)}` }) },
+  {
+    method: "GET",
+    path: "/api/v1/deliveries/:id/attachment",
+    target,
+    prepare: async () => ({ path: `/api/v1/deliveries/${await throwawayDelivery(target, true)}/attachment` }),
+  },
+];
+
 const CASES: Case[] = [
   { method: "GET", path: "/api/health", prepare: fixed("/api/health") },
   { method: "GET", path: "/api/v1/me", prepare: fixed("/api/v1/me") },
@@ -431,6 +470,8 @@ const CASES: Case[] = [
   ...optionCases("unshared"),
   ...reviewCases("shared"),
   ...reviewCases("unshared"),
+  ...deliveryCases("shared"),
+  ...deliveryCases("unshared"),
 ];
 
 const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);

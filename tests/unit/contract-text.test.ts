@@ -8,6 +8,7 @@ import * as glazingContracts from "@/lib/contracts/glazing";
 import * as projectContracts from "@/lib/contracts/projects";
 import * as scheduleContracts from "@/lib/contracts/schedule";
 import * as revisionContracts from "@/lib/contracts/revisions";
+import * as deliveryContracts from "@/lib/contracts/deliveries";
 import { fieldPath, zodFieldErrors } from "@/lib/server/http";
 
 const pane = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
@@ -44,9 +45,18 @@ const samples: Record<string, unknown> = {
     weather: [{ time: "2026-06-21T12:30:00Z", ghi: 800, dni: 600, dhi: 100 }],
   },
   RevisionIssueRequest: { note: "For tender\nsecond line", year: 2026 },
+  DeliveryRequest: { revision: "A", to: ["design@example.test"], memberIds: ["m_1"], message: "Revision A\nfor review" },
 };
 
-const modules = { ...authContracts, ...glazingContracts, ...projectContracts, ...scheduleContracts, ...revisionContracts, ...commonContracts };
+const modules = {
+  ...authContracts,
+  ...glazingContracts,
+  ...projectContracts,
+  ...scheduleContracts,
+  ...revisionContracts,
+  ...deliveryContracts,
+  ...commonContracts,
+};
 const isSchema = (v: unknown): v is ZodType => typeof v === "object" && v !== null && "safeParse" in v && "_zod" in v;
 const requestSchemas = Object.entries(modules).filter(([k, v]) => k.endsWith("Request") && isSchema(v)) as [string, ZodType][];
 
@@ -105,7 +115,7 @@ describe("contract string fields", () => {
   });
 
   it.each(cases.map((c) => [`${c.key}.${c.field}`, c] as const))("%s refuses control characters and broken Unicode, naming the field", (_, c) => {
-    const multiline = c.field === "description" || c.field === "note";
+    const multiline = c.field === "description" || c.field === "note" || c.field === "message";
     for (const [what, bad] of Object.entries(multiline ? refusedEverywhere : refusedInNames)) {
       const r = c.schema.safeParse(withValue(samples[c.key], c.path, bad));
       expect(r.success, `${c.key}.${c.field} accepted ${what}`).toBe(false);

@@ -81,11 +81,13 @@ describe("route table", () => {
             ? ["project", a.project]
             : "option" in a
               ? ["option", a.option]
-              : "makeup" in a
-                ? ["makeup", a.makeup]
-                : "pane" in a
-                  ? ["pane", a.pane]
-                  : ["org", a.org];
+              : "delivery" in a
+                ? ["delivery", a.delivery]
+                : "makeup" in a
+                  ? ["makeup", a.makeup]
+                  : "pane" in a
+                    ? ["pane", a.pane]
+                    : ["org", a.org];
         expect(code, key).toMatch(new RegExp(`auth:\\s*\\{\\s*${name}:\\s*"${value}"`));
         if (a.permission) expect(code, key).toMatch(new RegExp(`permission:\\s*"${a.permission}"`));
         else expect(code, key).not.toMatch(/permission:/);

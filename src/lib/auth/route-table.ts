@@ -22,6 +22,7 @@ export type RouteMethod = "GET" | "POST" | "PUT" | "PATCH" | "DELETE" | "ALL";
  * - org: the caller must be a member of the organisation named by a route parameter or a body field (404
  *   otherwise) and their role must hold `permission` (403 otherwise);
  * - option: the façade option named by a route parameter; the rule of its project applies (as `project`);
+ * - delivery: the e-mail delivery named by a route parameter; the rule of its project applies (as `project`);
  * - makeup / pane: the saved library item named by a route parameter; the rule of its organisation applies
  *   (as `org`: not a member of the item's organisation → 404, role without `permission` → 403);
  * - "better-auth": the request goes to better-auth, which answers for itself (an allowlist of its paths).
@@ -32,6 +33,7 @@ export type RouteAuth =
   | { readonly project: string; readonly permission?: PermissionKey }
   | { readonly org: string; readonly from?: "params" | "body"; readonly permission: PermissionKey }
   | { readonly option: string; readonly permission?: PermissionKey }
+  | { readonly delivery: string; readonly permission?: PermissionKey }
   | { readonly makeup: string; readonly permission: PermissionKey }
   | { readonly pane: string; readonly permission: PermissionKey }
   | "better-auth";
@@ -44,7 +46,7 @@ export interface RouteEntry {
   readonly method: RouteMethod;
   readonly auth: RouteAuth;
   /** The status of a successful call. */
-  readonly ok: 200 | 201 | 204;
+  readonly ok: 200 | 201 | 202 | 204;
   /** Whether the route changes stored data (the fuzz tests send hostile bodies to these). */
   readonly writes: boolean;
 }
@@ -358,6 +360,39 @@ export const ROUTES: readonly RouteEntry[] = [
     path: "/api/v1/projects/:id/history",
     method: "GET",
     auth: { project: "id", permission: "project:readAll" },
+    ok: 200,
+    writes: false,
+  },
+  // E-mail deliveries of issued workbooks (the outbox).
+  {
+    file: "v1/projects/[id]/deliveries.ts",
+    path: "/api/v1/projects/:id/deliveries",
+    method: "GET",
+    auth: { project: "id", permission: "export:create" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/projects/[id]/deliveries.ts",
+    path: "/api/v1/projects/:id/deliveries",
+    method: "POST",
+    auth: { project: "id", permission: "export:create" },
+    ok: 202,
+    writes: true,
+  },
+  {
+    file: "v1/deliveries/[id]/index.ts",
+    path: "/api/v1/deliveries/:id",
+    method: "GET",
+    auth: { delivery: "id", permission: "export:create" },
+    ok: 200,
+    writes: false,
+  },
+  {
+    file: "v1/deliveries/[id]/attachment.ts",
+    path: "/api/v1/deliveries/:id/attachment",
+    method: "GET",
+    auth: { delivery: "id", permission: "export:create" },
     ok: 200,
     writes: false,
   },

@@ -23,7 +23,7 @@ export const EMAIL_VERIFICATION_TTL_SECONDS = 24 * 3600;
  * Sends a mail without holding up the request: the answer must not take longer for a known address than
  * for an unknown one. Failures are logged.
  */
-export function sendInBackground(what: string, task: () => Promise<void>): void {
+export function sendInBackground(what: string, task: () => Promise<unknown>): void {
   void task().catch((err: unknown) => console.error(`[mail] ${what} failed:`, (err as Error)?.message ?? err));
 }
 

@@ -31,6 +31,16 @@ const Env = z.object({
    * CIDR blocks, e.g. "10.0.0.0/8, ::1"). Default none: the client address is the socket's.
    */
   TRUSTED_PROXIES: z.string().default(""),
+  /** "off": this web server runs no job worker (run `npm run worker` beside it); anything else runs one inside it. */
+  WORKER: z.string().default("on"),
+  /** E-mail deliveries an organisation may start per hour (429 with Retry-After past it). */
+  DELIVERY_RATE_LIMIT: z.coerce.number().int("DELIVERY_RATE_LIMIT must be a whole number").min(1).max(100_000).default(30),
+  /** Retries of a delivery whose sending failed, after the first attempt. */
+  DELIVERY_RETRY_LIMIT: z.coerce.number().int("DELIVERY_RETRY_LIMIT must be a whole number").min(0).max(50).default(5),
+  /** Seconds before the first retry; later ones wait about twice as long each time (with jitter). */
+  DELIVERY_RETRY_DELAY_SECONDS: z.coerce.number().int("DELIVERY_RETRY_DELAY_SECONDS must be a whole number").min(1).max(3600).default(20),
+  /** How often an idle worker looks for new jobs, in seconds. */
+  JOB_POLL_SECONDS: z.coerce.number().min(0.5, "JOB_POLL_SECONDS must be at least 0.5").max(60).default(2),
 });
 
 export type ServerEnv = z.infer<typeof Env>;

@@ -51,4 +51,14 @@ export class InvalidError extends DomainError {
   }
 }
 
+/** A limit on how often something may be done has been reached; it may be tried again after `retryAfterSeconds`. */
+export class RateLimitedError extends DomainError {
+  constructor(
+    message: string,
+    readonly retryAfterSeconds: number,
+  ) {
+    super(message);
+  }
+}
+
 export const fieldError = (field: string, message: string): FieldError => ({ field, message });

@@ -7,7 +7,7 @@ import type { APIContext, APIRoute } from "astro";
 import { z, type ZodType } from "zod";
 import type { FieldError, Problem } from "@/lib/contracts/problem";
 import { permissionFor, PERMISSION_PHRASES, type PermissionKey } from "@/lib/auth/roles";
-import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError } from "@/lib/server/errors";
+import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError, RateLimitedError } from "@/lib/server/errors";
 import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from "@/lib/server/db/unavailable";
 import type { Membership, ProjectRow } from "@/lib/server/services/access";
 import type { FacadeOption } from "@/lib/server/db/workspace-schema";
@@ -62,11 +62,12 @@ export class HttpError extends Error {
 }
 
 /** The status each domain error is answered with. */
-export function statusOfDomainError(err: DomainError): 400 | 403 | 404 | 409 | 500 {
+export function statusOfDomainError(err: DomainError): 400 | 403 | 404 | 409 | 429 | 500 {
   if (err instanceof NotFoundError) return 404;
   if (err instanceof ForbiddenError) return 403;
   if (err instanceof ConflictError) return 409;
   if (err instanceof InvalidError) return 400;
+  if (err instanceof RateLimitedError) return 429;
   return 500;
 }
 
@@ -166,6 +167,7 @@ function fromAuthError(err: unknown): HttpError | null {
  */
 export function problemFor(err: unknown, engineField?: string): HttpError | null {
   if (err instanceof HttpError) return err;
+  if (err instanceof RateLimitedError) return new HttpError(429, err.message, { retryAfterSeconds: err.retryAfterSeconds });
   if (err instanceof DomainError) return new HttpError(statusOfDomainError(err), err.message, err.errors.length ? { errors: err.errors } : {});
   if (err instanceof z.ZodError) return validationError(err);
   if (engineField !== undefined && err instanceof RangeError) {
@@ -186,7 +188,12 @@ export function withProblems(fn: (ctx: APIContext) => Promise<Response> | Respon
       return await fn(ctx);
     } catch (err) {
       const known = problemFor(err, engineField);
-      if (known) return known.toResponse();
+      if (known) {
+        const res = known.toResponse();
+        if (known.status === 429 && typeof known.extra.retryAfterSeconds === "number")
+          res.headers.set("retry-after", String(known.extra.retryAfterSeconds));
+        return res;
+      }
       if (err instanceof Error && err.name === "QueueFullError" && typeof (err as { retryAfterS?: unknown }).retryAfterS === "number") {
         // The calculation workers are all busy and their queue is full (calc-pool): nothing was saved.
         const res = problem(503, "Every calculation worker is busy at the moment; nothing was saved. Try again in a few seconds.");
@@ -228,6 +235,13 @@ export interface OptionAuth {
   action?: string;
 }
 
+/** An e-mail delivery named by a route parameter: its project's rule applies (as ProjectAuth). */
+export interface DeliveryAuth {
+  delivery: string;
+  permission?: PermissionKey;
+  action?: string;
+}
+
 /** A saved make-up or pane named by a route parameter: its organisation's rule applies (as OrgAuth). */
 export type LibraryAuth = ({ makeup: string } | { pane: string }) & { permission: PermissionKey; action?: string };
 
@@ -235,7 +249,7 @@ export type LibraryAuth = ({ makeup: string } | { pane: string }) & { permission
  * Who may call: "anonymous" (anyone), "user" (signed in), or a permission on a project, an option,
  * an organisation or a library item (signed in, and the role allows it; not visible → 404, not allowed → 403).
  */
-export type AuthSpec = "anonymous" | "user" | ProjectAuth | OrgAuth | OptionAuth | LibraryAuth;
+export type AuthSpec = "anonymous" | "user" | ProjectAuth | OrgAuth | OptionAuth | DeliveryAuth | LibraryAuth;
 
 type AuthContext<A extends AuthSpec> = A extends "anonymous"
   ? { user: SignedInUser | null }
@@ -243,9 +257,11 @@ type AuthContext<A extends AuthSpec> = A extends "anonymous"
     ? { user: SignedInUser; project: ProjectRow; membership: Membership }
     : A extends OptionAuth
       ? { user: SignedInUser; project: ProjectRow; membership: Membership; option: FacadeOption }
-      : A extends OrgAuth | LibraryAuth
-        ? { user: SignedInUser; membership: Membership }
-        : { user: SignedInUser };
+      : A extends DeliveryAuth
+        ? { user: SignedInUser; project: ProjectRow; membership: Membership; deliveryId: string }
+        : A extends OrgAuth | LibraryAuth
+          ? { user: SignedInUser; membership: Membership }
+          : { user: SignedInUser };
 
 export interface EndpointSpec<A extends AuthSpec, P, B> {
   auth: A;
@@ -266,7 +282,7 @@ export type EndpointInput<A extends AuthSpec, P, B> = {
   body: B;
 } & AuthContext<A>;
 
-const phrase = (auth: ProjectAuth | OrgAuth | OptionAuth | LibraryAuth) =>
+const phrase = (auth: ProjectAuth | OrgAuth | OptionAuth | DeliveryAuth | LibraryAuth) =>
   auth.action ?? (auth.permission && PERMISSION_PHRASES[auth.permission]) ?? "do this";
 
 function stringAt(source: unknown, key: string): string {
@@ -295,7 +311,7 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
     if (auth !== "anonymous" && !user) throw new HttpError(401, "Sign in to use this endpoint");
     const params = (spec.params ? parseParams(context.params, spec.params) : {}) as P;
 
-    let loaded: { project?: ProjectRow; membership?: Membership; option?: FacadeOption } = {};
+    let loaded: { project?: ProjectRow; membership?: Membership; option?: FacadeOption; deliveryId?: string } = {};
     const authorise = async (from: "params" | "body", source: unknown) => {
       if (typeof auth !== "object") return;
       if ("project" in auth && from === "params") {
@@ -304,6 +320,9 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
       } else if ("option" in auth && from === "params") {
         const permission = auth.permission ? permissionFor(auth.permission) : undefined;
         loaded = await (await access()).requireOption(user!.id, stringAt(source, auth.option), permission, phrase(auth));
+      } else if ("delivery" in auth && from === "params") {
+        const permission = auth.permission ? permissionFor(auth.permission) : undefined;
+        loaded = await (await access()).requireDelivery(user!.id, stringAt(source, auth.delivery), permission, phrase(auth));
       } else if (("makeup" in auth || "pane" in auth) && from === "params") {
         const [kind, key] = "makeup" in auth ? (["makeup", auth.makeup] as const) : (["pane", auth.pane] as const);
         const r = await (await access()).requireLibraryItem(user!.id, kind, stringAt(source, key), permissionFor(auth.permission), phrase(auth));

@@ -30,6 +30,10 @@ function getTransport(): Transporter | null {
         secure: u.protocol === "smtps:",
         // The local fake speaks plain SMTP; real servers negotiate STARTTLS.
         ignoreTLS: loopback,
+        // A server that does not answer fails the attempt instead of holding it for minutes (the queue retries).
+        connectionTimeout: 10_000,
+        greetingTimeout: 10_000,
+        socketTimeout: 60_000,
         auth: u.username ? { user: decodeURIComponent(u.username), pass: decodeURIComponent(u.password) } : undefined,
       });
     }
@@ -37,13 +41,18 @@ function getTransport(): Transporter | null {
   return transport;
 }
 
-export async function sendMail(mail: OutgoingMail): Promise<void> {
+/** Whether SMTP_URL names a server (without one, messages are only logged). */
+export const canSendMail = (): boolean => getTransport() !== null;
+
+/** Sends the message; resolves with the Message-ID the SMTP server accepted (null when only logged). */
+export async function sendMail(mail: OutgoingMail): Promise<{ messageId: string } | null> {
   const t = getTransport();
   if (!t) {
     console.info(`[mail] SMTP_URL not set; not sent. To: ${mail.to} | ${mail.subject}\n${mail.text}`);
-    return;
+    return null;
   }
-  await t.sendMail({ from: serverEnv().MAIL_FROM, ...mail });
+  const info = (await t.sendMail({ from: serverEnv().MAIL_FROM, ...mail })) as { messageId?: string };
+  return { messageId: info.messageId ?? "" };
 }
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);

@@ -47,6 +47,8 @@ export interface ProjectPage {
   canSeeDrafts: boolean;
   /** Add, re-point and remove options; set the requirements. */
   canAssign: boolean;
+  /** Send issued workbooks by e-mail (the outbox): owners and consultants. */
+  canSend: boolean;
   /** The issued schedule revisions, newest first (everyone who sees the project). */
   revisions: { letter: string; issuedAt: string; issuedBy: string; note: string | null; facadeCount: number }[];
 }
@@ -67,6 +69,7 @@ export async function loadProjectPage(user: PageUser, projectId: string | undefi
     shares: canShare ? await sharesOf(project) : [],
     canSeeDrafts: roleCan(membership.role, { project: ["readAll"] }),
     canAssign: roleCan(membership.role, { option: ["assign"] }),
+    canSend: roleCan(membership.role, { export: ["create"] }),
     revisions: await revisionListOf(project.id),
   };
 }

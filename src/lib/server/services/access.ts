@@ -4,7 +4,7 @@
  */
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
-import { facadeOption, libraryPane, makeup, member, organization, project, projectShare, type FacadeOption } from "@/lib/server/db/schema";
+import { delivery, facadeOption, libraryPane, makeup, member, organization, project, projectShare, type FacadeOption } from "@/lib/server/db/schema";
 import { ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { roleCan, type Permission, isRoleName, type RoleName } from "@/lib/auth/roles";
 
@@ -123,4 +123,25 @@ export async function requireLibraryItem(
   if (!m) throw notFound;
   if (!roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return { membership: m, organizationId: row.organizationId };
+}
+
+/**
+ * Loads an e-mail delivery's project for the user, with the project's rule (as requireOption): NotFoundError
+ * when the delivery does not exist or its project is not visible to them, ForbiddenError without `permission`.
+ */
+export async function requireDelivery(
+  userId: string,
+  deliveryId: string,
+  permission?: Permission,
+  action = "see this project's deliveries",
+): Promise<{ project: ProjectRow; membership: Membership; deliveryId: string }> {
+  const d = (await db.select({ projectId: delivery.projectId }).from(delivery).where(eq(delivery.id, deliveryId)))[0];
+  const notFound = new NotFoundError("No such delivery, or its project is not shared with you");
+  if (!d) throw notFound;
+  try {
+    return { ...(await requireProject(userId, d.projectId, permission, action)), deliveryId };
+  } catch (err) {
+    if (err instanceof NotFoundError) throw notFound;
+    throw err;
+  }
 }
