@@ -253,6 +253,19 @@ export const ROUTES: readonly RouteEntry[] = [
     ok: 201,
     writes: true,
   },
+  // Uploads (multipart/form-data, field `file`): measured panes into the library, a project's weather series.
+  {
+    file: "v1/orgs/[orgId]/panes/import.ts",
+    path: "/api/v1/orgs/:orgId/panes/import",
+    method: "POST",
+    auth: { org: "orgId", permission: "glazing:create" },
+    ok: 201,
+    writes: true,
+  },
+  { file: "v1/projects/[id]/weather/index.ts", path: "/api/v1/projects/:id/weather", method: "GET", auth: { project: "id", permission: "project:readAll" }, ok: 200, writes: false },
+  { file: "v1/projects/[id]/weather/index.ts", path: "/api/v1/projects/:id/weather", method: "POST", auth: { project: "id", permission: "project:update" }, ok: 201, writes: true },
+  { file: "v1/projects/[id]/weather/index.ts", path: "/api/v1/projects/:id/weather", method: "DELETE", auth: { project: "id", permission: "project:update" }, ok: 204, writes: true },
+  { file: "v1/projects/[id]/weather/file.ts", path: "/api/v1/projects/:id/weather/file", method: "GET", auth: { project: "id", permission: "project:readAll" }, ok: 200, writes: false },
   { file: "v1/panes/[id].ts", path: "/api/v1/panes/:id", method: "GET", auth: { pane: "id", permission: "glazing:read" }, ok: 200, writes: false },
   { file: "v1/panes/[id].ts", path: "/api/v1/panes/:id", method: "PATCH", auth: { pane: "id", permission: "glazing:update" }, ok: 200, writes: true },
   {
