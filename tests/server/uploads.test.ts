@@ -33,7 +33,7 @@ const LONGITUDE = -8.61 + Math.round(Math.random() * 1e6) / 1e9;
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- each test reads its own answer's shape
 type Answer = { status: number; body: any };
 
-async function send(route: APIRoute, caller: RouteCaller, path: string, params: Record<string, string>, request: Request): Promise<Answer> {
+async function send(route: APIRoute, caller: RouteCaller, _path: string, params: Record<string, string>, request: Request): Promise<Answer> {
   const res = (await route({ request, url: new URL(request.url), params, locals: { user: caller } } as never)) as Response;
   return { status: res.status, body: res.status === 204 ? null : await res.json() };
 }
@@ -94,9 +94,21 @@ describe("POST /api/v1/orgs/:orgId/panes/import", () => {
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     expect(res.body.sha256).toBe(sha(file));
     expect(res.body.panes.map((p: { name: string }) => p.name)).toEqual(["Brightwater clear 6", "Brightwater solar grey 8", "Kestrel low-e 6"]);
-    expect(res.body.panes[1].layer.measured).toEqual({ solarTransmittance: 0.41, solarReflectanceFront: 0.061, solarReflectanceBack: 0.089, visibleTransmittance: 0.46 });
+    expect(res.body.panes[1].layer.measured).toEqual({
+      solarTransmittance: 0.41,
+      solarReflectanceFront: 0.061,
+      solarReflectanceBack: 0.089,
+      visibleTransmittance: 0.46,
+    });
     const kept = (await db.select().from(upload).where(eq(upload.id, res.body.upload.id)))[0]!;
-    expect(kept).toMatchObject({ kind: "panes", fileName: "bench-samples.csv", sha256: sha(file), sizeBytes: file.length, rowCount: 3, projectId: null });
+    expect(kept).toMatchObject({
+      kind: "panes",
+      fileName: "bench-samples.csv",
+      sha256: sha(file),
+      sizeBytes: file.length,
+      rowCount: 3,
+      projectId: null,
+    });
     expect(Buffer.compare(kept.content, file)).toBe(0);
     expect(sha(kept.content)).toBe(kept.sha256);
     expect((kept.summary as { paneIds: string[] }).paneIds).toEqual(res.body.panes.map((p: { id: string }) => p.id));
@@ -130,7 +142,13 @@ describe("POST /api/v1/orgs/:orgId/panes/import", () => {
   });
 
   it("refuses a body that is not multipart, a form without the file field and an empty file", async () => {
-    const json = await send(importRoute, owner, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "POST", body: "{}", headers: { "content-type": "application/json" } }));
+    const json = await send(
+      importRoute,
+      owner,
+      path(),
+      params(),
+      new Request(`http://127.0.0.1${path()}`, { method: "POST", body: "{}", headers: { "content-type": "application/json" } }),
+    );
     expect(json.status).toBe(415);
     const form = new FormData();
     form.set("other", "x");
@@ -144,7 +162,9 @@ describe("POST /api/v1/orgs/:orgId/panes/import", () => {
 
   it("refuses a 10 MB file (413) after reading little more than the 5 MB limit", async () => {
     const boundary = "----paneray-test-boundary";
-    const head = new TextEncoder().encode(`--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="big.csv"\r\ncontent-type: text/csv\r\n\r\nname,thickness_mm,solar_t,solar_rf,solar_rb\r\n`);
+    const head = new TextEncoder().encode(
+      `--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="big.csv"\r\ncontent-type: text/csv\r\n\r\nname,thickness_mm,solar_t,solar_rf,solar_rb\r\n`,
+    );
     const row = new TextEncoder().encode("Brightwater clear 6,6,0.79,0.072,0.072\r\n".repeat(1600)); // 64,000 bytes
     const total = 10 * 1024 * 1024;
     let pulled = 0;
@@ -210,17 +230,31 @@ describe("POST /api/v1/projects/:id/weather and the results", () => {
     expect(stored.hours).toBe(8760);
     const kept = (await db.select().from(upload).where(eq(upload.id, stored.uploadId)))[0]!;
     expect(sha(kept.content)).toBe(sha(csv));
-    const events = await db.select().from(projectEvent).where(and(eq(projectEvent.projectId, projectId), eq(projectEvent.kind, "weather.uploaded")));
+    const events = await db
+      .select()
+      .from(projectEvent)
+      .where(and(eq(projectEvent.projectId, projectId), eq(projectEvent.kind, "weather.uploaded")));
     expect(events).toHaveLength(1);
     expect(events[0]!.summary).toContain("quay-2025.csv");
 
-    const file = (await weatherFile({ request: new Request("http://127.0.0.1/"), params: params(), locals: { user: architect } } as never)) as Response;
+    const file = (await weatherFile({
+      request: new Request("http://127.0.0.1/"),
+      params: params(),
+      locals: { user: architect },
+    } as never)) as Response;
     expect(file.status).toBe(200);
     expect(sha(new Uint8Array(await file.arrayBuffer()))).toBe(sha(csv));
     expect(file.headers.get("content-disposition")).toContain("quay-2025.csv");
 
     const withWeather = await results();
-    expect(withWeather.irradiance).toMatchObject({ source: "weather series", fileName: "quay-2025.csv", sha256: sha(csv), fromDate: "2025-01-01", toDate: "2025-12-31", hours: 8760 });
+    expect(withWeather.irradiance).toMatchObject({
+      source: "weather series",
+      fileName: "quay-2025.csv",
+      sha256: sha(csv),
+      fromDate: "2025-01-01",
+      toDate: "2025-12-31",
+      hours: 8760,
+    });
     expect(withWeather.inputsKey).not.toBe(clearSky.inputsKey);
     expect(withWeather.cache).toEqual({ hits: 0, misses: 2 });
     const a = withWeather.facades[0]!.options[0]!;
@@ -234,16 +268,22 @@ describe("POST /api/v1/projects/:id/weather and the results", () => {
       .slice(1)
       .map((l) => l.split(","))
       .map(([t, g, b, d]) => ({ time: new Date(Date.parse(t!) + 30 * 60_000).toISOString(), ghi: +g!, dni: +b!, dhi: +d! }));
-    const sched = await callRoute(scheduleRoute, consultant, "/api/v1/calc/schedule", {}, {
-      method: "POST",
-      body: {
-        site: { latitudeDeg: 41.15, longitudeDeg: LONGITUDE, timeZone: "Europe/Lisbon", elevationM: 0 },
-        from: "2025-01-01",
-        to: "2025-12-31",
-        surfaces: [{ name: "South", azimuthDeg: 180, tiltDeg: 90, layers: double(clear(6), clear(4)) }],
-        weather,
+    const sched = await callRoute(
+      scheduleRoute,
+      consultant,
+      "/api/v1/calc/schedule",
+      {},
+      {
+        method: "POST",
+        body: {
+          site: { latitudeDeg: 41.15, longitudeDeg: LONGITUDE, timeZone: "Europe/Lisbon", elevationM: 0 },
+          from: "2025-01-01",
+          to: "2025-12-31",
+          surfaces: [{ name: "South", azimuthDeg: 180, tiltDeg: 90, layers: double(clear(6), clear(4)) }],
+          weather,
+        },
       },
-    });
+    );
     expect(sched.status).toBe(200);
     const s = (sched.body as ScheduleResponse).surfaces[0]!;
     expect((sched.body as ScheduleResponse).irradiance).toBe("weather series");
@@ -255,7 +295,9 @@ describe("POST /api/v1/projects/:id/weather and the results", () => {
     expect(a.peak.transmittedWm2).toBeLessThan(1361);
 
     // The comparison says the same, and a second call hits the cache.
-    const cmp = await callRoute(compareRoute, consultant, `/api/v1/projects/${projectId}/compare?options=${optionIds.join(",")}&year=${year}`, { id: projectId });
+    const cmp = await callRoute(compareRoute, consultant, `/api/v1/projects/${projectId}/compare?options=${optionIds.join(",")}&year=${year}`, {
+      id: projectId,
+    });
     expect(cmp.status).toBe(200);
     expect((cmp.body as { irradiance: { source: string } }).irradiance.source).toBe("weather series");
     expect((await results()).cache).toEqual({ hits: 2, misses: 0 });
@@ -273,13 +315,26 @@ describe("POST /api/v1/projects/:id/weather and the results", () => {
   });
 
   it("DELETE returns the results to the clear sky", async () => {
-    expect((await send(deleteWeatherRoute, architect, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "DELETE" }))).status).toBe(403);
-    expect((await send(deleteWeatherRoute, consultant, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "DELETE" }))).status).toBe(204);
-    expect((await db.select().from(upload).where(and(eq(upload.projectId, projectId), eq(upload.kind, "weather")))).length).toBe(0);
+    expect((await send(deleteWeatherRoute, architect, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "DELETE" }))).status).toBe(
+      403,
+    );
+    expect(
+      (await send(deleteWeatherRoute, consultant, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "DELETE" }))).status,
+    ).toBe(204);
+    expect(
+      (
+        await db
+          .select()
+          .from(upload)
+          .where(and(eq(upload.projectId, projectId), eq(upload.kind, "weather")))
+      ).length,
+    ).toBe(0);
     const back = await results();
     expect(back.irradiance).toEqual({ source: "clear sky" });
     expect(back.inputsKey).toBe(clearSky.inputsKey);
     expect(back.facades[0]!.options[0]!.annual).toEqual(clearSky.facades[0]!.options[0]!.annual);
-    expect((await send(deleteWeatherRoute, consultant, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "DELETE" }))).status).toBe(404);
+    expect(
+      (await send(deleteWeatherRoute, consultant, path(), params(), new Request(`http://127.0.0.1${path()}`, { method: "DELETE" }))).status,
+    ).toBe(404);
   });
 });

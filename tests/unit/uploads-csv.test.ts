@@ -32,7 +32,12 @@ describe("measured panes file", () => {
         visibleReflectanceBack: 0.081,
       },
     });
-    expect((r.panes[1]!.layer as { measured: object }).measured).toEqual({ solarTransmittance: 0.41, solarReflectanceFront: 0.061, solarReflectanceBack: 0.089, visibleTransmittance: 0.46 });
+    expect((r.panes[1]!.layer as { measured: object }).measured).toEqual({
+      solarTransmittance: 0.41,
+      solarReflectanceFront: 0.061,
+      solarReflectanceBack: 0.089,
+      visibleTransmittance: 0.46,
+    });
     expect(r.panes[2]!.note).toBe("Coated face inside (face 2 of a double)\nmeasured 2026-03-11");
     // Each saved pane is what the single-pane endpoint's schema accepts.
     for (const p of r.panes) expect(PaneCreateRequest.safeParse(p).success).toBe(true);
@@ -67,7 +72,9 @@ describe("measured panes file", () => {
   });
 
   it("refuses a file that is not UTF-8 and names its line", () => {
-    const r = validatePanesCsv(new Uint8Array([...bytes("name,thickness_mm,solar_t,solar_rf,solar_rb\nA,6,0.8,0.07,0.07\nB"), 0xff, ...bytes(",6,0.8,0.07,0.07\n")]));
+    const r = validatePanesCsv(
+      new Uint8Array([...bytes("name,thickness_mm,solar_t,solar_rf,solar_rb\nA,6,0.8,0.07,0.07\nB"), 0xff, ...bytes(",6,0.8,0.07,0.07\n")]),
+    );
     expect(!r.ok && r.errors[0]).toMatchObject({ line: 3, column: "(file)" });
   });
 });
@@ -132,5 +139,15 @@ describe("zone clock", () => {
       "2025-11-02T06:30:00.000Z",
     ]);
     expect(c.instantsOf({ year: 2025, month: 7, day: 1, hour: 12, minute: 0, second: 0 })).toEqual([Date.UTC(2025, 6, 1, 16)]);
+  });
+});
+
+describe("templates offered by the upload forms", () => {
+  const template = (name: string) => readFileSync(new URL(`../../public/templates/${name}`, import.meta.url));
+  it("are valid files of their upload", () => {
+    const panes = validatePanesCsv(template("paneray-panes-template.csv"));
+    expect(panes.ok && panes.panes.length).toBe(4);
+    const weather = validateWeatherCsv(template("paneray-weather-template.csv"), "Europe/Lisbon");
+    expect(weather.ok && weather.weather.hours).toBe(24);
   });
 });

@@ -49,9 +49,9 @@ export async function importPanes(
       ids.push(saved!.id);
     }
     if (ids.length)
-      await tx.insert(libraryPaneRevision).values(
-        panes.map((p, i) => ({ paneId: ids[i]!, revision: 1, name: p.name, layer: p.layer, note: p.note ?? null, createdById: actor.id })),
-      );
+      await tx
+        .insert(libraryPaneRevision)
+        .values(panes.map((p, i) => ({ paneId: ids[i]!, revision: 1, name: p.name, layer: p.layer, note: p.note ?? null, createdById: actor.id })));
     const [row] = await tx
       .insert(upload)
       .values({
@@ -217,7 +217,15 @@ export interface ResultsWeather {
 export async function weatherForResults(projectId: string): Promise<ResultsWeather | null> {
   const row = (
     await db
-      .select({ series: weatherSeries.series, from: weatherSeries.fromTime, to: weatherSeries.toTime, hours: weatherSeries.hours, fileName: upload.fileName, sha256: upload.sha256, summary: upload.summary })
+      .select({
+        series: weatherSeries.series,
+        from: weatherSeries.fromTime,
+        to: weatherSeries.toTime,
+        hours: weatherSeries.hours,
+        fileName: upload.fileName,
+        sha256: upload.sha256,
+        summary: upload.summary,
+      })
       .from(weatherSeries)
       .innerJoin(upload, eq(upload.id, weatherSeries.uploadId))
       .where(eq(weatherSeries.projectId, projectId))

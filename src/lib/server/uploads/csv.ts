@@ -49,13 +49,7 @@ export function decodeText(bytes: Uint8Array, errors: ErrorList): string | null 
  * Parses CSV text and checks its header against the columns an upload knows. Returns null (with the problems
  * in `errors`) when the header cannot be used; rows beyond `maxRows` are refused as a whole.
  */
-export function readCsv(
-  text: string,
-  known: readonly string[],
-  required: readonly string[],
-  maxRows: number,
-  errors: ErrorList,
-): CsvTable | null {
+export function readCsv(text: string, known: readonly string[], required: readonly string[], maxRows: number, errors: ErrorList): CsvTable | null {
   const parsed = Papa.parse<string[]>(text, { header: false, skipEmptyLines: false, delimiter: "" });
   const data = parsed.data;
   for (const e of parsed.errors) {
@@ -86,8 +80,7 @@ export function readCsv(
       errors.add(i + 1, "(file)", `the file holds more than ${maxRows} data rows; split it`);
       return null;
     }
-    if (cells.length !== header.length)
-      errors.add(i + 1, "(row)", `this row has ${cells.length} values; the header names ${header.length} columns`);
+    if (cells.length !== header.length) errors.add(i + 1, "(row)", `this row has ${cells.length} values; the header names ${header.length} columns`);
     rows.push({ line: i + 1, cells });
   }
   if (rows.length === 0) errors.add(2, "(file)", "the file has a header but no data rows");

@@ -93,11 +93,20 @@ export function validateWeatherCsv(bytes: Uint8Array, timeZone: string): Weather
     const m = TIME.exec(raw);
     let t = NaN;
     if (!raw) errors.add(line, "time", "time is needed on every row");
-    else if (!m) errors.add(line, "time", `“${raw.slice(0, 40)}” is not a time; write e.g. 2025-06-01T10:00+02:00, 2025-06-01T08:00Z or 2025-06-01 10:00`);
+    else if (!m)
+      errors.add(line, "time", `“${raw.slice(0, 40)}” is not a time; write e.g. 2025-06-01T10:00+02:00, 2025-06-01T08:00Z or 2025-06-01 10:00`);
     else {
       const w: WallTime = { year: +m[1]!, month: +m[2]!, day: +m[3]!, hour: +m[4]!, minute: +m[5]!, second: m[6] ? +m[6] : 0 };
       const real = new Date(Date.UTC(w.year, w.month - 1, w.day));
-      if (w.month < 1 || w.month > 12 || real.getUTCDate() !== w.day || real.getUTCMonth() !== w.month - 1 || w.hour > 23 || w.minute > 59 || w.second > 59)
+      if (
+        w.month < 1 ||
+        w.month > 12 ||
+        real.getUTCDate() !== w.day ||
+        real.getUTCMonth() !== w.month - 1 ||
+        w.hour > 23 ||
+        w.minute > 59 ||
+        w.second > 59
+      )
         errors.add(line, "time", `“${raw}” is not a real date and time`);
       else if (m[7]) {
         const z = m[7].toUpperCase();

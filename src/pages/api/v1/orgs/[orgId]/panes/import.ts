@@ -16,9 +16,13 @@ export const POST = endpoint({ auth: { org: "orgId", permission: "glazing:create
   const checked = validatePanesCsv(file.bytes);
   if (!checked.ok) {
     const n = checked.errors.length;
-    return problem(400, `The file has ${n === 1 ? "a problem" : `${n} problems`}; nothing was saved. Fix ${n === 1 ? "it" : "them"} and upload it again.`, {
-      errors: checked.errors as never,
-    });
+    return problem(
+      400,
+      `The file has ${n === 1 ? "a problem" : `${n} problems`}; nothing was saved. Fix ${n === 1 ? "it" : "them"} and upload it again.`,
+      {
+        errors: checked.errors as never,
+      },
+    );
   }
   const saved = await importPanes(params.orgId, { id: user.id, name: user.name }, file, checked.panes);
   return json({ panes: saved.panes, upload: saved.upload, sha256: file.sha256 }, 201);

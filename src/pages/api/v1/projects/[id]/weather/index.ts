@@ -21,9 +21,13 @@ export const POST = endpoint({ auth: { project: "id", permission: "project:updat
   const checked = validateWeatherCsv(file.bytes, project.timeZone);
   if (!checked.ok) {
     const n = checked.errors.length;
-    return problem(400, `The file has ${n === 1 ? "a problem" : `${n} problems`}; nothing was saved. Fix ${n === 1 ? "it" : "them"} and upload it again.`, {
-      errors: checked.errors as never,
-    });
+    return problem(
+      400,
+      `The file has ${n === 1 ? "a problem" : `${n} problems`}; nothing was saved. Fix ${n === 1 ? "it" : "them"} and upload it again.`,
+      {
+        errors: checked.errors as never,
+      },
+    );
   }
   const weather = await saveWeather(project, { id: user.id, name: user.name }, file, checked.weather);
   return json({ from: weather.from, to: weather.to, hours: weather.hours, sha256: weather.sha256, weather }, 201);
