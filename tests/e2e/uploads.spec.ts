@@ -7,7 +7,7 @@ import { createHash } from "node:crypto";
 import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
 import { call, signInDemo } from "./api-actors";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow } from "./workspace-rows";
-import { weatherCsv } from "../fixtures/uploads/weather-file";
+import { weatherCsv } from "@scripts/weather-year";
 
 const fixture = (name: string) => readFileSync(new URL(`../fixtures/uploads/${name}`, import.meta.url));
 const noOverflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);

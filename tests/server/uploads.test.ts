@@ -21,7 +21,7 @@ import { GET as compareRoute } from "@/pages/api/v1/projects/[id]/compare";
 import { POST as scheduleRoute } from "@/pages/api/v1/calc/schedule";
 import { callRoute, invitedMember, newOwner, type RouteCaller } from "./helpers";
 import { clear, double, insertMakeup, insertOption, tinted } from "./workspace-fixtures";
-import { weatherCsv } from "../fixtures/uploads/weather-file";
+import { weatherCsv } from "@scripts/weather-year";
 
 afterAll(() => pool.end());
 

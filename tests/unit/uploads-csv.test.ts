@@ -6,7 +6,7 @@ import { validatePanesCsv } from "@/lib/server/uploads/panes-csv";
 import { engineWeather, validateWeatherCsv } from "@/lib/server/uploads/weather-csv";
 import { PaneCreateRequest } from "@/lib/contracts/library";
 import { zoneClock } from "@/lib/time/local-instant";
-import { weatherCsv } from "../fixtures/uploads/weather-file";
+import { weatherCsv } from "@scripts/weather-year";
 
 const fixture = (name: string) => readFileSync(new URL(`../fixtures/uploads/${name}`, import.meta.url));
 const bytes = (text: string) => new TextEncoder().encode(text);
