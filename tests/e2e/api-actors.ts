@@ -31,15 +31,16 @@ export async function call(caller: Caller, method: string, path: string, body?: 
   const base = baseUrl();
   const headers: Record<string, string> = { origin: new URL(base).origin, accept: "application/json" };
   if (caller.cookie) headers.cookie = caller.cookie;
-  if (body !== undefined) headers["content-type"] = "application/json";
+  // FormData (multipart uploads) sets its own content type with the boundary.
+  if (body !== undefined && !(body instanceof FormData)) headers["content-type"] = "application/json";
   const res = await fetch(base + path, {
     method,
     headers,
     body:
       body === undefined
         ? undefined
-        : typeof body === "string" || body instanceof Uint8Array
-          ? (body as string | Uint8Array<ArrayBuffer>)
+        : typeof body === "string" || body instanceof Uint8Array || body instanceof FormData
+          ? (body as string | Uint8Array<ArrayBuffer> | FormData)
           : JSON.stringify(body),
     redirect: "manual",
     signal: AbortSignal.timeout(timeoutMs),

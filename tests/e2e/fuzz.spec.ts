@@ -18,7 +18,7 @@ import { RevisionIssueRequest } from "@/lib/contracts/revisions";
 import { MakeupCreateRequest, MakeupPatchRequest, PaneCreateRequest, PanePatchRequest } from "@/lib/contracts/library";
 import { OptionCreateRequest, OptionPatchRequest } from "@/lib/contracts/options";
 import { RequirementsRequest } from "@/lib/contracts/requirements";
-import { call, createOutsider, type Outsider } from "./api-actors";
+import { baseUrl, call, createOutsider, type Outsider } from "./api-actors";
 import { CommentRequest, DecisionRequest } from "@/lib/contracts/review";
 import { DeliveryRequest } from "@/lib/contracts/deliveries";
 
@@ -504,7 +504,7 @@ test.afterAll(async () => {
 test("every route that reads a body is fuzzed", () => {
   const bodyRoutes = ROUTES.filter((r) => r.method === "POST" || r.method === "PATCH" || r.method === "PUT").filter((r) => r.auth !== "better-auth");
   const withoutBody = ["POST /api/v1/invitations/:id/accept"];
-  const fuzzed = new Set(FUZZED.map((r) => `${r.method} ${r.path}`));
+  const fuzzed = new Set([...FUZZED, ...UPLOADS].map((r) => `${r.method} ${r.path}`));
   expect(bodyRoutes.map((r) => `${r.method} ${r.path}`).filter((k) => !fuzzed.has(k) && !withoutBody.includes(k))).toEqual([]);
 });
 
@@ -587,5 +587,108 @@ for (const route of QUERY_FUZZED) {
       { seed: SEED, numRuns: RUNS, interruptAfterTimeLimit: 90_000, markInterruptAsFailure: false },
     );
     expect(await counts()).toEqual(before);
+  });
+}
+
+// ---- multipart uploads ----------------------------------------------------------------------------------------
+// The upload routes read a CSV file from multipart/form-data, not JSON: they get files whose header is right and
+// whose cells are hostile, files of hostile bytes, and broken multipart bodies (no boundary, a boundary that never
+// closes, a wrong field name, two files, headers only).
+
+const UPLOADS = [
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/panes/import",
+    url: (c: Ctx) => `/api/v1/orgs/${c.outsider.organizationId}/panes/import`,
+    header: "name,thickness_mm,solar_t,solar_rf,solar_rb,light_t,light_rf,light_rb,emissivity_front,emissivity_back,note",
+    valid: ["Fuzzed pane", "6", "0.8", "0.07", "0.07", "", "", "", "", "", "note"],
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/weather",
+    url: () => `/api/v1/projects/${projectId}/weather`,
+    header: "time,ghi_wm2,dni_wm2,dhi_wm2,air_temperature_c",
+    valid: ["2026-06-21T10:00Z", "700", "650", "150", "21"],
+  },
+] as const;
+
+const csvCell = fc.oneof(
+  fc.constantFrom(...HOSTILE_STRINGS.filter((x) => x.length < 1000)),
+  spiked,
+  fc.constantFrom("0", "-1", "1e309", "NaN", "0,5", "2026-13-40T25:61Z", "2026-03-29 02:30", '"', '""', "\r", "\n"),
+  fc.double({ noNaN: false }).map(String),
+);
+
+const boundary = "----fuzz-boundary";
+const part = (name: string, fileName: string | null, content: string) =>
+  `--${boundary}\r\ncontent-disposition: form-data; name="${name}"${fileName === null ? "" : `; filename="${fileName}"`}\r\ncontent-type: text/csv\r\n\r\n${content}\r\n`;
+
+for (const route of UPLOADS) {
+  test(`${route.method} ${route.path} never fails or saves a refused upload`, async () => {
+    const rows = fc.array(
+      fc.tuple(fc.nat({ max: route.valid.length - 1 }), csvCell).map(([i, v]) => route.valid.map((x, k) => (k === i ? v : x))),
+      { minLength: 1, maxLength: 5 },
+    );
+    const csvText = rows.map((rs) =>
+      [route.header, ...rs.map((r) => r.map((c) => (/[",\r\n]/.test(c) ? `"${c.replace(/"/g, '""')}"` : c)).join(","))].join("\n"),
+    );
+    const fileName = fc.oneof(fc.constant("fuzz.csv"), fc.constantFrom(...HOSTILE_STRINGS.filter((x) => x.length < 1000)), spiked);
+    type Body = { kind: "form"; text: string; name: string } | { kind: "raw"; body: string; type: string };
+    const bodies: fc.Arbitrary<Body> = fc.oneof(
+      { arbitrary: fc.tuple(csvText, fileName).map(([text, name]): Body => ({ kind: "form", text, name })), weight: 6 },
+      { arbitrary: fc.string({ maxLength: 300 }).map((text): Body => ({ kind: "form", text, name: "fuzz.csv" })), weight: 2 },
+      {
+        arbitrary: fc
+          .tuple(csvText, fc.constantFrom("no-end", "wrong-field", "two-files", "no-filename", "headers-only", "no-boundary"))
+          .map(([text, how]): Body => {
+            const type = how === "no-boundary" ? "multipart/form-data" : `multipart/form-data; boundary=${boundary}`;
+            const body =
+              how === "no-end"
+                ? `--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="x.csv"\r\n\r\n${text}`
+                : how === "wrong-field"
+                  ? part("upload", "x.csv", text) + `--${boundary}--\r\n`
+                  : how === "two-files"
+                    ? part("file", "a.csv", text) + part("file", "b.csv", text) + `--${boundary}--\r\n`
+                    : how === "no-filename"
+                      ? part("file", null, text) + `--${boundary}--\r\n`
+                      : how === "headers-only"
+                        ? `--${boundary}\r\ncontent-disposition: form-data; name="file"; filename="x.csv"\r\n`
+                        : part("file", "x.csv", text) + `--${boundary}--\r\n`;
+            return { kind: "raw", body, type };
+          }),
+        weight: 2,
+      },
+    );
+    const statuses: Record<number, number> = {};
+    await fc.assert(
+      fc.asyncProperty(bodies, async (b) => {
+        const before = await counts();
+        let res: Response;
+        const headers: Record<string, string> = { origin: new URL(baseUrl()).origin, cookie: ctx.outsider.cookie!, accept: "application/json" };
+        let body: BodyInit;
+        if (b.kind === "form") {
+          body = new FormData();
+          body.set("file", new Blob([b.text], { type: "text/csv" }), b.name);
+        } else {
+          headers["content-type"] = b.type;
+          body = b.body;
+        }
+        try {
+          res = await fetch(baseUrl() + route.url(ctx), { method: "POST", headers, body, signal: AbortSignal.timeout(REQUEST_TIMEOUT_MS) });
+        } catch (err) {
+          throw new Error(`no answer within ${REQUEST_TIMEOUT_MS} ms (${(err as Error).message}) for ${show(b)}`);
+        }
+        const text = await res.text();
+        statuses[res.status] = (statuses[res.status] ?? 0) + 1;
+        if (res.status >= 500) throw new Error(`answered ${res.status} ${text.slice(0, 200)} for ${show(b)}`);
+        if (res.status >= 400) {
+          expect(res.headers.get("content-type") ?? "", `${res.status} for ${show(b)}`).toContain("application/problem+json");
+          expect(await counts(), `a refused upload (${res.status}) changed stored rows: ${show(b)}`).toEqual(before);
+        }
+      }),
+      { seed: SEED, numRuns: RUNS, interruptAfterTimeLimit: 90_000, markInterruptAsFailure: false },
+    );
+    test.info().annotations.push({ type: "statuses", description: JSON.stringify(statuses) });
+    if (process.env.FUZZ_VERBOSE) console.log(`${route.method} ${route.path}: answers ${JSON.stringify(statuses)}`);
   });
 }

@@ -38,6 +38,8 @@ interface World {
   projects: string[];
   members: string[];
   invitations: string[];
+  /** Panes imported by the matrix's successful calls. */
+  panes: string[];
   outsiderInvitationId: string;
   /** Fixture make-ups of the option routes, and the database connection that writes them. */
   makeups: string[];
@@ -390,6 +392,54 @@ const deliveryCases = (target: Target): Case[] => [
   },
 ];
 
+/** A multipart body with a CSV file in the field `file`, as the upload forms send it. */
+const csvForm = (text: string, fileName = "matrix.csv") => {
+  const form = new FormData();
+  form.set("file", new Blob([text], { type: "text/csv" }), fileName);
+  return form;
+};
+const matrixPanes = () => csvForm(`name,thickness_mm,solar_t,solar_rf,solar_rb\nMatrix imported pane,6,0.8,0.07,0.07\n`);
+/** Three invented hours of weather for a project in UTC. */
+const matrixWeather = () =>
+  csvForm(
+    "time,ghi_wm2,dni_wm2,dhi_wm2,air_temperature_c\n2026-06-21T10:00Z,700,650,150,21\n2026-06-21T11:00Z,760,690,160,22\n2026-06-21T12:00Z,780,700,165,\n",
+  );
+
+/** A throwaway project with a weather file, uploaded by the consultant. */
+async function projectWithWeather(target: Target): Promise<string> {
+  const id = await throwawayProject(target);
+  const res = await call(consultant(), "POST", `/api/v1/projects/${id}/weather`, matrixWeather());
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  return id;
+}
+
+const uploadCases = (target: Target): Case[] => [
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/weather",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await projectWithWeather(target)}/weather` }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/projects/:id/weather",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await throwawayProject(target)}/weather`, body: matrixWeather() }),
+  },
+  {
+    method: "DELETE",
+    path: "/api/v1/projects/:id/weather",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await projectWithWeather(target)}/weather` }),
+  },
+  {
+    method: "GET",
+    path: "/api/v1/projects/:id/weather/file",
+    target,
+    prepare: async () => ({ path: `/api/v1/projects/${await projectWithWeather(target)}/weather/file` }),
+  },
+];
+
 const CASES: Case[] = [
   { method: "GET", path: "/api/health", prepare: fixed("/api/health") },
   { method: "GET", path: "/api/v1/me", prepare: fixed("/api/v1/me") },
@@ -472,6 +522,16 @@ const CASES: Case[] = [
   ...reviewCases("unshared"),
   ...deliveryCases("shared"),
   ...deliveryCases("unshared"),
+  ...uploadCases("shared"),
+  ...uploadCases("unshared"),
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/panes/import",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/panes/import`, body: matrixPanes() }),
+    after: (_a, status, body) => {
+      if (status === 201) w.panes.push(...(body as { panes: { id: string }[] }).panes.map((p) => p.id));
+    },
+  },
 ];
 
 const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);
@@ -501,6 +561,7 @@ test.beforeAll(async () => {
     projects: [],
     members: [],
     invitations: [],
+    panes: [],
     outsiderInvitationId: (inv.body as { invitation: { id: string } }).invitation.id,
   };
 });
@@ -510,6 +571,7 @@ test.afterAll(async () => {
   for (const id of w.projects) await call(w.callers.consultant, "DELETE", `/api/v1/projects/${id}`);
   for (const id of w.members) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/members/${id}`);
   for (const id of w.invitations) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/invitations/${id}`);
+  for (const id of w.panes) await call(w.callers.owner, "DELETE", `/api/v1/panes/${id}`);
   await deleteMakeupRows(w.makeups);
   await closeWorkspaceRows();
   await removeMakeups(w.db, w.makeups);

@@ -8,14 +8,25 @@ export { LineChart, type LineSeries } from "@/components/charts/LineChart";
 const MONTHS = ["J", "F", "M", "A", "M", "J", "J", "A", "S", "O", "N", "D"];
 const MONTH_NAMES = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
 
-/** Grouped monthly bars, one bar per series and month (kWh/m²). */
-export function MonthlyBars(props: { title: string; series: { key: string; label: string; color: string; values: number[] }[]; yLabel: string }) {
+/**
+ * Grouped monthly bars, one bar per series and month (kWh/m²). `startMonth` (1–12, default January) is the
+ * month of the first value, for periods that do not start in January (a weather file's).
+ */
+export function MonthlyBars(props: {
+  title: string;
+  series: { key: string; label: string; color: string; values: number[] }[];
+  yLabel: string;
+  startMonth?: number;
+}) {
   const [ref, W] = useWidth<HTMLDivElement>();
+  const first = (props.startMonth ?? 1) - 1;
+  const count = props.startMonth ? Math.max(1, ...props.series.map((s) => s.values.length)) : MONTHS.length;
+  const slots = Array.from({ length: count }, (_, m) => (first + m) % 12);
   const H = 240;
   const M = { top: 12, right: 10, bottom: 28, left: 48 };
   const yMax = Math.max(1e-9, ...props.series.flatMap((s) => s.values));
   const x = scaleBand<number>()
-    .domain(MONTHS.map((_, i) => i))
+    .domain(slots.map((_, i) => i))
     .range([M.left, W - M.right])
     .paddingInner(0.2);
   const inner = scaleBand<string>()
@@ -39,7 +50,7 @@ export function MonthlyBars(props: { title: string; series: { key: string; label
             </text>
           </g>
         ))}
-        {MONTHS.map((_, m) => (
+        {slots.map((month, m) => (
           <g key={m}>
             {props.series.map((s) => (
               <rect
@@ -50,11 +61,11 @@ export function MonthlyBars(props: { title: string; series: { key: string; label
                 height={y(0) - y(s.values[m] ?? 0)}
                 fill={s.color}
               >
-                <title>{`${s.label}, ${MONTH_NAMES[m]}: ${(s.values[m] ?? 0).toFixed(1)} ${props.yLabel}`}</title>
+                <title>{`${s.label}, ${MONTH_NAMES[month]}: ${(s.values[m] ?? 0).toFixed(1)} ${props.yLabel}`}</title>
               </rect>
             ))}
             <text x={x(m)! + x.bandwidth() / 2} y={H - M.bottom + 16} textAnchor="middle" fontSize={FONT} fill={AXIS}>
-              {names[m]}
+              {names[month]}
             </text>
           </g>
         ))}

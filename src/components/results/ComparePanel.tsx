@@ -110,8 +110,9 @@ export default function ComparePanel({ projectId, optionIds, year }: Props) {
           ])}
         />
         <MonthlyBars
-          title={`Monthly solar gain through the glass, ${year}`}
+          title={`Monthly solar gain through the glass, ${c!.irradiance?.source === "weather series" ? `${c!.irradiance.fromDate} to ${c!.irradiance.toDate} (weather file)` : year}`}
           yLabel="kWh/m²"
+          startMonth={c!.irradiance?.source === "weather series" ? Number(c!.irradiance.fromDate.slice(5, 7)) : undefined}
           series={opts.map((o, i) => ({ key: o.optionId, label: label(i), color: colour(i), values: o.monthly.solarGainKWhm2 }))}
         />
       </div>

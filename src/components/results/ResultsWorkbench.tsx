@@ -78,8 +78,21 @@ function ResultsWorkbench({ projectId, defaultYear, canIssue }: Props) {
         )}
         {r?.site && (
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm sm:grid-cols-[auto_1fr_auto_1fr]" data-testid="results-inputs">
-            <dt className="font-bold text-slate">Year</dt>
-            <dd data-testid="inputs-year">{r.year} · hourly, clear sky</dd>
+            <dt className="font-bold text-slate">{r.irradiance?.source === "weather series" ? "Period" : "Year"}</dt>
+            <dd data-testid="inputs-year">
+              {r.irradiance?.source === "weather series" ? `${r.irradiance.fromDate} to ${r.irradiance.toDate}` : r.year} · hourly
+            </dd>
+            <dt className="font-bold text-slate">Irradiance</dt>
+            <dd data-testid="inputs-irradiance" className="min-w-0 break-words">
+              {r.irradiance?.source === "weather series" ? (
+                <>
+                  weather file “{r.irradiance.fileName}”, {r.irradiance.hours} hours (the year chosen above does not apply) · SHA-256{" "}
+                  <code className="break-all text-xs">{r.irradiance.sha256}</code>
+                </>
+              ) : (
+                "clear-sky model (Ineichen–Perez 2002) with the turbidity below"
+              )}
+            </dd>
             <dt className="font-bold text-slate">Site</dt>
             <dd>
               {r.site.name} · {r.site.latitudeDeg.toFixed(3)}°, {r.site.longitudeDeg.toFixed(3)}° · {r.site.elevationM} m · {r.site.timeZone}
@@ -138,8 +151,10 @@ function ResultsWorkbench({ projectId, defaultYear, canIssue }: Props) {
             <ResultsTable results={r!} selected={selected} onToggle={toggle} timeZone={r!.site?.timeZone ?? "UTC"} />
             <p className="mt-2 text-xs text-slate">
               τe, ρe, α, g and τv at normal incidence (EN 410 quantities, ISO 9050 method); U at the centre of glass (EN 673). Yearly figures are per
-              m² of glazing: hourly clear-sky irradiance on the façade, through the glass with τe(θ) and g(θ) for the beam and the hemispherical
-              values for diffuse light, the façade's shading included. Tick two or more options to compare them.
+              m² of glazing: hourly{" "}
+              {r!.irradiance?.source === "weather series" ? "irradiance from the project's weather file" : "clear-sky irradiance"} on the façade,
+              through the glass with τe(θ) and g(θ) for the beam and the hemispherical values for diffuse light, the façade's shading included. Tick
+              two or more options to compare them.
             </p>
           </div>
         )}

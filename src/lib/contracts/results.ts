@@ -1,5 +1,6 @@
 /** Wire types of GET /api/v1/projects/:id/results and of issued revisions' snapshots. */
 import type { GlazingAngleRow, GlazingValues, LightSummary } from "./glazing";
+import type { IrradianceSource } from "./uploads";
 import type { Limits, RequirementFlag } from "./requirements";
 
 /** What a saved make-up revision stores as its values (computed when it is saved). */
@@ -57,6 +58,8 @@ export interface ResultsResponse {
   site?: RevisionSnapshot["site"];
   /** How many façade × option results came from the cache and how many were computed for this answer. */
   cache?: { hits: number; misses: number };
+  /** The irradiance the figures come from: the clear-sky model, or the project's weather file and its period. */
+  irradiance?: IrradianceSource;
 }
 
 /** One approved option in an issued revision, frozen at issue time. */
@@ -126,5 +129,6 @@ export interface CompareResponse {
   year: number;
   inputsKey: string;
   site: RevisionSnapshot["site"];
+  irradiance?: IrradianceSource;
   options: CompareOption[];
 }

@@ -1,5 +1,7 @@
 /** View models of the project pages (overview, edit, sun and schedules). */
 import { roleCan, ROLE_LABELS, type RoleName } from "@/lib/auth/roles";
+import type { WeatherSummary } from "@/lib/contracts/uploads";
+import { weatherOf } from "@/lib/server/services/uploads";
 import { requireProject, type ProjectRow } from "@/lib/server/services/access";
 import { facadesOf, optionCountsOf, sharesOf, type ShareRow } from "@/lib/server/services/projects";
 import { revisionListOf } from "@/lib/server/services/revisions";
@@ -51,6 +53,8 @@ export interface ProjectPage {
   canSend: boolean;
   /** The issued schedule revisions, newest first (everyone who sees the project). */
   revisions: { letter: string; issuedAt: string; issuedBy: string; note: string | null; facadeCount: number }[];
+  /** The project's weather file, or null when its results use the clear-sky model. */
+  weather: WeatherSummary | null;
 }
 
 /** The project overview; NotFoundError when the project is missing or not visible to the user. */
@@ -71,6 +75,7 @@ export async function loadProjectPage(user: PageUser, projectId: string | undefi
     canAssign: roleCan(membership.role, { option: ["assign"] }),
     canSend: roleCan(membership.role, { export: ["create"] }),
     revisions: await revisionListOf(project.id),
+    weather: await weatherOf(project.id),
   };
 }
 

@@ -14,6 +14,7 @@ import { facade, facadeOption, makeup, makeupRevision, project, resultCache } fr
 import { NotFoundError } from "@/lib/server/errors";
 import { runCalc, sharedCalcPool, type CalcPool } from "@/lib/server/calc-pool";
 import { requirementsEntry } from "./requirements";
+import { weatherForResults, type ResultsWeather } from "./uploads";
 import { MAX_SURFACES, ScheduleRequest, type ScheduleRequestInput } from "@/lib/contracts/schedule";
 import type {
   CompareOption,
@@ -81,26 +82,35 @@ export function shadingOf(f: Pick<FacadeRow, "windowWidthM" | "windowHeightM" | 
   return { ...devices, window: { widthM: f.windowWidthM, heightM: f.windowHeightM } };
 }
 
-/** The schedule request of one year of hours for some surfaces of a project's site. */
-export function yearRequestInput(p: ProjectRow, year: number, surfaces: unknown[]): ScheduleRequestInput {
+/**
+ * The schedule request of one year of hours for some surfaces of a project's site. With the project's
+ * weather series (`weatherForResults`), the period is the file's (its first to last local date, whatever
+ * `year` says) and the engine takes the file's irradiance in place of the clear sky.
+ */
+export function yearRequestInput(p: ProjectRow, year: number, surfaces: unknown[], weather?: ResultsWeather | null): ScheduleRequestInput {
   return {
     site: { latitudeDeg: p.latitudeDeg, longitudeDeg: p.longitudeDeg, timeZone: p.timeZone, elevationM: p.elevationM },
     surfaces,
-    from: `${year}-01-01`,
-    to: `${year}-12-31`,
+    from: weather ? weather.irradiance.fromDate : `${year}-01-01`,
+    to: weather ? weather.irradiance.toDate : `${year}-12-31`,
     stepMinutes: 60,
     sky: { model: p.skyModel, albedo: p.groundAlbedo, ...(p.linkeTurbidity ? { linkeTurbidity: p.linkeTurbidity } : {}) },
+    ...(weather ? { weather: weather.rows } : {}),
   };
 }
 
-/** What one façade × option result is computed from; its SHA-256 is the cache key. */
-export function resultInputs(p: ProjectRow, f: FacadeRow, layers: unknown, year: number) {
+/** The year a result stands for: the requested one, or with a weather series the year its period starts in. */
+export const resultYear = (year: number, weather?: ResultsWeather | null) => (weather ? Number(weather.irradiance.fromDate.slice(0, 4)) : year);
+
+/** What one façade × option result is computed from; its SHA-256 is the cache key (a weather file by its SHA-256). */
+export function resultInputs(p: ProjectRow, f: FacadeRow, layers: unknown, year: number, weather?: ResultsWeather | null) {
   return {
     engine: RESULTS_ENGINE_VERSION,
-    year,
+    year: resultYear(year, weather),
     site: { latitudeDeg: p.latitudeDeg, longitudeDeg: p.longitudeDeg, timeZone: p.timeZone, elevationM: p.elevationM },
     sky: { model: p.skyModel, albedo: p.groundAlbedo, linkeTurbidity: p.linkeTurbidity ?? null },
     surface: { azimuthDeg: f.azimuthDeg, tiltDeg: f.tiltDeg, shading: shadingOf(f) ?? null, layers },
+    ...(weather ? { weather: { sha256: weather.irradiance.sha256, from: weather.irradiance.fromDate, to: weather.irradiance.toDate } } : {}),
   };
 }
 
@@ -152,14 +162,16 @@ const emptySummary = (year: number): CachedSummary => ({
  * Results of every façade × option of a project for a calendar year (hourly clear-sky schedule in the
  * site's time zone). NotFoundError when the project does not exist (callers check access first).
  */
-export async function projectResults(projectId: string, year: number, opts: ProjectResultsOptions = {}): Promise<ResultsResponse> {
+export async function projectResults(projectId: string, requestedYear: number, opts: ProjectResultsOptions = {}): Promise<ResultsResponse> {
   const p = (await db.select().from(project).where(eq(project.id, projectId)))[0];
   if (!p) throw new NotFoundError("No such project, or it is not shared with you");
-  const [facades, rows, requirements] = await Promise.all([
+  const [facades, rows, requirements, weather] = await Promise.all([
     db.select().from(facade).where(eq(facade.projectId, projectId)).orderBy(asc(facade.position), asc(facade.createdAt), asc(facade.id)),
     optionRows(projectId, opts.optionIds),
     requirementsEntry(projectId),
+    weatherForResults(projectId),
   ]);
+  const year = resultYear(requestedYear, weather);
   const facadeById = new Map(facades.map((f) => [f.id, f]));
 
   const entries: Entry[] = [];
@@ -174,10 +186,10 @@ export async function projectResults(projectId: string, year: number, opts: Proj
       option: r.option,
       makeupName: r.makeupName,
       revision: r.revision,
-      key: sha256(stableJson(resultInputs(p, f, r.revision.layers, year))),
+      key: sha256(stableJson(resultInputs(p, f, r.revision.layers, year, weather))),
       surface: full,
     };
-    const check = ScheduleRequest.safeParse(yearRequestInput(p, year, [full]));
+    const check = ScheduleRequest.safeParse(yearRequestInput(p, year, [full], weather));
     if (!check.success) {
       const issue = check.error.issues[0]!;
       entry.problem = `The stored make-up or façade cannot be computed: ${pathText(issue.path.slice(2))}: ${issue.message}`;
@@ -209,6 +221,7 @@ export async function projectResults(projectId: string, year: number, opts: Proj
               p,
               year,
               b.map((e) => e.surface),
+              weather,
             ),
           ),
         ),
@@ -292,6 +305,7 @@ export async function projectResults(projectId: string, year: number, opts: Proj
     stableJson({
       engine: RESULTS_ENGINE_VERSION,
       year,
+      weather: weather?.irradiance.sha256 ?? null,
       entries: entries.map((e) => [e.facade.id, e.option.id, e.option.name, e.option.status, e.revision.id, e.key]),
       facades: facadeResults.map((f) => [f.facadeId, f.name, f.glazedAreaM2, f.limits]),
     }),
@@ -302,6 +316,7 @@ export async function projectResults(projectId: string, year: number, opts: Proj
     inputsKey,
     computedAt: new Date().toISOString(),
     site: siteOf(p),
+    irradiance: weather ? weather.irradiance : { source: "clear sky" },
     cache: { hits: hitCount, misses: missing.length },
     facades: facadeResults,
   };
@@ -352,5 +367,5 @@ export async function compareOptions(
       };
     }),
   );
-  return { projectId, year, inputsKey: results.inputsKey, site: results.site!, options };
+  return { projectId, year: results.year, inputsKey: results.inputsKey, site: results.site!, irradiance: results.irradiance, options };
 }

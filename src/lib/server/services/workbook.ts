@@ -332,7 +332,7 @@ function rowsFor(e: HourlyEntry, res: ScheduleResponse): ScheduleRow[] {
 }
 
 /** Hourly schedules computed ahead of the sheet being written: enough to keep the writer fed, few enough to keep memory flat. */
-const LOOKAHEAD = 2;
+const LOOKAHEAD = 1;
 
 /**
  * Computes the hourly schedules a few at a time ahead of the sheet being written (so that the workers
