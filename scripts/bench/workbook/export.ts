@@ -92,6 +92,7 @@ function plan(): WorkbookPlan {
     draft: false,
     revision: { letter: "A", issuedAt: new Date().toISOString(), issuedBy: "Bench", note: null },
     year: YEAR,
+    irradiance: { source: "clear sky" },
     site: { ...projectRow, name: projectRow.siteName, linkeTurbidity: null } as unknown as WorkbookPlan["site"],
     schedule,
     hourly,

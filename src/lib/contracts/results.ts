@@ -98,6 +98,13 @@ export interface RevisionSnapshot {
     linkeTurbidity: number[] | null;
   };
   facades: RevisionFacadeSnapshot[];
+  /** Where the irradiance came from when issued (absent in revisions issued before it was kept: clear sky). */
+  irradiance?: IrradianceSource;
+  /**
+   * The weather rows the results were computed from, kept with the revision so that its workbook's hourly
+   * sheets can be computed again after the project's weather file is replaced. Stored only; the API leaves it out.
+   */
+  weather?: { time: string; ghi: number; dni: number; dhi: number }[];
   /** Façades without an approved option when the revision was issued. */
   unapproved?: { facadeId: string; name: string }[];
 }

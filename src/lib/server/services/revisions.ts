@@ -12,11 +12,14 @@ import type { RevisionFacadeSnapshot, RevisionResponse, RevisionSnapshot } from 
 import { revisionLetter } from "@/lib/contracts/revisions";
 import { recordEvent, type Actor } from "./history";
 import { projectResults, siteOf, type ProjectResultsOptions } from "./results";
+import { weatherForResults } from "./uploads";
 
 type RevisionRow = typeof scheduleRevision.$inferSelect;
 
 export function revisionResponse(r: RevisionRow): RevisionResponse {
-  const snapshot = r.snapshot as RevisionSnapshot;
+  // The stored weather rows stay on the server (a year of hours); the response says where they came from.
+  const { weather: _weather, ...snapshot } = r.snapshot as RevisionSnapshot;
+  void _weather;
   return {
     revision: r.letter,
     sequence: r.sequence,
@@ -98,6 +101,10 @@ export async function issueRevision(
 
   // Results outside the transaction (the engine may take a moment); the snapshot re-checks the options below.
   const results = await projectResults(projectId, input.year, { pool: opts.pool, optionIds: approved.map((a) => a.id) });
+  const irradiance = results.irradiance ?? { source: "clear sky" as const };
+  const weather = irradiance.source === "weather series" ? await weatherForResults(projectId) : null;
+  if (irradiance.source === "weather series" && weather?.irradiance.sha256 !== irradiance.sha256)
+    throw new ConflictError("The project's weather file changed while the schedule was being issued; issue it again.");
 
   return db.transaction(async (tx) => {
     // One issuer at a time per project: the row lock orders concurrent issues, so letters never clash.
@@ -158,7 +165,14 @@ export async function issueRevision(
     )[0];
     const sequence = (last?.sequence ?? 0) + 1;
     const letter = revisionLetter(sequence);
-    const snapshot: RevisionSnapshot = { year: input.year, site: siteOf(p), facades: snapshots, unapproved };
+    const snapshot: RevisionSnapshot = {
+      year: results.year,
+      site: siteOf(p),
+      facades: snapshots,
+      unapproved,
+      irradiance,
+      ...(weather ? { weather: weather.rows } : {}),
+    };
     const [row] = await tx
       .insert(scheduleRevision)
       .values({ projectId, sequence, letter, note: input.note, issuedById: actor.id, issuedByName: actor.name, snapshot })

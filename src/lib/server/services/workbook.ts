@@ -39,7 +39,9 @@ import {
   type ColumnSpec,
   type ScheduleEntry,
 } from "@/lib/calc/workbook-tables";
-import { projectResults, shadingOf, yearRequestInput } from "./results";
+import { projectResults, resultYear, shadingOf, yearRequestInput } from "./results";
+import { weatherForResults } from "./uploads";
+import type { IrradianceSource } from "@/lib/contracts/uploads";
 import { revisionOf } from "./revisions";
 
 export { safeText };
@@ -120,6 +122,8 @@ export interface WorkbookPlan {
   makeups: MakeupEntry[];
   /** The schedule request of a list of surfaces (the project's period, site and sky). */
   request: (surfaces: unknown[]) => ReturnType<typeof yearRequestInput>;
+  /** Where the hourly irradiance comes from: the clear-sky model or the project's weather file. */
+  irradiance: IrradianceSource;
 }
 
 /** The project row with the site and sky an issued revision was computed for. */
@@ -175,7 +179,10 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
     const rev = await revisionOf(p.id, req.revision);
     const snap = rev.snapshot;
     const asIssued = projectAsIssued(p, snap.site);
-    const request = (surfaces: unknown[]) => yearRequestInput(asIssued, snap.year, surfaces);
+    // The weather the revision was computed from travels with it; without one, the clear sky.
+    const irradiance = snap.irradiance ?? { source: "clear sky" as const };
+    const weather = irradiance.source === "weather series" && snap.weather ? { irradiance, rows: snap.weather } : null;
+    const request = (surfaces: unknown[]) => yearRequestInput(asIssued, snap.year, surfaces, weather);
     for (const s of snap.facades) {
       const now = facadeById.get(s.facadeId);
       // Revisions issued before the snapshot kept the glazed area and shading: the façade's current ones.
@@ -229,6 +236,7 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
       revision: { letter: rev.revision, issuedAt: rev.issuedAt, issuedBy: rev.issuedBy, note: rev.note },
       year: snap.year,
       site: snap.site,
+      irradiance,
       schedule,
       hourly,
       makeups: [...makeups.values()],
@@ -237,8 +245,10 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
   }
 
   // The current draft: every façade with its approved option, if any, and today's results for the year.
-  const year = req.year ?? new Date().getFullYear();
-  const request = (surfaces: unknown[]) => yearRequestInput(p, year, surfaces);
+  const weather = await weatherForResults(p.id);
+  const year = resultYear(req.year ?? new Date().getFullYear(), weather);
+  const irradiance: IrradianceSource = weather?.irradiance ?? { source: "clear sky" };
+  const request = (surfaces: unknown[]) => yearRequestInput(p, year, surfaces, weather);
   const approved = await db
     .select({ option: facadeOption, revision: makeupRevision })
     .from(facadeOption)
@@ -292,6 +302,7 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
     draft: true,
     revision: null,
     year,
+    irradiance,
     site: {
       name: p.siteName,
       latitudeDeg: p.latitudeDeg,
@@ -418,6 +429,12 @@ function defaultMethods(plan: WorkbookPlan): Record<string, string> {
   return { ...SCHEDULE_METHODS, sky };
 }
 
+/** The irradiance in words for the cover: the clear-sky model, or the weather file with its period and SHA-256. */
+export function irradianceText(i: IrradianceSource): string {
+  if (i.source === "clear sky") return "clear sky (modelled, no measured weather): the sky model and Linke turbidity below";
+  return `weather file ${safeText(i.fileName)}: ${i.hours} hours from ${i.fromDate} to ${i.toDate} (SHA-256 ${i.sha256})`;
+}
+
 function coverRows(plan: WorkbookPlan, methods: Record<string, string>, glazingMethods: Record<string, string> | null, irradiance: string) {
   const s = plan.site;
   const req = plan.request([]);
@@ -482,7 +499,7 @@ export async function writeWorkbookPlan(plan: WorkbookPlan, out: Writable, opts:
     plan,
     firstHourly?.methods ?? defaultMethods(plan),
     (firstGlazing?.methods as Record<string, string> | undefined) ?? null,
-    firstHourly?.irradiance ?? "clear sky",
+    irradianceText(plan.irradiance),
   );
   for (const [k, v] of rows) addRow(cover, [k, v], [BOLD, {}]);
   addRow(cover, []);
@@ -615,7 +632,7 @@ export async function workbookCsv(
   const base = plan.fileName.replace(/\.xlsx$/, "");
   const out: string[] = ["\uFEFF"];
   if (table === "cover") {
-    const { rows, method } = coverRows(plan, defaultMethods(plan), null, "clear sky");
+    const { rows, method } = coverRows(plan, defaultMethods(plan), null, irradianceText(plan.irradiance));
     for (const r of [...rows, ...method, ["Caution", WORKBOOK_CAUTION] as [string, CellValue]]) out.push(csvLine(r));
     return { fileName: `${base}_cover.csv`, text: out.join("") };
   }
