@@ -1,4 +1,5 @@
 import { defineConfig } from "@playwright/test";
+import { SERVER_NODE_FLAGS } from "./scripts/server-flags.mjs";
 
 const port = Number(process.env.E2E_PORT ?? 4322);
 const baseURL = `http://127.0.0.1:${port}`;
@@ -21,7 +22,7 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: "node scripts/server.mjs",
+    command: `node ${SERVER_NODE_FLAGS.join(" ")} scripts/server.mjs`,
     url: `${baseURL}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,

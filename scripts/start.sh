@@ -74,13 +74,15 @@ fi
 
 if [ -n "$DEV" ]; then
   # astro dev has no startup hook of ours: the job worker (e-mail deliveries) runs beside it from the sources.
-  node_modules/.bin/tsx scripts/worker.ts &
+  # shellcheck disable=SC2046 # the flags are words
+  node_modules/.bin/tsx $(cat scripts/server-node-flags) scripts/worker.ts &
   PIDS+=("$!")
   node_modules/.bin/astro dev --host "$HOST" --port "$PORT" &
   MODE=" (development server: reloads on change)"
 else
   build_if_stale
-  NODE_ENV=production node scripts/server.mjs &
+  # shellcheck disable=SC2046 # the flags are words
+  NODE_ENV=production node $(cat scripts/server-node-flags) scripts/server.mjs &
   MODE=""
 fi
 PIDS+=("$!")

@@ -12,6 +12,7 @@ import { existsSync, readFileSync } from "node:fs";
 import { createServer } from "node:net";
 import { Worker } from "node:worker_threads";
 import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
+import { SERVER_NODE_FLAGS } from "../server-flags.mjs";
 
 const CLIENTS = 10;
 const DURATION_MS = 15_000;
@@ -99,7 +100,7 @@ async function startServer(workers: string | undefined): Promise<{ base: string;
     CALC_WORKERS: workers,
   };
   if (workers === undefined) delete env.CALC_WORKERS;
-  const child = spawn(process.execPath, ["scripts/server.mjs"], { env, stdio: ["ignore", "ignore", "inherit"] });
+  const child = spawn(process.execPath, [...SERVER_NODE_FLAGS, "scripts/server.mjs"], { env, stdio: ["ignore", "ignore", "inherit"] });
   for (let i = 0; i < 150; i++) {
     await new Promise((r) => setTimeout(r, 200));
     if (child.exitCode !== null) throw new Error(`the server exited with code ${child.exitCode}`);

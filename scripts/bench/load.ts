@@ -19,6 +19,7 @@ import { join } from "node:path";
 import { drizzle } from "drizzle-orm/node-postgres";
 import pg from "pg";
 import { project } from "@/lib/server/db/app-schema";
+import { SERVER_NODE_FLAGS } from "../server-flags.mjs";
 
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 30);
 const PROJECTS = Number(process.env.LOAD_PROJECTS ?? 2000);
@@ -71,7 +72,7 @@ export async function startStack(): Promise<Stack> {
     execFileSync("bash", ["-c", "source scripts/lib.sh && build_if_stale"], { stdio: ["ignore", "ignore", "inherit"] });
     const port = lib("free_port");
     const base = `http://127.0.0.1:${port}`;
-    server = spawn("node", [...(process.env.SERVER_NODE_ARGS?.split(/\s+/).filter(Boolean) ?? []), "scripts/server.mjs"], {
+    server = spawn("node", [...(process.env.SERVER_NODE_ARGS?.split(/\s+/).filter(Boolean) ?? SERVER_NODE_FLAGS), "scripts/server.mjs"], {
       env: {
         ...process.env,
         HOST: "127.0.0.1",

@@ -9,6 +9,7 @@ import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
+import { SERVER_NODE_FLAGS } from "../server-flags.mjs";
 
 const TRIALS = Number(process.env.WORKBOOK_TRIALS ?? 3);
 const TARGETS = { ms: 10_000, rssMB: 300 };
@@ -37,7 +38,8 @@ export async function run(): Promise<void> {
   });
   const results: { ms: number; bytes: number; rows: number; maxRssMB: number }[] = [];
   for (let t = 0; t < TRIALS; t++) {
-    const out = execFileSync(process.execPath, [join(dir, "export.mjs")], {
+    // With the server's own node flags: the export stands in for the server process.
+    const out = execFileSync(process.execPath, [...SERVER_NODE_FLAGS, join(dir, "export.mjs")], {
       cwd: join(here, "..", ".."),
       env: { ...process.env, DATABASE_URL: process.env.DATABASE_URL ?? "postgres://bench@127.0.0.1:1/none" },
       encoding: "utf8",

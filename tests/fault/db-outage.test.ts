@@ -12,6 +12,7 @@ import { promisify } from "node:util";
 import { randomBytes } from "node:crypto";
 import pg from "pg";
 import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
+import { SERVER_NODE_FLAGS } from "@scripts/server-flags.mjs";
 
 const run = promisify(execFile);
 const WRITERS = 6;
@@ -132,7 +133,7 @@ beforeAll(async () => {
   await run("node", ["scripts/migrate.mjs"], { env });
   await run("npx", ["tsx", "scripts/seed.ts"], { env });
 
-  server = spawn("node", ["scripts/server.mjs"], {
+  server = spawn("node", [...SERVER_NODE_FLAGS, "scripts/server.mjs"], {
     env: { ...env, HOST: "127.0.0.1", PORT: String(webPort), NODE_ENV: "production" },
     stdio: ["ignore", "pipe", "pipe"],
   });

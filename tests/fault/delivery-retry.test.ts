@@ -11,6 +11,7 @@ import { join } from "node:path";
 import { promisify } from "node:util";
 import { randomBytes } from "node:crypto";
 import { DEMO_PASSWORD, DEMO_PROJECTS, demoUser } from "@/lib/demo-scenario";
+import { SERVER_NODE_FLAGS } from "@scripts/server-flags.mjs";
 
 const run = promisify(execFile);
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -101,7 +102,7 @@ beforeAll(async () => {
   };
   await run("node", ["scripts/migrate.mjs"], { env });
   await run("npx", ["tsx", "scripts/seed.ts"], { env });
-  server = spawn("node", ["scripts/server.mjs"], {
+  server = spawn("node", [...SERVER_NODE_FLAGS, "scripts/server.mjs"], {
     env: { ...env, HOST: "127.0.0.1", PORT: String(webPort), NODE_ENV: "production" },
     stdio: ["ignore", "pipe", "pipe"],
   });

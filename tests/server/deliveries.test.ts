@@ -367,7 +367,7 @@ describe("the delivery job", () => {
         const cells = (row.values as ExcelJS.CellValue[]).slice(1);
         const texts = cells.map(text);
         if (found) body.push(cells);
-        else if (texts.some((t) => /^Façade\b/.test(t)) && texts.some((t) => /^τe\b/.test(t))) found = texts;
+        else if (texts.some((t) => /^Façade$/.test(t)) && texts.some((t) => /^Solar transmittance τe\b/.test(t))) found = texts;
       });
       if (found) {
         header = found;
@@ -382,7 +382,13 @@ describe("the delivery job", () => {
       expect(i, `a column matching ${re}`).toBeGreaterThanOrEqual(0);
       return i;
     };
-    const [cFacade, cOption, cTau, cG, cU] = [col(/^Façade\b/), col(/^Option\b/), col(/^τe\b/), col(/^g\b/), col(/^U\b/)];
+    const [cFacade, cOption, cTau, cG, cU] = [
+      col(/^Façade$/),
+      col(/^Option$/),
+      col(/^Solar transmittance τe at normal incidence/),
+      col(/^Total solar energy transmittance g\b/),
+      col(/^Centre-of-glass U-value\b/),
+    ];
     expect(rev.facades).toHaveLength(2);
     for (const f of rev.facades) {
       const row = rows.find((r) => text(r[cFacade]) === f.facadeName && text(r[cOption]) === f.optionName);

@@ -230,8 +230,33 @@ const POWER_COLUMNS = [
   { index: 12, key: "solarGainW", area: true },
 ] as const;
 
+/** The fields of a schedule row that the hourly sheet shows (what `hourlyCells` and `hourlySummary` read). */
+export const HOURLY_ROW_KEYS = [
+  "time",
+  "sunAltitudeDeg",
+  "sunAzimuthDeg",
+  "incidenceDeg",
+  "beamTransmittance",
+  "sunlitFraction",
+  "beamIncidentWm2",
+  "diffuseIncidentWm2",
+  "transmittedWm2",
+  "solarGainWm2",
+  "transmittedW",
+  "solarGainW",
+] as const satisfies readonly (keyof ScheduleRow)[];
+
+export type HourlyRow = Pick<ScheduleRow, (typeof HOURLY_ROW_KEYS)[number]>;
+
+/** A schedule row cut to the sheet's fields: a year of rows passes between threads at about half the size. */
+export function hourlyRowOf(r: ScheduleRow): HourlyRow {
+  const out: Partial<Record<(typeof HOURLY_ROW_KEYS)[number], unknown>> = {};
+  for (const k of HOURLY_ROW_KEYS) out[k] = r[k];
+  return out as HourlyRow;
+}
+
 /** One hourly row as cells, in HOURLY_COLUMNS order (the W columns empty without a glazed area). */
-export function hourlyCells(r: ScheduleRow): CellValue[] {
+export function hourlyCells(r: HourlyRow): CellValue[] {
   return [
     localClock(r.time),
     r.time,
@@ -256,7 +281,7 @@ export function hourlyCells(r: ScheduleRow): CellValue[] {
  * a program that does not recalculate shows the right figure.
  */
 export function hourlySummary(
-  rows: readonly ScheduleRow[],
+  rows: readonly HourlyRow[],
   stepMinutes: number,
   firstRow: number,
   lastRow: number,

@@ -8,12 +8,15 @@ import type { ScheduleRequest } from "@/lib/contracts/schedule";
 import { calculateGlazing } from "@/lib/calc/glazing";
 import { scheduleResponse } from "@/lib/calc/schedule-response";
 import { surfaceYearSummaries } from "@/lib/calc/surface-year";
+import { hourlyRowOf } from "@/lib/calc/workbook-tables";
 
 export interface CalcTasks {
   glazing: GlazingRequest;
   schedule: ScheduleRequest;
   /** The project results: yearly summaries of up to 24 surfaces (no rows). */
   surfaceYear: ScheduleRequest;
+  /** A workbook's hourly sheet: the schedule with its rows cut to the columns the sheet shows. */
+  scheduleSheet: ScheduleRequest;
 }
 export type CalcTaskName = keyof CalcTasks;
 
@@ -21,6 +24,10 @@ const TASKS: { [K in CalcTaskName]: (input: CalcTasks[K]) => unknown } = {
   glazing: calculateGlazing,
   schedule: (req) => scheduleResponse(req),
   surfaceYear: surfaceYearSummaries,
+  scheduleSheet: (req) => {
+    const res = scheduleResponse(req);
+    return { ...res, surfaces: res.surfaces.map((s) => ({ ...s, rows: s.rows.map(hourlyRowOf) })) };
+  },
 };
 
 export const isCalcTaskName = (name: unknown): name is CalcTaskName => typeof name === "string" && Object.hasOwn(TASKS, name);

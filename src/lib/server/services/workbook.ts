@@ -22,7 +22,7 @@ import { facade, facadeOption, makeupRevision, project } from "@/lib/server/db/s
 import { NotFoundError } from "@/lib/server/errors";
 import { runCalc, sharedCalcPool, type CalcPool } from "@/lib/server/calc-pool";
 import { GlazingRequest, type GlazingResponse } from "@/lib/contracts/glazing";
-import { ScheduleRequest, type ScheduleResponse, type ScheduleRow } from "@/lib/contracts/schedule";
+import { ScheduleRequest, type ScheduleResponse } from "@/lib/contracts/schedule";
 import type { RevisionSnapshot } from "@/lib/contracts/results";
 import { SCHEDULE_METHODS } from "@/lib/calc/schedule-response";
 import {
@@ -38,6 +38,7 @@ import {
   type CellValue,
   type ColumnSpec,
   type ScheduleEntry,
+  type HourlyRow,
 } from "@/lib/calc/workbook-tables";
 import { projectResults, resultYear, shadingOf, yearRequestInput } from "./results";
 import { weatherForResults } from "./uploads";
@@ -323,8 +324,13 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
 // ---- computing ---------------------------------------------------------------------------------------------
 
 /** The hourly schedule of one façade × option, exactly as POST /calc/schedule answers for its surface. */
-async function hourlyOf(plan: WorkbookPlan, e: HourlyEntry, pool: CalcPool | null): Promise<ScheduleResponse> {
-  return runCalc<"schedule", ScheduleResponse>(pool, "schedule", ScheduleRequest.parse(plan.request([e.surface])));
+/** A schedule answer whose rows hold only the sheet's fields (the calc task "scheduleSheet"). */
+type SheetSchedule = Omit<ScheduleResponse, "surfaces"> & {
+  surfaces: (Omit<ScheduleResponse["surfaces"][number], "rows"> & { rows: HourlyRow[] })[];
+};
+
+async function hourlyOf(plan: WorkbookPlan, e: HourlyEntry, pool: CalcPool | null): Promise<SheetSchedule> {
+  return runCalc<"scheduleSheet", SheetSchedule>(pool, "scheduleSheet", ScheduleRequest.parse(plan.request([e.surface])));
 }
 
 type Angular = { ok: true; res: GlazingResponse } | { ok: false; problem: string };
@@ -336,7 +342,7 @@ async function angularOf(m: MakeupEntry, pool: CalcPool | null): Promise<Angular
 }
 
 /** Rows with the W columns only where the façade has a glazed area (the engine would otherwise use the window's). */
-function rowsFor(e: HourlyEntry, res: ScheduleResponse): ScheduleRow[] {
+function rowsFor(e: HourlyEntry, res: SheetSchedule): HourlyRow[] {
   const rows = res.surfaces[0]!.rows;
   if (e.glazedAreaM2) return rows;
   return rows.map((r) => ({ ...r, transmittedW: null, solarGainW: null }));
