@@ -87,6 +87,7 @@ test("weather upload → results → issued workbook → e-mail → outbox", asy
   await page.getByRole("link", { name: "Open revision A" }).click();
   await expect(page.getByTestId("revision-title")).toHaveText("Revision A");
   const rev = (await (await page.request.get(`/api/v1/projects/${projectId}/revisions/A`)).json()) as RevisionResponse;
+  await expect(page.getByTestId("revision-irradiance")).toContainText("hourly weather file pier-2025.csv, 2025-01-01 to 2025-12-31");
 
   // Export: the revision page's download, opened with exceljs.
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("revision-workbook").click()]);

@@ -129,8 +129,8 @@ function Outbox({ projectId, revisions, members }: Props) {
                 <ul className="grid gap-1 sm:grid-cols-2">
                   {members.map((m) => (
                     <li key={m.memberId}>
-                      <label className="flex items-start gap-2 text-sm">
-                        <input type="checkbox" value={m.memberId} {...form.register("memberIds")} />
+                      <label className="mt-0 flex items-start gap-2 text-sm font-normal">
+                        <input type="checkbox" className="mt-0.5 w-auto shrink-0" value={m.memberId} {...form.register("memberIds")} />
                         <span className="min-w-0 break-words">
                           {m.name}{" "}
                           <span className="text-slate">
