@@ -71,10 +71,15 @@ node -e '
   const f = read(process.argv[5]);   // the fault suite (a second Vitest run)
   let passed = Number(process.argv[3]), failed = Number(process.argv[4]), skipped = 0;
   for (const r of [v, f]) {
-    if (r) { passed += r.numPassedTests; failed += r.numFailedTests; skipped += r.numPendingTests + (r.numTodoTests || 0); }
+    if (r) {
+      passed += r.numPassedTests; failed += r.numFailedTests; skipped += r.numPendingTests + (r.numTodoTests || 0);
+      // A test file that failed to load or crashed outside its tests counts as one failure.
+      failed += (r.testResults || []).filter((t) => t.status === "failed" && !(t.assertionResults || []).some((a) => a.status === "failed")).length;
+    }
     else failed += 1;   // the runner produced no report: count it as a failure
   }
-  if (p) { passed += p.stats.expected + p.stats.flaky; failed += p.stats.unexpected; skipped += p.stats.skipped; }
+  // Errors outside any test (a spec that does not load, a duplicate title, a web server that does not start) count too.
+  if (p) { passed += p.stats.expected + p.stats.flaky; failed += p.stats.unexpected + (p.errors || []).length; skipped += p.stats.skipped; }
   else failed += 1;
   console.log(`${passed} passed, ${failed} failed` + (skipped ? `, ${skipped} skipped` : ""));
   if (failed) process.exitCode = 1;

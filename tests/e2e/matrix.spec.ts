@@ -63,6 +63,8 @@ interface Case {
   /** Adjusts the rule's answer where the handler asks for more (e.g. a permission for one form of the query). */
   want?: (actor: Actor, ruleStatus: number) => number;
   after?: (actor: Actor, status: number, body: unknown) => void;
+  /** Names a second case of the same route (another form of its query), so that test titles stay unique. */
+  variant?: string;
 }
 
 /** The status the route table's rule and the role table give `actor`. */
@@ -343,6 +345,7 @@ const workspaceCases = (target: Target): Case[] => [
     path: "/api/v1/projects/:id/workbook",
     target,
     prepare: async () => ({ path: `/api/v1/projects/${(await workspaceProject(target)).id}/workbook?year=2026` }),
+    variant: "draft",
     want: (actor, ruled) => (ruled === 200 && !roleCan(actor, permissionFor("export:create")) ? 403 : ruled),
   },
   {
@@ -588,7 +591,7 @@ test("every route in the table has a case, and every case a route", () => {
 });
 
 for (const c of CASES) {
-  test(`${routeKey(c)}${c.target ? ` (${c.target} project)` : ""}`, async () => {
+  test(`${routeKey(c)}${c.variant ? ` [${c.variant}]` : ""}${c.target ? ` (${c.target} project)` : ""}`, async () => {
     const route = routeOf(c)!;
     const rows: string[] = [];
     // Least rights first, so a successful destructive call by a later role cannot hide a refusal.
