@@ -35,7 +35,7 @@ import { db, pool } from "@/lib/server/db/client";
 import { delivery, facade, member, projectEvent } from "@/lib/server/db/schema";
 import { createProject, shareProject } from "@/lib/server/services/projects";
 import { issueRevision } from "@/lib/server/services/revisions";
-import { attemptDelivery, deliveryStatus } from "@/lib/server/services/deliveries";
+import { attemptDelivery, deliveryStatus, failAbandonedDeliveries } from "@/lib/server/services/deliveries";
 import { startWorker, stopWorker } from "@/lib/server/jobs/worker";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import type { DeliveryResponse } from "@/lib/contracts/deliveries";
@@ -298,6 +298,19 @@ describe("the delivery job", () => {
     expect(d.attachment!.sha256).toBe(firstSha); // built once, kept for every attempt
     // Final: a job that runs again changes nothing.
     expect(await attemptDelivery(res.body.id, { retryCount: 2, retryLimit: 1 })).toBe("failed");
+  });
+
+  it("a delivery whose job failed for good while it said sending (its worker stopped mid-attempt) is marked failed", async () => {
+    const res = await send(consultant, { revision: "A", to: ["cut-short@test.example"] });
+    const row = (await db.select().from(delivery).where(eq(delivery.id, res.body.id)))[0]!;
+    await db.update(delivery).set({ status: "sending", attempts: 3 }).where(eq(delivery.id, row.id));
+    expect(await failAbandonedDeliveries()).toBe(0); // its job is still alive: nothing to do
+    await pool.query("update pgboss.job set state = 'failed' where id = $1", [row.jobId]);
+    expect(await failAbandonedDeliveries()).toBe(1);
+    const d = (await deliveryStatus(row.id))!;
+    expect(d.status).toBe("failed");
+    expect(d.lastError).toMatch(/cut short/);
+    expect(await failAbandonedDeliveries()).toBe(0); // final: marked once
   });
 
   it("sends the workbook; the message read back has the revision's schedule numbers", async () => {

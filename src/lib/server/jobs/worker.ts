@@ -8,9 +8,19 @@
  */
 import type PgBoss from "pg-boss";
 import { DELIVERY_QUEUE, queue, stopQueue } from "./queue";
-import { attemptDelivery } from "@/lib/server/services/deliveries";
+import { attemptDelivery, failAbandonedDeliveries } from "@/lib/server/services/deliveries";
 
 const RESTART_DELAY_MS = 5_000;
+/** How often the worker looks for deliveries whose job failed for good while the delivery still said "on its way". */
+const SWEEP_EVERY_MS = 60_000;
+let sweepTimer: ReturnType<typeof setInterval> | undefined;
+
+function sweep(): void {
+  failAbandonedDeliveries().then(
+    (n) => n && console.log(`[jobs] ${n} deliveries whose last attempt was cut short marked failed`),
+    (err: Error) => console.error(`[jobs] the sweep of cut-short deliveries failed (${err.message}); trying again later`),
+  );
+}
 
 let running = false;
 let retryTimer: ReturnType<typeof setTimeout> | undefined;
@@ -30,6 +40,9 @@ async function startOnce(): Promise<void> {
     },
   );
   console.log(`[jobs] worker started on queue ${DELIVERY_QUEUE}`);
+  sweep();
+  sweepTimer ??= setInterval(sweep, SWEEP_EVERY_MS);
+  sweepTimer.unref();
 }
 
 /** Starts the worker; resolves at once and keeps retrying in the background while the database is away. */
@@ -52,5 +65,7 @@ export function startWorker(): void {
 export async function stopWorker(timeoutMs = 10_000): Promise<void> {
   running = false;
   if (retryTimer) clearTimeout(retryTimer);
+  if (sweepTimer) clearInterval(sweepTimer);
+  sweepTimer = undefined;
   await stopQueue(timeoutMs);
 }

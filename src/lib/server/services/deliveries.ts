@@ -315,3 +315,22 @@ export async function attemptDelivery(deliveryId: string, job: JobAttempt): Prom
     throw err;
   }
 }
+
+/**
+ * Deliveries whose queue job has failed for good while the delivery still says queued or sending: the worker
+ * ended during the last attempt (the job expired with no retry left, so no attempt recorded the end). They are
+ * marked failed with that reason, so that the outbox never shows a delivery as on its way for ever. Returns how
+ * many were marked. The queue's tables (schema pgboss) exist once any process has started the queue.
+ */
+export async function failAbandonedDeliveries(): Promise<number> {
+  const res = await db.execute(sql`
+    update delivery d
+       set status = 'failed',
+           last_error = coalesce(d.last_error || ' · ', '') || 'the last attempt was cut short (its worker stopped) and no retry was left',
+           updated_at = now()
+     where d.status in ('queued', 'sending')
+       and d.job_id is not null
+       and (exists (select 1 from pgboss.job j where j.id::text = d.job_id and j.state = 'failed')
+            or exists (select 1 from pgboss.archive a where a.id::text = d.job_id and a.state = 'failed'))`);
+  return res.rowCount ?? 0;
+}
