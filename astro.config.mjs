@@ -55,6 +55,20 @@ const calcWorker = {
         logLevel: "warning",
       });
       logger.info(`job worker bundled into ${jobs}`);
+      // The workbook export thread (src/lib/server/workbook-thread looks for it next to entry.mjs).
+      const thread = fileURLToPath(new URL("./dist/server/workbook-thread.mjs", import.meta.url));
+      await esbuild({
+        entryPoints: [fileURLToPath(new URL("./src/lib/server/workbook-thread/thread.ts", import.meta.url))],
+        outfile: thread,
+        bundle: true,
+        packages: "external",
+        platform: "node",
+        format: "esm",
+        target: "node20",
+        tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
+        logLevel: "warning",
+      });
+      logger.info(`workbook export thread bundled into ${thread}`);
     },
   },
 };

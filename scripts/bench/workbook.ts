@@ -36,6 +36,13 @@ export async function run(): Promise<void> {
     entryPoints: [join(here, "..", "..", "src", "lib", "server", "calc-pool", "worker.ts")],
     outfile: join(dir, "calc-worker.mjs"),
   });
+  // The export thread, as the build bundles it next to the server.
+  await build({
+    ...common,
+    entryPoints: [join(here, "..", "..", "src", "lib", "server", "workbook-thread", "thread.ts")],
+    outfile: join(dir, "workbook-thread.mjs"),
+    packages: "external",
+  });
   const results: { ms: number; bytes: number; rows: number; maxRssMB: number }[] = [];
   for (let t = 0; t < TRIALS; t++) {
     // With the server's own node flags: the export stands in for the server process.

@@ -12,7 +12,7 @@ import { createProject } from "@/lib/server/services/projects";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
 import type { RevisionResponse, RevisionSnapshot } from "@/lib/contracts/results";
 import type { ScheduleResponse } from "@/lib/contracts/schedule";
-import { workbookFile, workbookPlan } from "@/lib/server/services/workbook";
+import { planRequest, workbookFile, workbookPlan } from "@/lib/server/services/workbook";
 import { POST as postWeather, DELETE as deleteWeather } from "@/pages/api/v1/projects/[id]/weather/index";
 import { POST as issueRoute } from "@/pages/api/v1/projects/[id]/revisions/index";
 import { GET as revisionRoute } from "@/pages/api/v1/projects/[id]/revisions/[rev]";
@@ -91,7 +91,7 @@ describe("the workbook with a weather file", () => {
   it("the draft's hourly sheet is computed from the file, as POST /calc/schedule computes it with the same weather", async () => {
     const plan = await workbookPlan({ projectId, revision: null });
     expect(plan.irradiance).toMatchObject({ source: "weather series", fileName: "quay-2025.csv", sha256: sha(csv), hours: 8760 });
-    const request = plan.request([plan.hourly[0]!.surface]);
+    const request = planRequest(plan, [plan.hourly[0]!.surface]);
     expect(request.weather).toHaveLength(8760);
     const engine = await callRoute(scheduleRoute as never, owner, "/api/v1/calc/schedule", {}, { method: "POST", body: request });
     expect(engine.status).toBe(200);

@@ -4,7 +4,7 @@
 // calculation pool into a sink that counts the bytes. Prints one JSON line: { ms, bytes, rows, maxRssMB }.
 import { Writable } from "node:stream";
 import { writeWorkbookPlan, type WorkbookPlan } from "@/lib/server/services/workbook";
-import { yearRequestInput } from "@/lib/server/services/results";
+import { writeWorkbookInThread } from "@/lib/server/workbook-thread";
 import { calculateGlazing } from "@/lib/calc/glazing";
 import { GlazingRequest } from "@/lib/contracts/glazing";
 import { sharedCalcPool } from "@/lib/server/calc-pool";
@@ -97,7 +97,7 @@ function plan(): WorkbookPlan {
     schedule,
     hourly,
     makeups: MAKEUPS.map((m, i) => ({ key: `m${i}`, name: m.name, revision: 1, layers: m.layers })),
-    request: (surfaces) => yearRequestInput(projectRow, YEAR, surfaces),
+    requestBase: { project: projectRow, year: YEAR, weather: null },
   };
 }
 
@@ -111,7 +111,9 @@ const sink = new Writable({
 });
 const finished = new Promise<void>((resolve, reject) => sink.on("finish", resolve).on("error", reject));
 const t0 = performance.now();
-await writeWorkbookPlan(p, sink, { pool: process.env.BENCH_POOL === "0" ? null : sharedCalcPool() });
+// As the download route writes it: on an export thread (BENCH_IN_PROCESS=1: on this thread through the pool).
+if (process.env.BENCH_IN_PROCESS === "1") await writeWorkbookPlan(p, sink, { pool: sharedCalcPool() });
+else await writeWorkbookInThread(p, sink);
 await finished;
 const ms = performance.now() - t0;
 console.log(JSON.stringify({ ms, bytes, rows: p.hourly.length * 8760, maxRssMB: process.resourceUsage().maxRSS / 1024 }));

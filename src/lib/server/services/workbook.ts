@@ -41,9 +41,10 @@ import {
   type HourlyRow,
 } from "@/lib/calc/workbook-tables";
 import { projectResults, resultYear, shadingOf, yearRequestInput } from "./results";
-import { weatherForResults } from "./uploads";
+import { weatherForResults, type ResultsWeather } from "./uploads";
 import type { IrradianceSource } from "@/lib/contracts/uploads";
 import { revisionOf } from "./revisions";
+import { writeWorkbookInThread } from "@/lib/server/workbook-thread";
 
 export { safeText };
 
@@ -122,7 +123,11 @@ export interface WorkbookPlan {
   hourly: HourlyEntry[];
   makeups: MakeupEntry[];
   /** The schedule request of a list of surfaces (the project's period, site and sky). */
-  request: (surfaces: unknown[]) => ReturnType<typeof yearRequestInput>;
+  /**
+   * What the schedule requests are built from (`planRequest`): plain data, so that a plan can be handed to the
+   * export thread.
+   */
+  requestBase: { project: ProjectRow; year: number; weather: ResultsWeather | null };
   /** Where the hourly irradiance comes from: the clear-sky model or the project's weather file. */
   irradiance: IrradianceSource;
 }
@@ -183,6 +188,7 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
     // The weather the revision was computed from travels with it; without one, the clear sky.
     const irradiance = snap.irradiance ?? { source: "clear sky" as const };
     const weather = irradiance.source === "weather series" && snap.weather ? { irradiance, rows: snap.weather } : null;
+    const requestBase = { project: asIssued, year: snap.year, weather };
     const request = (surfaces: unknown[]) => yearRequestInput(asIssued, snap.year, surfaces, weather);
     for (const s of snap.facades) {
       const now = facadeById.get(s.facadeId);
@@ -241,7 +247,7 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
       schedule,
       hourly,
       makeups: [...makeups.values()],
-      request,
+      requestBase,
     };
   }
 
@@ -249,6 +255,7 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
   const weather = await weatherForResults(p.id);
   const year = resultYear(req.year ?? new Date().getFullYear(), weather);
   const irradiance: IrradianceSource = weather?.irradiance ?? { source: "clear sky" };
+  const requestBase = { project: p, year, weather };
   const request = (surfaces: unknown[]) => yearRequestInput(p, year, surfaces, weather);
   const approved = await db
     .select({ option: facadeOption, revision: makeupRevision })
@@ -317,11 +324,17 @@ export async function workbookPlan(req: WorkbookRequest): Promise<WorkbookPlan> 
     schedule,
     hourly,
     makeups: [...makeups.values()],
-    request,
+    requestBase,
   };
 }
 
 // ---- computing ---------------------------------------------------------------------------------------------
+
+/** The schedule request of a list of surfaces (the plan's period, site, sky and weather). */
+export function planRequest(plan: Pick<WorkbookPlan, "requestBase">, surfaces: unknown[]) {
+  const { project: p, year, weather } = plan.requestBase;
+  return yearRequestInput(p, year, surfaces, weather);
+}
 
 /** The hourly schedule of one façade × option, exactly as POST /calc/schedule answers for its surface. */
 /** A schedule answer whose rows hold only the sheet's fields (the calc task "scheduleSheet"). */
@@ -330,7 +343,7 @@ type SheetSchedule = Omit<ScheduleResponse, "surfaces"> & {
 };
 
 async function hourlyOf(plan: WorkbookPlan, e: HourlyEntry, pool: CalcPool | null): Promise<SheetSchedule> {
-  return runCalc<"scheduleSheet", SheetSchedule>(pool, "scheduleSheet", ScheduleRequest.parse(plan.request([e.surface])));
+  return runCalc<"scheduleSheet", SheetSchedule>(pool, "scheduleSheet", ScheduleRequest.parse(planRequest(plan, [e.surface])));
 }
 
 type Angular = { ok: true; res: GlazingResponse } | { ok: false; problem: string };
@@ -443,7 +456,7 @@ export function irradianceText(i: IrradianceSource): string {
 
 function coverRows(plan: WorkbookPlan, methods: Record<string, string>, glazingMethods: Record<string, string> | null, irradiance: string) {
   const s = plan.site;
-  const req = plan.request([]);
+  const req = planRequest(plan, []);
   const rows: [string, CellValue][] = [
     ["Project", safeText(plan.project.name)],
     ["Status", plan.draft ? DRAFT_MARK : `Issued revision ${plan.revision!.letter}`],
@@ -602,9 +615,15 @@ export async function writeWorkbookPlan(plan: WorkbookPlan, out: Writable, opts:
 }
 
 /** Streams the workbook into `out`; resolves with its file name once the last byte is written. */
+/**
+ * Writes the workbook of `req` into `out`: on an export thread of its own (bounded heap, see
+ * lib/server/workbook-thread), or on this thread when `opts.pool` is given (the schedules then come from that
+ * pool, or from this thread with null).
+ */
 export async function writeWorkbook(req: WorkbookRequest, out: Writable, opts: WorkbookOptions = {}): Promise<{ fileName: string }> {
   const plan = await workbookPlan(req);
-  await writeWorkbookPlan(plan, out, opts);
+  if (opts.pool === undefined) await writeWorkbookInThread(plan, out);
+  else await writeWorkbookPlan(plan, out, opts);
   return { fileName: plan.fileName };
 }
 

@@ -5,7 +5,8 @@ import { queryOf } from "@/lib/contracts/pagination";
 import { WorkbookQuery } from "@/lib/contracts/workbook";
 import { endpoint } from "@/lib/server/http";
 import { requireDraftAccess, workbookHeaders } from "@/lib/server/workbook-access";
-import { workbookPlan, writeWorkbookPlan, XLSX_CONTENT_TYPE } from "@/lib/server/services/workbook";
+import { workbookPlan, XLSX_CONTENT_TYPE } from "@/lib/server/services/workbook";
+import { writeWorkbookInThread } from "@/lib/server/workbook-thread";
 
 const params = z.object({ id: rowId });
 
@@ -20,7 +21,8 @@ export const GET = endpoint(
     if (!q.revision) requireDraftAccess(membership);
     const plan = await workbookPlan({ projectId: project.id, revision: q.revision ?? null, year: q.year });
     const out = new PassThrough();
-    writeWorkbookPlan(plan, out).catch((err: unknown) => {
+    // Written on an export thread with a bounded heap (lib/server/workbook-thread); this thread only passes bytes on.
+    writeWorkbookInThread(plan, out).catch((err: unknown) => {
       console.error(`[api] workbook of project ${project.id} failed while streaming:`, err);
       out.destroy(err instanceof Error ? err : new Error(String(err)));
     });
