@@ -20,55 +20,40 @@ const baseHeaders = {
 };
 
 /**
- * The calculation worker runs in its own thread from a file of its own, which Vite's server bundle
- * does not contain: after the build, bundle it with esbuild into dist/server/calc-worker.mjs (next to
- * entry.mjs, where src/lib/server/calc-pool looks for it). Dev and tests run it from the sources.
+ * Files that run in threads or beside the server, which Vite's server bundle does not contain: after the
+ * build, each is bundled with esbuild into dist/server (next to entry.mjs, where the code that starts them
+ * looks). Dev and tests run them from the sources.
+ *   - calc-worker.mjs: the calculation pool's worker (src/lib/server/calc-pool), self-contained;
+ *   - jobs.mjs: the job worker that scripts/server.mjs runs inside the web server;
+ *   - workbook-thread.mjs: the workbook export thread (src/lib/server/workbook-thread).
+ * The last two keep their packages in node_modules.
  */
+const BUNDLES = [
+  { entry: "./src/lib/server/calc-pool/worker.ts", out: "calc-worker.mjs", what: "calculation worker", external: false },
+  { entry: "./src/lib/server/jobs/main.ts", out: "jobs.mjs", what: "job worker", external: true },
+  { entry: "./src/lib/server/workbook-thread/thread.ts", out: "workbook-thread.mjs", what: "workbook export thread", external: true },
+];
+
 /** @type {import("astro").AstroIntegration} */
 const calcWorker = {
   name: "paneray-calc-worker",
   hooks: {
     "astro:build:done": async ({ logger }) => {
-      const outfile = fileURLToPath(new URL("./dist/server/calc-worker.mjs", import.meta.url));
-      await esbuild({
-        entryPoints: [fileURLToPath(new URL("./src/lib/server/calc-pool/worker.ts", import.meta.url))],
-        outfile,
-        bundle: true,
-        platform: "node",
-        format: "esm",
-        target: "node20",
-        tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
-        logLevel: "warning",
-      });
-      logger.info(`calculation worker bundled into ${outfile}`);
-      // The job worker that scripts/server.mjs runs inside the web server (packages stay in node_modules).
-      const jobs = fileURLToPath(new URL("./dist/server/jobs.mjs", import.meta.url));
-      await esbuild({
-        entryPoints: [fileURLToPath(new URL("./src/lib/server/jobs/main.ts", import.meta.url))],
-        outfile: jobs,
-        bundle: true,
-        packages: "external",
-        platform: "node",
-        format: "esm",
-        target: "node20",
-        tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
-        logLevel: "warning",
-      });
-      logger.info(`job worker bundled into ${jobs}`);
-      // The workbook export thread (src/lib/server/workbook-thread looks for it next to entry.mjs).
-      const thread = fileURLToPath(new URL("./dist/server/workbook-thread.mjs", import.meta.url));
-      await esbuild({
-        entryPoints: [fileURLToPath(new URL("./src/lib/server/workbook-thread/thread.ts", import.meta.url))],
-        outfile: thread,
-        bundle: true,
-        packages: "external",
-        platform: "node",
-        format: "esm",
-        target: "node20",
-        tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
-        logLevel: "warning",
-      });
-      logger.info(`workbook export thread bundled into ${thread}`);
+      for (const b of BUNDLES) {
+        const outfile = fileURLToPath(new URL(`./dist/server/${b.out}`, import.meta.url));
+        await esbuild({
+          entryPoints: [fileURLToPath(new URL(b.entry, import.meta.url))],
+          outfile,
+          bundle: true,
+          ...(b.external ? { packages: "external" } : {}),
+          platform: "node",
+          format: "esm",
+          target: "node20",
+          tsconfig: fileURLToPath(new URL("./tsconfig.json", import.meta.url)),
+          logLevel: "warning",
+        });
+        logger.info(`${b.what} bundled into ${outfile}`);
+      }
     },
   },
 };

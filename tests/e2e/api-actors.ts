@@ -107,3 +107,16 @@ export async function addMember(owner: Caller, organizationId: string, role: Rol
   const members = (await call(owner, "GET", `/api/v1/orgs/${organizationId}/members`)).body as { members: { memberId: string; email: string }[] };
   return { memberId: members.members.find((m) => m.email === email)!.memberId, email };
 }
+
+/**
+ * A throwaway project of the demo organisation, made by the demo consultant through the API (`body` without
+ * the organisation): the consultant as a caller, the organisation's id and the project's.
+ */
+export async function throwawayProject(body: Record<string, unknown>): Promise<{ consultant: Caller; orgId: string; id: string }> {
+  const consultant = await signInDemo("consultant");
+  const me = (await call(consultant, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
+  const orgId = me.memberships[0]!.organizationId;
+  const created = await call(consultant, "POST", "/api/v1/projects", { organizationId: orgId, ...body });
+  if (created.status !== 201) throw new Error(`the throwaway project was refused: ${created.status} ${created.text.slice(0, 300)}`);
+  return { consultant, orgId, id: (created.body as { project: { id: string } }).project.id };
+}

@@ -10,7 +10,7 @@ import ExcelJS from "exceljs";
 import { simpleParser } from "mailparser";
 import type { ResultsResponse, RevisionResponse } from "@/lib/contracts/results";
 import { DEMO_PASSWORD, demoUser, signIn, uniqueEmail } from "./helpers";
-import { call, signInDemo } from "./api-actors";
+import { call, signInDemo, throwawayProject } from "./api-actors";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow } from "./workspace-rows";
 import { weatherCsv } from "@scripts/weather-year";
 
@@ -37,11 +37,7 @@ async function open(bytes: Buffer): Promise<{ cover: string; g: number }> {
 }
 
 test.beforeAll(async () => {
-  const consultant = await signInDemo("consultant");
-  const me = (await call(consultant, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
-  const orgId = me.memberships[0]!.organizationId;
-  const created = await call(consultant, "POST", "/api/v1/projects", {
-    organizationId: orgId,
+  const { consultant, orgId, id } = await throwawayProject({
     name: "Deliverables test block",
     siteName: "Invented pier",
     latitudeDeg: 41.15,
@@ -49,8 +45,7 @@ test.beforeAll(async () => {
     timeZone: "Europe/Lisbon",
     facades: [{ name: "South bay", azimuthDeg: 180, glazedAreaM2: 36 }],
   });
-  expect(created.status).toBe(201);
-  projectId = (created.body as { project: { id: string } }).project.id;
+  projectId = id;
   const facades = ((await call(consultant, "GET", `/api/v1/projects/${projectId}`)).body as { facades: { id: string }[] }).facades;
   const clear = await insertMakeupRow(orgId, "Deliverables clear", doubleUnit(clearPane(6), clearPane(4)));
   makeups.push(clear.id);
@@ -71,6 +66,7 @@ test("weather upload → results → issued workbook → e-mail → outbox", asy
   // Upload: the weather year on the project page.
   await page.goto(`/projects/${projectId}`);
   const upload = page.getByTestId("weather-panel").getByTestId("weather-upload");
+  await expect(upload.getByLabel("Choose a file…")).toBeEnabled();
   await upload.getByLabel("Choose a file…").setInputFiles({ name: "pier-2025.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
   await expect(upload.getByTestId("upload-saved")).toContainText("8760 hours from 2025-01-01 to 2025-12-31");
 

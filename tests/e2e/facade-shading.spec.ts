@@ -5,7 +5,7 @@
 import { expect, test, type Page } from "@playwright/test";
 import type { ResultsResponse } from "@/lib/contracts/results";
 import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
-import { call, signInDemo } from "./api-actors";
+import { call, signInDemo, throwawayProject } from "./api-actors";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow } from "./workspace-rows";
 
 const YEAR = new Date().getFullYear();
@@ -24,11 +24,7 @@ interface ApiFacade {
 test.describe.configure({ mode: "serial" });
 
 test.beforeAll(async () => {
-  const consultant = await signInDemo("consultant");
-  const me = (await call(consultant, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
-  const orgId = me.memberships[0]!.organizationId;
-  const created = await call(consultant, "POST", "/api/v1/projects", {
-    organizationId: orgId,
+  const { consultant, orgId, id } = await throwawayProject({
     name: "Shading form test block",
     siteName: "Test terrace",
     latitudeDeg: 38.7,
@@ -39,8 +35,7 @@ test.beforeAll(async () => {
       { name: "East bay", azimuthDeg: 90 },
     ],
   });
-  expect(created.status).toBe(201);
-  projectId = (created.body as { project: { id: string } }).project.id;
+  projectId = id;
   const facades = ((await call(consultant, "GET", `/api/v1/projects/${projectId}`)).body as { facades: ApiFacade[] }).facades;
   facadeIds = { south: facades.find((f) => f.name === "South bay")!.id, east: facades.find((f) => f.name === "East bay")!.id };
   const clear = await insertMakeupRow(orgId, "Shading test clear", doubleUnit(clearPane(6), clearPane(4)));

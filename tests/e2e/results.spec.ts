@@ -4,7 +4,7 @@
 import { expect, test, type Page } from "@playwright/test";
 import type { ResultsResponse, RevisionResponse } from "@/lib/contracts/results";
 import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
-import { call, signInDemo } from "./api-actors";
+import { call, signInDemo, throwawayProject } from "./api-actors";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow, tintedPane } from "./workspace-rows";
 
 const YEAR = new Date().getFullYear();
@@ -13,11 +13,7 @@ const makeups: string[] = [];
 const options: Record<string, string> = {};
 
 test.beforeAll(async () => {
-  const consultant = await signInDemo("consultant");
-  const me = (await call(consultant, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
-  const orgId = me.memberships[0]!.organizationId;
-  const created = await call(consultant, "POST", "/api/v1/projects", {
-    organizationId: orgId,
+  const { consultant, orgId, id } = await throwawayProject({
     name: "Results page test block",
     siteName: "Test quay",
     latitudeDeg: 38.7,
@@ -28,8 +24,7 @@ test.beforeAll(async () => {
       { name: "West bay", azimuthDeg: 270 },
     ],
   });
-  expect(created.status).toBe(201);
-  projectId = (created.body as { project: { id: string } }).project.id;
+  projectId = id;
   const facades = ((await call(consultant, "GET", `/api/v1/projects/${projectId}`)).body as { facades: { id: string; name: string }[] }).facades;
   const members = (await call(consultant, "GET", `/api/v1/projects/${projectId}/shares`)).body as { shares: { memberId: string; email: string }[] };
   const client = members.shares.find((m) => m.email === demoUser("client").email)!;

@@ -5,7 +5,7 @@ import { expect, test, type Page } from "@playwright/test";
 import { readFileSync } from "node:fs";
 import { createHash } from "node:crypto";
 import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
-import { call, signInDemo } from "./api-actors";
+import { call, signInDemo, throwawayProject } from "./api-actors";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow } from "./workspace-rows";
 import { weatherCsv } from "@scripts/weather-year";
 
@@ -17,11 +17,7 @@ const makeups: string[] = [];
 const panes: string[] = [];
 
 test.beforeAll(async () => {
-  const consultant = await signInDemo("consultant");
-  const me = (await call(consultant, "GET", "/api/v1/me")).body as { memberships: { organizationId: string }[] };
-  const orgId = me.memberships[0]!.organizationId;
-  const created = await call(consultant, "POST", "/api/v1/projects", {
-    organizationId: orgId,
+  const { consultant, orgId, id } = await throwawayProject({
     name: "Upload page test block",
     siteName: "Invented wharf",
     latitudeDeg: 41.15,
@@ -29,8 +25,7 @@ test.beforeAll(async () => {
     timeZone: "Europe/Lisbon",
     facades: [{ name: "South bay", azimuthDeg: 180 }],
   });
-  expect(created.status).toBe(201);
-  projectId = (created.body as { project: { id: string } }).project.id;
+  projectId = id;
   const facades = ((await call(consultant, "GET", `/api/v1/projects/${projectId}`)).body as { facades: { id: string }[] }).facades;
   const clear = await insertMakeupRow(orgId, "Upload page clear", doubleUnit(clearPane(6), clearPane(4)));
   makeups.push(clear.id);
@@ -53,6 +48,7 @@ test("a consultant imports measured panes on the library page", async ({ page })
   await expect(form.getByRole("link", { name: /template panes file/ })).toHaveAttribute("href", "/templates/paneray-panes-template.csv");
 
   // A broken file: every problem in the table, with line and column.
+  await expect(form.getByLabel("Choose a file…")).toBeEnabled();
   await form.getByLabel("Choose a file…").setInputFiles({ name: "broken.csv", mimeType: "text/csv", buffer: fixture("panes-broken.csv") });
   const problems = form.getByTestId("upload-errors");
   await expect(problems).toContainText("5 problems; nothing was saved");
@@ -64,6 +60,7 @@ test("a consultant imports measured panes on the library page", async ({ page })
   // The valid file: the panes saved, named as in the file; the file's SHA-256 as node:crypto computes it.
   const file = fixture("panes-valid.csv");
   const answer = page.waitForResponse((r) => r.url().endsWith("/panes/import") && r.request().method() === "POST");
+  await expect(form.getByLabel("Choose a file…")).toBeEnabled();
   await form.getByLabel("Choose a file…").setInputFiles({ name: "samples.csv", mimeType: "text/csv", buffer: file });
   const saved = (await (await answer).json()) as { panes: { id: string }[] };
   panes.push(...saved.panes.map((p) => p.id));
@@ -87,10 +84,12 @@ test("a consultant uploads a weather year on the project page and the results pa
 
   // The gap hour of the spring clock change is named with its line.
   const upload = panel.getByTestId("weather-upload");
+  await expect(upload.getByLabel("Choose a file…")).toBeEnabled();
   await upload.getByLabel("Choose a file…").setInputFiles({ name: "broken.csv", mimeType: "text/csv", buffer: fixture("weather-broken.csv") });
   await expect(upload.getByTestId("upload-errors")).toContainText("does not exist in Europe/Lisbon");
 
   const csv = weatherCsv({ year: 2025, latitudeDeg: 41.15, longitudeDeg: -8.61, times: "utc" });
+  await expect(upload.getByLabel("Choose a file…")).toBeEnabled();
   await upload.getByLabel("Choose a file…").setInputFiles({ name: "wharf-2025.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
   await expect(upload.getByTestId("upload-saved")).toContainText("8760 hours from 2025-01-01 to 2025-12-31");
   await expect(panel.getByTestId("weather-status")).toContainText("wharf-2025.csv");

@@ -6,6 +6,7 @@
 import { useId, useRef, useState, type ReactNode } from "react";
 import type { UploadError } from "@/lib/contracts/uploads";
 import { MAX_UPLOAD_BYTES } from "@/lib/contracts/uploads";
+import { useHydrated } from "@/components/forms/useHydrated";
 
 type Status =
   | { kind: "idle" }
@@ -32,6 +33,8 @@ const MB = 1024 * 1024;
 export default function UploadForm<T>({ action, noun, templateHref, help, renderSaved, onSaved, testId }: Props<T>) {
   const [status, setStatus] = useState<Status>({ kind: "idle" });
   const [over, setOver] = useState(false);
+  // Until the island runs, a chosen file would go nowhere: the button waits for it.
+  const hydrated = useHydrated();
   const input = useRef<HTMLInputElement>(null);
   const id = useId();
 
@@ -117,7 +120,7 @@ export default function UploadForm<T>({ action, noun, templateHref, help, render
             type="file"
             accept=".csv,text/csv"
             className="sr-only"
-            disabled={status.kind === "sending"}
+            disabled={!hydrated || status.kind === "sending"}
             onChange={(e) => pick(e.target.files)}
           />
         </label>
