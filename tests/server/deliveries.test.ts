@@ -323,7 +323,8 @@ describe("the delivery job", () => {
       message: "Here is revision A.",
     });
     expect(res.status).toBe(202);
-    const d = await waitForStatus(res.body.id, "sent");
+    // The workbook is written on its export thread, compiled from the sources in tests: slow on a busy machine.
+    const d = await waitForStatus(res.body.id, "sent", 60_000);
     expect(d.attempts).toBe(1);
     expect(d.messageId).toMatch(/^<.+>$/);
     expect(d.sentAt).not.toBeNull();
@@ -411,5 +412,5 @@ describe("the delivery job", () => {
       expect(Number(row![cG])).toBeCloseTo(f.values.normal.gValue, 10);
       expect(Number(row![cU])).toBeCloseTo(f.values.uValue, 10);
     }
-  });
+  }, 90_000);
 });

@@ -1,7 +1,7 @@
 // The workbook export thread: the workbook it writes is the one written on the main thread (every cell of every
 // sheet, read back with exceljs), and an export that runs out of its bounded heap fails alone — the process
 // and the next export carry on.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { PassThrough } from "node:stream";
 import { eq } from "drizzle-orm";
 import ExcelJS from "exceljs";
@@ -15,6 +15,8 @@ import { newOwner } from "./helpers";
 import { clear, double, insertMakeup, insertOption, tinted } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
+// Exports run on their thread, compiled from the sources in tests: generous on a busy machine.
+vi.setConfig({ testTimeout: 60_000, hookTimeout: 60_000 });
 
 /** A site of this run's own (the results cache is shared by equal inputs). */
 const LONGITUDE = -8.61 + Math.round(Math.random() * 1e6) / 1e9;

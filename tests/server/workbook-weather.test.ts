@@ -2,7 +2,7 @@
 // equal POST /calc/schedule with the same weather; a revision issued with the file keeps its weather, so its
 // workbook is unchanged after the file is removed, and its cover names the file and its SHA-256. The weather
 // year is invented (scripts/weather-year.ts, the same generator as the upload tests and the bench).
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { createHash } from "node:crypto";
 import { eq } from "drizzle-orm";
 import ExcelJS from "exceljs";
@@ -22,6 +22,8 @@ import { clear, double, insertMakeup, insertOption } from "./workspace-fixtures"
 import { weatherCsv } from "@scripts/weather-year";
 
 afterAll(() => pool.end());
+// Exports run on their thread, compiled from the sources in tests: generous on a busy machine.
+vi.setConfig({ testTimeout: 60_000, hookTimeout: 60_000 });
 
 const YEAR = 2025;
 /** A site of this run's own, so that cached results of an earlier run on the same database are never met. */

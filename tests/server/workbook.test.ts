@@ -3,7 +3,7 @@
 // compared with GET /projects/:id/results and the hourly sheets' rows, sums and peaks with POST
 // /calc/schedule for the same inputs; live SUM/MAX formulas; DRAFT on every sheet of a draft; user text
 // that a spreadsheet would run as a formula neutralised (xlsx and CSV); who may download what.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
 import ExcelJS from "exceljs";
 import { db, pool } from "@/lib/server/db/client";
@@ -24,6 +24,8 @@ import { invitedMember, newOwner } from "./helpers";
 import { clear, double, insertMakeup, insertOption, measuredClear, tinted } from "./workspace-fixtures";
 
 afterAll(() => pool.end());
+// Exports run on their thread, compiled from the sources in tests: generous on a busy machine.
+vi.setConfig({ testTimeout: 60_000, hookTimeout: 60_000 });
 
 const YEAR = 2025;
 /** A site of this run's own, so that cached results of an earlier run on the same database are not met. */
