@@ -10,7 +10,6 @@
 import { existsSync } from "node:fs";
 import type { Writable } from "node:stream";
 import { Worker } from "node:worker_threads";
-import type { WorkbookPlan } from "@/lib/server/services/workbook";
 import type { ThreadMessage } from "./protocol";
 
 /** The old-space limit of an export thread (MB): a full-year export of 24 façades lives in about 100 MB. */
@@ -45,8 +44,11 @@ async function turn(): Promise<() => void> {
   };
 }
 
-/** Writes the plan's workbook into `out` from an export thread, and ends `out`; rejects if the thread fails. */
-export async function writeWorkbookInThread(plan: WorkbookPlan, out: Writable, opts: { heapMb?: number } = {}): Promise<void> {
+/**
+ * Writes the plan's workbook into `out` from an export thread, and ends `out`; rejects if the thread fails.
+ * `plan` is a `WorkbookPlan` of lib/server/services/workbook (plain data; typed there, which calls this).
+ */
+export async function writeWorkbookInThread(plan: object, out: Writable, opts: { heapMb?: number } = {}): Promise<void> {
   const release = await turn();
   try {
     await new Promise<void>((resolve, reject) => {
