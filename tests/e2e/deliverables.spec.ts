@@ -85,6 +85,13 @@ test("weather upload → results → issued workbook → e-mail → outbox", asy
   const rev = (await (await page.request.get(`/api/v1/projects/${projectId}/revisions/A`)).json()) as RevisionResponse;
   await expect(page.getByTestId("revision-irradiance")).toContainText("hourly weather file pier-2025.csv, 2025-01-01 to 2025-12-31");
 
+  // The hourly table of the façade, one of the single tables, as CSV: a header naming every column and 8,760 hours.
+  const hourlyCsv = await page.request.get((await page.getByTestId("hourly-csv").first().getAttribute("href"))!);
+  expect(hourlyCsv.status()).toBe(200);
+  const lines = (await hourlyCsv.text()).trim().split(/\r?\n/);
+  expect(lines.some((l) => l.includes("Transmitted solar irradiance (W/m²)"))).toBe(true);
+  expect(lines.filter((l) => /^"?2025-/.test(l)).length).toBe(8760);
+
   // Export: the revision page's download, opened with exceljs.
   const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("revision-workbook").click()]);
   expect(download.suggestedFilename()).toBe("Deliverables-test-block_rev-A.xlsx");
