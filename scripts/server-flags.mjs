@@ -4,4 +4,7 @@
 // (src/lib/server/workbook-thread), which a process-wide cap would do at the cost of every request's speed.
 import { readFileSync } from "node:fs";
 
-export const SERVER_NODE_FLAGS = readFileSync(new URL("./server-node-flags", import.meta.url), "utf8").trim().split(/\s+/).filter(Boolean);
+export const SERVER_NODE_FLAGS = readFileSync(new URL("./server-node-flags", import.meta.url), "utf8")
+  .trim()
+  .split(/\s+/)
+  .filter(Boolean);
