@@ -15,6 +15,7 @@ import { makeup, makeupRevision } from "@/lib/server/db/library-schema";
 import { calculateGlazing } from "@/lib/calc/glazing";
 import { GlazingRequest } from "@/lib/contracts/glazing";
 import { signUpOwner, startStack, type Stack } from "./load";
+import { MAKEUPS } from "./data/makeups";
 
 const TRIALS = Number(process.env.RESULTS_TRIALS ?? 5);
 const WARM_CALLS = 20;
@@ -29,28 +30,6 @@ const median = (xs: number[]) => {
 };
 const verdict = (ok: boolean) => (ok ? "PASS" : "MISS");
 const ms = (x: number) => `${x.toFixed(0)} ms`;
-
-const pane = (thicknessMm: number, absorptionPerMm: number, emissivityBack?: number) => ({
-  kind: "pane",
-  thicknessMm,
-  refractiveIndex: 1.52,
-  absorptionPerMm,
-  ...(emissivityBack ? { emissivityBack } : {}),
-});
-const MAKEUPS = [
-  { name: "Bench clear double", layers: [pane(6, 0.02), { kind: "gap", widthMm: 16, gas: "air" }, pane(4, 0.02)] },
-  { name: "Bench tinted double", layers: [pane(6, 0.15), { kind: "gap", widthMm: 16, gas: { argon: 0.9, air: 0.1 } }, pane(4, 0.02)] },
-  {
-    name: "Bench triple",
-    layers: [
-      pane(6, 0.02),
-      { kind: "gap", widthMm: 14, gas: "argon" },
-      pane(4, 0.02, 0.1),
-      { kind: "gap", widthMm: 14, gas: "argon" },
-      pane(4, 0.02),
-    ],
-  },
-];
 
 /** 24 façades round the compass, every other one with a window under an overhang, 3 options each. */
 async function seedProject(databaseUrl: string, organizationId: string, userId: string): Promise<string> {

@@ -8,30 +8,10 @@ import { writeWorkbookInThread } from "@/lib/server/workbook-thread";
 import { calculateGlazing } from "@/lib/calc/glazing";
 import { GlazingRequest } from "@/lib/contracts/glazing";
 import { sharedCalcPool } from "@/lib/server/calc-pool";
+import { MAKEUPS } from "../data/makeups";
 
 const YEAR = 2026;
 const FACADES = 24;
-const pane = (thicknessMm: number, absorptionPerMm: number, emissivityBack?: number) => ({
-  kind: "pane",
-  thicknessMm,
-  refractiveIndex: 1.52,
-  absorptionPerMm,
-  ...(emissivityBack ? { emissivityBack } : {}),
-});
-const MAKEUPS = [
-  { name: "Bench clear double", layers: [pane(6, 0.02), { kind: "gap", widthMm: 16, gas: "air" }, pane(4, 0.02)] },
-  { name: "Bench tinted double", layers: [pane(6, 0.15), { kind: "gap", widthMm: 16, gas: { argon: 0.9, air: 0.1 } }, pane(4, 0.02)] },
-  {
-    name: "Bench triple",
-    layers: [
-      pane(6, 0.02),
-      { kind: "gap", widthMm: 14, gas: "argon" },
-      pane(4, 0.02, 0.1),
-      { kind: "gap", widthMm: 14, gas: "argon" },
-      pane(4, 0.02),
-    ],
-  },
-];
 
 const projectRow = {
   id: "bench-project",
