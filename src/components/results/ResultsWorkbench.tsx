@@ -35,9 +35,9 @@ function ResultsWorkbench({ projectId, defaultYear, canIssue }: Props) {
   const yearValid = yearCheck.success;
   const toggle = (id: string) => setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length >= MAX_COMPARED_OPTIONS ? s : [...s, id]));
   const r = results.data;
-  // While another year loads, the figures on screen belong to the previous year: grey them and say so. With a
-  // weather file the period is the file's whatever year is asked, so its figures are never another year's.
-  const stale = results.isPlaceholderData || (r !== undefined && r.irradiance?.source !== "weather series" && r.year !== year);
+  // While another year loads, the figures on screen are the previous query's (kept as placeholder): grey them
+  // and say so. (With a weather file the answer's year is the file's, whatever year was asked.)
+  const stale = results.isPlaceholderData;
 
   return (
     <div className="space-y-6">
