@@ -3,18 +3,10 @@
 // Retry-After within 2 s while the database is gone, keep every write it acknowledged, and serve
 // again once the database is back, without a restart. Loopback only; every phase is bounded.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { execFile, spawn, type ChildProcess } from "node:child_process";
-import { chmodSync, existsSync, mkdtempSync, rmSync } from "node:fs";
-import net from "node:net";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
-import { promisify } from "node:util";
-import { randomBytes } from "node:crypto";
 import pg from "pg";
 import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
-import { SERVER_NODE_FLAGS } from "@scripts/server-flags.mjs";
+import { signInCookie, sleep, startStack, waitFor, type Stack } from "./stack";
 
-const run = promisify(execFile);
 const WRITERS = 6;
 const OUTAGE_MS = 3_000;
 const ANSWER_BUDGET_MS = 2_000;
@@ -29,34 +21,13 @@ interface Call {
   name: string;
 }
 
-const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer();
-    s.once("error", reject);
-    s.listen(0, "127.0.0.1", () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-let dir = "";
-let pgPort = 0;
+let stack: Stack | null = null;
 let base = "";
-let databaseUrl = "";
-let server: ChildProcess | null = null;
-let exited: { code: number | null; signal: string | null } | null = null;
-let serverLog = "";
 let cookie = "";
 let organizationId = "";
 const calls: Call[] = [];
 let writing = false;
 let writers: Promise<void>[] = [];
-
-const pgUp = () => run("bash", ["scripts/pg.sh", "up", join(dir, "pg"), String(pgPort)], { env: { ...process.env, PG_FSYNC: "off" } });
-const pgDown = (mode: "fast" | "immediate") => run("bash", ["scripts/pg.sh", "down", join(dir, "pg"), mode]);
 
 async function request(path: string, init: RequestInit = {}): Promise<Response | null> {
   try {
@@ -101,57 +72,10 @@ async function writer(w: number) {
   }
 }
 
-async function waitFor(check: () => Promise<boolean>, budgetMs: number): Promise<number> {
-  const t0 = Date.now();
-  while (Date.now() - t0 < budgetMs) {
-    if (await check()) return Date.now() - t0;
-    await sleep(100);
-  }
-  throw new Error(`not within ${budgetMs} ms`);
-}
-
 beforeAll(async () => {
-  if (!existsSync("dist/server/entry.mjs")) throw new Error("the fault suite runs the built server: run `npx astro build` first");
-  dir = mkdtempSync(join(tmpdir(), "paneray-fault-"));
-  chmodSync(dir, 0o755); // the postgres user must be able to enter
-  pgPort = await freePort();
-  const { stdout } = await pgUp();
-  const bin = stdout.trim();
-  await run(join(bin, "createdb"), ["-h", "127.0.0.1", "-p", String(pgPort), "-U", "postgres", "paneray_fault"]);
-  databaseUrl = `postgres://postgres@127.0.0.1:${pgPort}/paneray_fault`;
-  const webPort = await freePort();
-  base = `http://127.0.0.1:${webPort}`;
-  const env: NodeJS.ProcessEnv = {
-    PATH: process.env.PATH,
-    HOME: process.env.HOME,
-    DATABASE_URL: databaseUrl,
-    BETTER_AUTH_URL: base,
-    BETTER_AUTH_SECRET: randomBytes(32).toString("hex"),
-    AUTH_RATE_LIMIT: "off",
-    ASTRO_TELEMETRY_DISABLED: "1",
-  };
-  await run("node", ["scripts/migrate.mjs"], { env });
-  await run("npx", ["tsx", "scripts/seed.ts"], { env });
-
-  server = spawn("node", [...SERVER_NODE_FLAGS, "scripts/server.mjs"], {
-    env: { ...env, HOST: "127.0.0.1", PORT: String(webPort), NODE_ENV: "production" },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  server.stdout!.on("data", (d: Buffer) => (serverLog += d.toString()));
-  server.stderr!.on("data", (d: Buffer) => (serverLog += d.toString()));
-  server.on("exit", (code, signal) => (exited = { code, signal }));
-  await waitFor(async () => (await request("/api/health"))?.status === 200, 30_000);
-
-  const signIn = await request("/api/auth/sign-in/email", {
-    method: "POST",
-    headers: { "content-type": "application/json" },
-    body: JSON.stringify({ email: demoUser("consultant").email, password: DEMO_PASSWORD }),
-  });
-  expect(signIn?.status).toBe(200);
-  cookie = signIn!.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
+  stack = await startStack("paneray_fault");
+  base = stack.base;
+  cookie = await signInCookie(base, "consultant");
   const list = (await (await request("/api/v1/projects"))!.json()) as { organizations: { organizationId: string; role: string }[] };
   organizationId = list.organizations.find((o) => o.role === "consultant")!.organizationId;
 
@@ -162,18 +86,12 @@ beforeAll(async () => {
 afterAll(async () => {
   writing = false;
   await Promise.race([Promise.all(writers), sleep(10_000)]);
-  if (server && !exited) {
-    server.kill("SIGTERM");
-    await Promise.race([new Promise((r) => server!.once("exit", r)), sleep(5_000)]);
-  }
-  if (dir) {
-    await pgDown("fast").catch(() => {});
-    rmSync(dir, { recursive: true, force: true });
-  }
+  await stack?.stop();
 }, 30_000);
 
 const alive = () => {
-  if (exited) throw new Error(`the server process exited (${JSON.stringify(exited)}); its last output:\n${serverLog.slice(-3000)}`);
+  const exited = stack!.exited();
+  if (exited) throw new Error(`the server process exited (${JSON.stringify(exited)}); its last output:\n${stack!.log().slice(-3000)}`);
 };
 
 async function outageCycle(mode: "fast" | "immediate") {
@@ -182,7 +100,7 @@ async function outageCycle(mode: "fast" | "immediate") {
   const before = calls.filter((c) => c.status === 201).length;
   expect(before).toBeGreaterThan(0);
 
-  await pgDown(mode);
+  await stack!.pgDown(mode);
   const down = Date.now();
 
   // While the database is gone: the API, a page and the health report, each within the budget.
@@ -230,7 +148,7 @@ async function outageCycle(mode: "fast" | "immediate") {
   expect(invitationHtml).toContain('data-testid="unavailable"');
 
   expect(health?.status).toBe(503);
-  expect(healthBody).not.toContain(String(pgPort));
+  expect(healthBody).not.toContain(String(stack!.pgPort));
   expect(healthBody).not.toContain("127.0.0.1");
   expect(healthBody).not.toContain("ECONNREFUSED");
 
@@ -245,9 +163,9 @@ async function outageCycle(mode: "fast" | "immediate") {
     expect(c.end - c.start).toBeLessThan(ANSWER_BUDGET_MS);
   }
 
-  await pgUp();
+  await stack!.pgUp();
   const back = Date.now(); // pg_ctl start has returned: PostgreSQL accepts connections again
-  await waitFor(async () => calls.some((c) => c.start > restart && c.status === 201), RECOVERY_BUDGET_MS);
+  await waitFor(async () => calls.some((c) => c.start > restart && c.status === 201), RECOVERY_BUDGET_MS, "a write acknowledged after the restart");
   alive();
   expect((await request("/api/health"))?.status).toBe(200);
   const firstAck = Math.min(...calls.filter((c) => c.start > restart && c.status === 201).map((c) => c.end));
@@ -271,7 +189,7 @@ describe("database outage under write load (built server)", () => {
     const statuses = new Set(calls.map((c) => c.status));
     expect([...statuses].sort()).toEqual([201, 503]);
     const acknowledged = calls.filter((c) => c.status === 201).map((c) => c.name);
-    const client = new pg.Client({ connectionString: databaseUrl });
+    const client = new pg.Client({ connectionString: stack!.databaseUrl });
     await client.connect();
     try {
       const { rows } = await client.query<{ name: string }>("select name from project where name like 'outage-w%'");

@@ -3,49 +3,20 @@
 // and once the fake is back the queue's next retry delivers the message, which the fake stores. Own PostgreSQL,
 // own ports, loopback only; every phase is bounded.
 import { afterAll, beforeAll, expect, it } from "vitest";
-import { execFile, spawn, type ChildProcess } from "node:child_process";
-import { chmodSync, existsSync, mkdtempSync, readdirSync, rmSync } from "node:fs";
+import { spawn, type ChildProcess } from "node:child_process";
+import { readdirSync } from "node:fs";
 import net from "node:net";
-import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { promisify } from "node:util";
-import { randomBytes } from "node:crypto";
-import { DEMO_PASSWORD, DEMO_PROJECTS, demoUser } from "@/lib/demo-scenario";
-import { SERVER_NODE_FLAGS } from "@scripts/server-flags.mjs";
+import { DEMO_PROJECTS } from "@/lib/demo-scenario";
+import { freePort, signInCookie, sleep, startStack, waitFor, type Stack } from "./stack";
 
-const run = promisify(execFile);
-const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer();
-    s.once("error", reject);
-    s.listen(0, "127.0.0.1", () => {
-      const { port } = s.address() as net.AddressInfo;
-      s.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitFor<T>(check: () => Promise<T | null | undefined | false>, budgetMs: number, what: string): Promise<T> {
-  const until = Date.now() + budgetMs;
-  while (Date.now() < until) {
-    const v = await check();
-    if (v) return v;
-    await sleep(200);
-  }
-  throw new Error(`${what}: not within ${budgetMs} ms`);
-}
-
-let dir = "";
+let stack: Stack | null = null;
 let base = "";
 let cookie = "";
 let smtpPort = 0;
-let server: ChildProcess | null = null;
 let fake: ChildProcess | null = null;
-let log = "";
 
-const mailDir = () => join(dir, "mail");
+const mailDir = () => join(stack!.dir, "mail");
 
 async function startFake() {
   fake = spawn("node", ["scripts/smtp-fake.mjs"], { env: { ...process.env, MAIL_DIR: mailDir(), SMTP_PORT: String(smtpPort) }, stdio: "ignore" });
@@ -77,59 +48,25 @@ const api = async (path: string, init: RequestInit = {}) =>
   });
 
 beforeAll(async () => {
-  if (!existsSync("dist/server/jobs.mjs")) throw new Error("the fault suite runs the built server: run `npx astro build` first");
-  dir = mkdtempSync(join(tmpdir(), "paneray-fault-mail-"));
-  chmodSync(dir, 0o755);
-  const pgPort = await freePort();
-  const { stdout } = await run("bash", ["scripts/pg.sh", "up", join(dir, "pg"), String(pgPort)], { env: { ...process.env, PG_FSYNC: "off" } });
-  await run(join(stdout.trim(), "createdb"), ["-h", "127.0.0.1", "-p", String(pgPort), "-U", "postgres", "paneray_mail"]);
-  const webPort = await freePort();
   smtpPort = await freePort();
-  base = `http://127.0.0.1:${webPort}`;
-  const env: NodeJS.ProcessEnv = {
-    PATH: process.env.PATH,
-    HOME: process.env.HOME,
-    DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/paneray_mail`,
-    BETTER_AUTH_URL: base,
-    BETTER_AUTH_SECRET: randomBytes(32).toString("hex"),
-    AUTH_RATE_LIMIT: "off",
-    ASTRO_TELEMETRY_DISABLED: "1",
-    SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
-    // Fast retries for the test: 1 s, then about 2, 4, 8 … s (with jitter); enough of them to outlast the outage.
-    DELIVERY_RETRY_DELAY_SECONDS: "1",
-    DELIVERY_RETRY_LIMIT: "8",
-    JOB_POLL_SECONDS: "0.5",
-  };
-  await run("node", ["scripts/migrate.mjs"], { env });
-  await run("npx", ["tsx", "scripts/seed.ts"], { env });
-  server = spawn("node", [...SERVER_NODE_FLAGS, "scripts/server.mjs"], {
-    env: { ...env, HOST: "127.0.0.1", PORT: String(webPort), NODE_ENV: "production" },
-    stdio: ["ignore", "pipe", "pipe"],
-  });
-  server.stdout!.on("data", (d: Buffer) => (log += d.toString()));
-  server.stderr!.on("data", (d: Buffer) => (log += d.toString()));
-  await waitFor(async () => (await fetch(`${base}/api/health`).catch(() => null))?.status === 200, 30_000, "the server's health");
-  const signIn = await api("/api/auth/sign-in/email", {
-    method: "POST",
-    body: JSON.stringify({ email: demoUser("consultant").email, password: DEMO_PASSWORD }),
-  });
-  expect(signIn.status).toBe(200);
-  cookie = signIn.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
+  stack = await startStack(
+    "paneray_mail",
+    {
+      SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+      // Fast retries for the test: 1 s, then about 2, 4, 8 … s (with jitter); enough of them to outlast the outage.
+      DELIVERY_RETRY_DELAY_SECONDS: "1",
+      DELIVERY_RETRY_LIMIT: "8",
+      JOB_POLL_SECONDS: "0.5",
+    },
+    "dist/server/jobs.mjs",
+  );
+  base = stack.base;
+  cookie = await signInCookie(base, "consultant");
 }, 120_000);
 
 afterAll(async () => {
   await stopFake();
-  if (server && server.exitCode === null) {
-    server.kill("SIGTERM");
-    await Promise.race([new Promise((r) => server!.once("exit", r)), sleep(8_000)]);
-  }
-  if (dir) {
-    await run("bash", ["scripts/pg.sh", "down", join(dir, "pg"), "fast"]).catch(() => {});
-    rmSync(dir, { recursive: true, force: true });
-  }
+  await stack?.stop();
 }, 30_000);
 
 it("retries while the SMTP server is stopped, records each failure, and delivers once it is back", async () => {
@@ -165,7 +102,7 @@ it("retries while the SMTP server is stopped, records each failure, and delivers
   expect(failing.lastError).toMatch(/ECONNREFUSED/);
   expect(failing.attachment?.sha256).toMatch(/^[0-9a-f]{64}$/);
   const sha = failing.attachment!.sha256;
-  expect(server!.exitCode, log.slice(-2000)).toBeNull();
+  expect(stack!.exited(), stack!.log().slice(-2000)).toBeNull();
 
   await startFake();
   const sent = await waitFor(
