@@ -26,7 +26,8 @@ import {
 import { surfaceOrientationDeg } from "@/lib/physics/surface-geometry";
 import { shading as shadingCases, type ShadingInput } from "@/lib/reference-cases/shading";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { deg, expectBelow, expectedOf, expectValue } from "./fixtures";
+import { shadingValues } from "@/lib/validation/engines/shading";
+import { deg, expectBelow, expectCase, expectedOf, expectValue } from "./fixtures";
 
 const RAD = 180 / Math.PI;
 const southVertical = surfaceOrientationDeg(180, 90);
@@ -55,6 +56,7 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
 
   const angles = caseById("shading/example/angles");
   it(angles.label, () => {
+    expectCase(shadingValues(angles.input), angles);
     expectBelow(gamma * RAD, expectedOf(angles, "horizontalShadowAngleDeg"));
     expectValue(Math.tan(omega), expectedOf(angles, "tanProfileAngle"));
     expectValue(omega * RAD, expectedOf(angles, "profileAngleDeg"));
@@ -63,6 +65,7 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
 
   const band = caseById("shading/example/shaded-band-and-strip");
   it(band.label, () => {
+    expectCase(shadingValues(band.input), band);
     const i = band.input;
     expectValue(
       overhangShadedHeightM(i.overhang.depthM, i.overhang.gapAboveHeadM, i.windowHeightM, omega),
@@ -73,6 +76,7 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
 
   const fractions = caseById("shading/example/sunlit-fractions");
   it(`${fractions.label}, on the hot path`, () => {
+    expectCase(shadingValues(fractions.input), fractions);
     const i = fractions.input;
     const at = (spec: ShadingSpec) => sunlitFractionAt(prepareShading(spec), southVertical, deg(i.sunAltitudeDeg), deg(i.sunAzimuthDeg));
     expectValue(at(example), expectedOf(fractions, "sunlitFraction"));
@@ -84,6 +88,7 @@ describe("beam, infinite devices: worked example (south façade, sun alt 50°, a
 
   const rows = shadingCases.cases.filter((c) => c.id.startsWith("shading/example-window/"));
   it.each(rows)("$label", (c) => {
+    expectCase(shadingValues(c.input), c); // the evaluator the validation report runs
     const i = c.input;
     const g = horizontalShadowAngleRad(deg(i.sunAzimuthDeg), deg(i.surfaceAzimuthDeg));
     const o = profileAngleRad(deg(i.sunAltitudeDeg), g);

@@ -17,7 +17,7 @@ import {
   normalWaveVectorComponents,
   snellRefractionAngle,
 } from "@/lib/physics/fresnel";
-import { asRadians, toDegrees } from "@/lib/physics/units";
+import { asRadians } from "@/lib/physics/units";
 import {
   airGlassCases,
   brewsterCases,
@@ -30,41 +30,11 @@ import {
   totalInternalReflectionCases,
   type FresnelCaseInput,
 } from "@/lib/reference-cases/fresnel";
+import { fresnelValues } from "@/lib/validation/engines/fresnel";
 import { deg, expectCase } from "./fixtures";
 
-/** The engine's values of the quantities a Fresnel case names. */
-function engine(input: FresnelCaseInput): Record<string, number> {
-  switch (input.kind) {
-    case "interface": {
-      const f = fresnelInterface(input.n1, input.n2, deg(input.thetaDeg));
-      const thetaT = snellRefractionAngle(input.n1, input.n2, deg(input.thetaDeg));
-      return {
-        Rs: f.Rs,
-        Rp: f.Rp,
-        R: f.R,
-        "rs.re": f.rs.re,
-        "rp.re": f.rp.re,
-        "qx.re": f.qx.re,
-        "qx.im": f.qx.im,
-        argRsDeg: (f.rs.arg() * 180) / Math.PI,
-        argRpDeg: (f.rp.arg() * 180) / Math.PI,
-        ...(thetaT === null ? {} : { thetaTDeg: toDegrees(thetaT) }),
-      };
-    }
-    case "brewster": {
-      const b = brewsterAngle(input.n1, input.n2);
-      const f = fresnelInterface(input.n1, input.n2, b);
-      return { brewsterAngleDeg: toDegrees(b), Rs: f.Rs, Rp: f.Rp };
-    }
-    case "critical":
-      return { criticalAngleDeg: toDegrees(criticalAngle(input.n1, input.n2)!) };
-    case "reciprocity": {
-      const thetaT = snellRefractionAngle(input.n1, input.n2, deg(input.thetaDeg))!;
-      const back = fresnelInterface(input.n2, input.n1, thetaT);
-      return { thetaTDeg: toDegrees(thetaT), RsBack: back.Rs, RpBack: back.Rp };
-    }
-  }
-}
+/** The engine's values of a Fresnel case: the evaluator the validation report runs. */
+const engine = fresnelValues;
 
 const interfaceInput = (input: FresnelCaseInput) => {
   if (input.kind !== "interface") throw new Error(`expected an interface case, got ${input.kind}`);
