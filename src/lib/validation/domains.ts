@@ -34,25 +34,26 @@ import { evaluateUValue } from "./engines/u-value";
 import { defineDomain, type Evaluation, type ValidationDomain } from "./types";
 
 const of = <C extends ReferenceCase>(
+  label: string,
   d: { readonly domain: string; readonly title: string; readonly cases: readonly C[] },
   evaluate: (c: C) => Evaluation,
-) => defineDomain({ domain: d.domain, title: d.title, cases: d.cases, evaluate });
+) => defineDomain({ domain: d.domain, title: d.title, label, cases: d.cases, evaluate });
 
 /** Every domain, in the order the report shows them. */
 export const VALIDATION_DOMAINS: readonly ValidationDomain[] = [
-  of(fresnelDomain, evaluateFresnel),
-  of(absorbingPaneDomain, evaluateAbsorbingPane),
-  of(measuredPaneDomain, evaluateMeasuredPane),
-  of(layerStackDomain, evaluateLayerStack),
-  of(hemisphericalDomain, evaluateHemispherical),
-  of(gValueDomain, evaluateGValue),
-  of(uValueDomain, evaluateUValue),
-  of(gasPropertiesDomain, evaluateGasProperties),
-  of(sunPosition, evaluateSunPosition),
-  of(incidence, evaluateIncidence),
-  of(shading, evaluateShading),
-  of(irradiance, evaluateIrradiance),
-  defineDomain({ ...localTimeline, evaluate: evaluateLocalTimeline, expectedTexts: expectedTimelineTexts }),
+  of("Fresnel", fresnelDomain, evaluateFresnel),
+  of("Absorbing pane", absorbingPaneDomain, evaluateAbsorbingPane),
+  of("Measured panes", measuredPaneDomain, evaluateMeasuredPane),
+  of("Layer stacks", layerStackDomain, evaluateLayerStack),
+  of("Hemispherical", hemisphericalDomain, evaluateHemispherical),
+  of("g (EN 410)", gValueDomain, evaluateGValue),
+  of("U (EN 673)", uValueDomain, evaluateUValue),
+  of("Gas properties", gasPropertiesDomain, evaluateGasProperties),
+  of("Sun position", sunPosition, evaluateSunPosition),
+  of("Incidence", incidence, evaluateIncidence),
+  of("Shading", shading, evaluateShading),
+  of("Sky and transposition", irradiance, evaluateIrradiance),
+  defineDomain({ ...localTimeline, label: "Daylight saving", evaluate: evaluateLocalTimeline, expectedTexts: expectedTimelineTexts }),
 ];
 
 /** The registry's domain of a key; throws for an unknown key. */

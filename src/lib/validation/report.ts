@@ -46,6 +46,7 @@ export interface Extreme {
 export interface DomainSummary {
   readonly domain: string;
   readonly title: string;
+  readonly label: string;
   readonly cases: number;
   readonly values: number;
   readonly passing: number;
@@ -197,11 +198,12 @@ function largest(rows: readonly ReportRow[], pick: (r: ReportRow) => number | nu
 }
 
 /** The summary of one domain's rows. */
-export function summarize(d: Pick<ValidationDomain, "domain" | "title" | "cases">, rows: readonly ReportRow[]): DomainSummary {
+export function summarize(d: Pick<ValidationDomain, "domain" | "title" | "label" | "cases">, rows: readonly ReportRow[]): DomainSummary {
   const passing = rows.filter((r) => r.pass).length;
   return {
     domain: d.domain,
     title: d.title,
+    label: d.label,
     cases: d.cases.length,
     values: rows.length,
     passing,

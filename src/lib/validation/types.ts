@@ -21,6 +21,8 @@ export interface ValidationDomain<C extends ReferenceCase = ReferenceCase> {
   /** Anchor and key, e.g. "fresnel". */
   readonly domain: string;
   readonly title: string;
+  /** A short name for the chart and the summary table, e.g. "Fresnel". */
+  readonly label: string;
   readonly cases: readonly C[];
   readonly evaluate: (c: C) => Evaluation;
   /** Expected texts of a case (quantity → text), compared for equality. */
