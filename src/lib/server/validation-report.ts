@@ -34,7 +34,9 @@ export function appRoot(start = dirname(fileURLToPath(import.meta.url))): string
 function gitCommit(root: string): string | null {
   if (!existsSync(join(root, ".git"))) return null;
   try {
-    const out = execFileSync("git", ["rev-parse", "HEAD"], { cwd: root, timeout: 2000, stdio: ["ignore", "pipe", "ignore"] }).toString().trim();
+    const out = execFileSync("git", ["rev-parse", "HEAD"], { cwd: root, timeout: 2000, stdio: ["ignore", "pipe", "ignore"] })
+      .toString()
+      .trim();
     return /^[0-9a-f]{40}$/.test(out) ? out : null;
   } catch {
     return null;

@@ -35,7 +35,7 @@ export function axisPosition(ratio: number): number {
 export const chartTicks = (): { x: number; label: string }[] =>
   Array.from({ length: MAX_DECADE - MIN_DECADE + 1 }, (_, k) => {
     const decade = MIN_DECADE + k;
-    return { x: axisPosition(10 ** decade), label: decade === 0 ? "1" : decade === 1 ? "10" : `1e${decade}` };
+    return { x: axisPosition(10 ** decade), label: decade === 0 ? "1" : decade === 1 ? "10" : `${decade === MIN_DECADE ? "≤ " : ""}1e${decade}` };
   });
 
 const pointOf = (r: ReportRow): ChartPoint => {
