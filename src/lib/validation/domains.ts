@@ -12,6 +12,7 @@ import { hemisphericalDomain } from "@/lib/reference-cases/hemispherical";
 import { incidence } from "@/lib/reference-cases/incidence";
 import { irradiance } from "@/lib/reference-cases/irradiance";
 import { layerStackDomain } from "@/lib/reference-cases/layer-stack";
+import { lightTransmittanceDomain } from "@/lib/reference-cases/light-transmittance";
 import { localTimeline } from "@/lib/reference-cases/local-timeline";
 import { measuredPaneDomain } from "@/lib/reference-cases/measured-pane";
 import { shading } from "@/lib/reference-cases/shading";
@@ -26,6 +27,7 @@ import { evaluateHemispherical } from "./engines/hemispherical";
 import { evaluateIncidence } from "./engines/incidence";
 import { evaluateIrradiance } from "./engines/irradiance";
 import { evaluateLayerStack } from "./engines/layer-stack";
+import { evaluateLightTransmittance } from "./engines/light-transmittance";
 import { evaluateLocalTimeline, expectedTimelineTexts } from "./engines/local-timeline";
 import { evaluateMeasuredPane } from "./engines/measured-pane";
 import { evaluateShading } from "./engines/shading";
@@ -46,6 +48,7 @@ export const VALIDATION_DOMAINS: readonly ValidationDomain[] = [
   of("Measured panes", measuredPaneDomain, evaluateMeasuredPane),
   of("Layer stacks", layerStackDomain, evaluateLayerStack),
   of("Hemispherical", hemisphericalDomain, evaluateHemispherical),
+  of("Light transmittance", lightTransmittanceDomain, evaluateLightTransmittance),
   of("g (EN 410)", gValueDomain, evaluateGValue),
   of("U (EN 673)", uValueDomain, evaluateUValue),
   of("Gas properties", gasPropertiesDomain, evaluateGasProperties),
