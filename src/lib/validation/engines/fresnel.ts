@@ -7,6 +7,10 @@ import { deg } from "./angles";
 
 export function fresnelValues(input: FresnelCaseInput): Record<string, number> {
   switch (input.kind) {
+    case "absorbing-interface": {
+      const f = fresnelInterface(input.n1, input.n2, deg(input.thetaDeg));
+      return { Rs: f.Rs, Rp: f.Rp, R: f.R, Ts: f.Ts, Tp: f.Tp };
+    }
     case "interface": {
       const f = fresnelInterface(input.n1, input.n2, deg(input.thetaDeg));
       const thetaT = snellRefractionAngle(input.n1, input.n2, deg(input.thetaDeg));
@@ -14,8 +18,14 @@ export function fresnelValues(input: FresnelCaseInput): Record<string, number> {
         Rs: f.Rs,
         Rp: f.Rp,
         R: f.R,
+        Ts: f.Ts,
+        Tp: f.Tp,
         "rs.re": f.rs.re,
         "rp.re": f.rp.re,
+        "rs.im": f.rs.im,
+        "rp.im": f.rp.im,
+        "ts.re": f.ts.re,
+        "tp.re": f.tp.re,
         "qx.re": f.qx.re,
         "qx.im": f.qx.im,
         argRsDeg: (f.rs.arg() * 180) / Math.PI,
