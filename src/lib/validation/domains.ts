@@ -16,6 +16,7 @@ import { lightTransmittanceDomain } from "@/lib/reference-cases/light-transmitta
 import { localTimeline } from "@/lib/reference-cases/local-timeline";
 import { measuredPaneDomain } from "@/lib/reference-cases/measured-pane";
 import { shading } from "@/lib/reference-cases/shading";
+import { shadingDiffuse } from "@/lib/reference-cases/shading-diffuse";
 import { sunPosition } from "@/lib/reference-cases/sun-position";
 import { uValueDomain } from "@/lib/reference-cases/u-value";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
@@ -31,6 +32,7 @@ import { evaluateLightTransmittance } from "./engines/light-transmittance";
 import { evaluateLocalTimeline, expectedTimelineTexts } from "./engines/local-timeline";
 import { evaluateMeasuredPane } from "./engines/measured-pane";
 import { evaluateShading } from "./engines/shading";
+import { evaluateShadingDiffuse } from "./engines/shading-diffuse";
 import { evaluateSunPosition } from "./engines/sun-position";
 import { evaluateUValue } from "./engines/u-value";
 import { defineDomain, type Evaluation, type ValidationDomain } from "./types";
@@ -54,7 +56,8 @@ export const VALIDATION_DOMAINS: readonly ValidationDomain[] = [
   of("Gas properties", gasPropertiesDomain, evaluateGasProperties),
   of("Sun position", sunPosition, evaluateSunPosition),
   of("Incidence", incidence, evaluateIncidence),
-  of("Shading", shading, evaluateShading),
+  of("Shading (beam)", shading, evaluateShading),
+  of("Shading (diffuse)", shadingDiffuse, evaluateShadingDiffuse),
   of("Sky and transposition", irradiance, evaluateIrradiance),
   defineDomain({ ...localTimeline, label: "Daylight saving", evaluate: evaluateLocalTimeline, expectedTexts: expectedTimelineTexts }),
 ];
