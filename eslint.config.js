@@ -8,6 +8,7 @@
  * - src/lib/calc/**             imports only itself, physics, time and contracts
  * - src/lib/time/**             imports only itself
  * - src/lib/reference-cases/**  imports only itself (pure data)
+ * - src/lib/validation/**       imports only itself, physics, time, reference-cases, astronomy-engine and suncalc
  * - scripts/reference/**        never imports src/lib/physics or src/lib/calc (independent check values)
  * - src/components/**, src/lib/client/**  never import src/lib/server/**
  * - src/lib/server/services/**  never imports an http module (src/lib/server/http, node:http, …)
@@ -193,6 +194,11 @@ export default defineConfig([
   ),
   ...pureFolder("src/lib/time", alias("lib/time"), "src/lib/time imports only itself."),
   ...pureFolder("src/lib/reference-cases", alias("lib/reference-cases"), "src/lib/reference-cases is pure data and imports only itself."),
+  ...pureFolder(
+    "src/lib/validation",
+    [...alias("lib/validation", "lib/physics", "lib/time", "lib/reference-cases"), ...pkg("astronomy-engine", "suncalc")],
+    "src/lib/validation imports only itself, src/lib/physics, src/lib/time, src/lib/reference-cases and the reference libraries astronomy-engine and suncalc.",
+  ),
   {
     name: "paneray/boundary/scripts/reference",
     files: ["scripts/reference/**"],

@@ -73,6 +73,8 @@ export function recomputeFresnel(input: FresnelCaseInput): Recomputed {
     }
     case "critical":
       return { criticalAngleDeg: Math.asin(input.n2 / input.n1) / DEG };
+    case "absorbing-interface":
+      throw new Error("absorbing-interface cases are closed forms; this script recomputes the computed cases only");
     case "reciprocity": {
       const thetaT = Math.asin((input.n1 / input.n2) * Math.sin(input.thetaDeg * DEG));
       const back = interfaceAt(input.n2, input.n1, thetaT);

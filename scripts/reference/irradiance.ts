@@ -130,7 +130,7 @@ export function computeIrradiance(c: ReferenceCase<IrradianceInput>): Recomputed
   const i = c.input;
   switch (i.kind) {
     case "extraterrestrial":
-      return c.id.includes("spencer")
+      return i.model === "spencer-1971"
         ? { factor: spencerFactor(i.dayOfYear), extraterrestrialWPerM2: i.solarConstantWPerM2 * spencerFactor(i.dayOfYear) }
         : { factor: simpleFactor(i.dayOfYear) };
     case "air-mass":

@@ -59,6 +59,7 @@ test("every main page renders under its Content-Security-Policy: no violations, 
   await visit("/");
   expect(await visit("/signin")).toBeGreaterThan(0);
   expect(await visit("/signup")).toBeGreaterThan(0);
+  await visit("/validation");
 
   await signIn(page, demoUser("owner").email, DEMO_PASSWORD);
   const list = await (await page.request.get("/api/v1/projects")).json();

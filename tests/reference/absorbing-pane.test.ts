@@ -6,8 +6,8 @@
 // scripts/reference/absorbing-pane.ts. Each case gives its tolerance.
 import { describe, expect, it } from "vitest";
 import { absorbingPaneOptics, checkAbsorbingPane, slabFromFaceReflectance } from "@/lib/physics/absorbing-pane";
+import { asRadians } from "@/lib/physics/units";
 import { fresnelReflectancesReal } from "@/lib/physics/fresnel";
-import { asRadians, toDegrees } from "@/lib/physics/units";
 import {
   absorbingPaneDomain,
   averagedFacesCase,
@@ -17,32 +17,12 @@ import {
   pane6mmCases,
   ratio6mmCases,
   ratioLowIronCases,
-  type AbsorbingPaneCaseInput,
 } from "@/lib/reference-cases/absorbing-pane";
+import { absorbingPaneValues } from "@/lib/validation/engines/absorbing-pane";
 import { deg, expectCase, expectValue, expectedOf, pane6mm, lowIron4mm, paneFromMm } from "./fixtures";
 
-/** The engine's values of the quantities an absorbing-pane case names. */
-function engine(input: AbsorbingPaneCaseInput): Record<string, number> {
-  const spec = paneFromMm(input.pane);
-  const theta = deg(input.thetaDeg);
-  const o = absorbingPaneOptics(spec, theta);
-  const face = fresnelReflectancesReal(1, spec.refractiveIndex, theta);
-  return {
-    thetaTDeg: toDegrees(asRadians(Math.acos(o.cosThetaT))),
-    tau: o.internalTransmittance,
-    Ts: o.s.T,
-    Rs: o.s.R,
-    As: o.s.A,
-    Tp: o.p.T,
-    Rp: o.p.R,
-    Ap: o.p.A,
-    T: o.T,
-    R: o.R,
-    A: o.A,
-    TOverT0: o.T / absorbingPaneOptics(spec, deg(0)).T,
-    TAveragedFaces: slabFromFaceReflectance(0.5 * (face.Rs + face.Rp), o.internalTransmittance).T,
-  };
-}
+/** The engine's values of an absorbing-pane case: the evaluator the validation report runs. */
+const engine = absorbingPaneValues;
 
 it("the case panes are the test panes of the fixtures", () => {
   expect(paneFromMm(pane6mmCases[0]!.input.pane)).toEqual(pane6mm);

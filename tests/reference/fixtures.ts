@@ -4,6 +4,7 @@ import { expect } from "vitest";
 import { asDegrees, toRadians, type Radians } from "@/lib/physics/units";
 import type { PaneSpec } from "@/lib/physics/optics";
 import type { ExpectedValue, ReferenceCase } from "@/lib/reference-cases/types";
+import type { ComputedValues, Evaluation } from "@/lib/validation/types";
 
 export { caseById, expectedOf } from "@/lib/reference-cases/read";
 
@@ -36,6 +37,24 @@ export function expectBelow(actual: number, e: ExpectedValue): void {
 export function expectCase(actual: Readonly<Record<string, number>>, c: ReferenceCase): void {
   expect(c.expected.length, `${c.id}: a case without expected values checks nothing`).toBeGreaterThan(0);
   for (const e of c.expected) expectValue(actual[e.quantity], e, c.id);
+}
+
+/**
+ * Checks every expected value of a case against an evaluator's values (src/lib/validation/engines); a quantity
+ * with one value per part (every gap of a unit) must hold in every part. Expected texts are compared for equality.
+ */
+export function expectEvaluation(evaluation: Evaluation, c: ReferenceCase, expectedTexts: Readonly<Record<string, string>> = {}): void {
+  expect(c.expected.length, `${c.id}: a case without expected values checks nothing`).toBeGreaterThan(0);
+  const values: ComputedValues = evaluation.values;
+  for (const e of c.expected) {
+    const v = values[e.quantity];
+    if (typeof v === "number" || v === undefined) expectValue(v, e, c.id);
+    else {
+      expect(v.length, `${c.id} ${e.quantity}: no part computed`).toBeGreaterThan(0);
+      v.forEach((x, i) => expectValue(x, e, `${c.id} part ${i + 1}`));
+    }
+  }
+  for (const [quantity, text] of Object.entries(expectedTexts)) expect(evaluation.texts?.[quantity], `${c.id} ${quantity}`).toBe(text);
 }
 
 /** The model pane of the optics reference cases: 6 mm, n = 1.52, α = 0.02 /mm (one broadband α: a test fixture, not a real glass). */

@@ -17,10 +17,11 @@ import {
   normalWaveVectorComponents,
   snellRefractionAngle,
 } from "@/lib/physics/fresnel";
-import { asRadians, toDegrees } from "@/lib/physics/units";
+import { asRadians } from "@/lib/physics/units";
 import {
   airGlassCases,
   brewsterCases,
+  closedFormCases,
   criticalCases,
   fresnelDomain,
   internalCases,
@@ -30,41 +31,11 @@ import {
   totalInternalReflectionCases,
   type FresnelCaseInput,
 } from "@/lib/reference-cases/fresnel";
+import { fresnelValues } from "@/lib/validation/engines/fresnel";
 import { deg, expectCase } from "./fixtures";
 
-/** The engine's values of the quantities a Fresnel case names. */
-function engine(input: FresnelCaseInput): Record<string, number> {
-  switch (input.kind) {
-    case "interface": {
-      const f = fresnelInterface(input.n1, input.n2, deg(input.thetaDeg));
-      const thetaT = snellRefractionAngle(input.n1, input.n2, deg(input.thetaDeg));
-      return {
-        Rs: f.Rs,
-        Rp: f.Rp,
-        R: f.R,
-        "rs.re": f.rs.re,
-        "rp.re": f.rp.re,
-        "qx.re": f.qx.re,
-        "qx.im": f.qx.im,
-        argRsDeg: (f.rs.arg() * 180) / Math.PI,
-        argRpDeg: (f.rp.arg() * 180) / Math.PI,
-        ...(thetaT === null ? {} : { thetaTDeg: toDegrees(thetaT) }),
-      };
-    }
-    case "brewster": {
-      const b = brewsterAngle(input.n1, input.n2);
-      const f = fresnelInterface(input.n1, input.n2, b);
-      return { brewsterAngleDeg: toDegrees(b), Rs: f.Rs, Rp: f.Rp };
-    }
-    case "critical":
-      return { criticalAngleDeg: toDegrees(criticalAngle(input.n1, input.n2)!) };
-    case "reciprocity": {
-      const thetaT = snellRefractionAngle(input.n1, input.n2, deg(input.thetaDeg))!;
-      const back = fresnelInterface(input.n2, input.n1, thetaT);
-      return { thetaTDeg: toDegrees(thetaT), RsBack: back.Rs, RpBack: back.Rp };
-    }
-  }
-}
+/** The engine's values of a Fresnel case: the evaluator the validation report runs. */
+const engine = fresnelValues;
 
 const interfaceInput = (input: FresnelCaseInput) => {
   if (input.kind !== "interface") throw new Error(`expected an interface case, got ${input.kind}`);
@@ -81,6 +52,7 @@ it("every Fresnel case is in one of the groups below", () => {
     totalInternalReflectionCases,
     phaseCases,
     reciprocityCases,
+    closedFormCases,
   ];
   expect(groups.reduce((n, g) => n + g.length, 0)).toBe(fresnelDomain.cases.length);
   expect(new Set(fresnelDomain.cases.map((c) => c.id)).size).toBe(fresnelDomain.cases.length);
@@ -102,42 +74,8 @@ describe("Fresnel reflectance, air → glass", () => {
     });
   }
 
-  it("normal incidence: R = ((n−1)/(n+1))² = 0.04 for n = 1.5", () => {
-    // closed form R = ((n−1)/(n+1))², Hecht §4.6 (from memory)
-    expect(fresnelReflectanceS(1, 1.5, deg(0))).toBeCloseTo(0.04, 15);
-    expect(fresnelReflectanceP(1, 1.5, deg(0))).toBeCloseTo(0.04, 15);
-  });
-
-  it("r_p(0) = r_s(0) = (n1 − n2)/(n1 + n2), both directions", () => {
-    // closed form at normal incidence; sign convention r_p(0) = r_s(0)
-    for (const [n1, n2] of [
-      [1, 1.5],
-      [1, 1.52],
-      [1.52, 1],
-      [1.33, 2.4],
-    ] as const) {
-      const f = fresnelInterface(n1, n2, deg(0));
-      const expected = (n1 - n2) / (n1 + n2);
-      expect(Math.abs(f.rs.re - expected)).toBeLessThan(1e-15);
-      expect(Math.abs(f.rp.re - expected)).toBeLessThan(1e-15);
-      expect(f.rs.im).toBe(0);
-      expect(f.rp.im).toBe(0);
-    }
-  });
-
   // sign convention r_p(0) = r_s(0): below Brewster's angle r_p has the sign of r_s, above it r_p changes sign
   for (const c of signConventionCases) it(`sign convention: ${c.label}`, () => expectCase(engine(c.input), c));
-
-  it("t_s, t_p match the textbook forms 2n1cosθi/(n1cosθi + n2cosθt) and 2n1cosθi/(n1cosθt + n2cosθi)", () => {
-    // closed forms, Hecht §4.6 (from memory); real indices, 45°
-    const n1 = 1;
-    const n2 = 1.52;
-    const ci = Math.cos(deg(45));
-    const ct = Math.cos(snellRefractionAngle(n1, n2, deg(45))!);
-    const f = fresnelInterface(n1, n2, deg(45));
-    expect(f.ts.re).toBeCloseTo((2 * n1 * ci) / (n1 * ci + n2 * ct), 14);
-    expect(f.tp.re).toBeCloseTo((2 * n1 * ci) / (n1 * ct + n2 * ci), 14);
-  });
 
   it("lossless media conserve energy: T_j + R_j = 1", () => {
     // energy conservation at a lossless interface (exact; float64 rounding stays below 1e-14)
@@ -150,15 +88,6 @@ describe("Fresnel reflectance, air → glass", () => {
     }
   });
 
-  it("grazing incidence: R = 1 and T = 0", () => {
-    // θi = 90°: R = 1 and T = 0 (closed-form limit)
-    const f = fresnelInterface(1, 1.52, asRadians(Math.PI / 2));
-    expect(f.Rs).toBe(1);
-    expect(f.Rp).toBe(1);
-    expect(f.Ts).toBe(0);
-    expect(f.Tp).toBe(0);
-  });
-
   it("no interface (n1 = n2): R = 0", () => {
     // n1 = n2 gives R = 0 (closed form)
     for (const d of [0, 30, 60, 89]) {
@@ -167,6 +96,19 @@ describe("Fresnel reflectance, air → glass", () => {
       expect(f.Rs).toBeLessThan(1e-24);
       expect(f.Rp).toBeLessThan(1e-24);
       expect(Math.abs(f.T - 1)).toBeLessThan(1e-14);
+    }
+  });
+});
+
+describe("closed forms: normal incidence, transmission amplitudes, grazing incidence, an absorbing medium", () => {
+  // Hecht §4.6 and Born & Wolf, optics of metals (from memory); the cases say which, to float64 rounding.
+  for (const c of closedFormCases) it(c.label, () => expectCase(engine(c.input), c));
+
+  it("the single-polarisation helpers give the interface's R_s and R_p", () => {
+    for (const d of [0, 30, 60, 85]) {
+      const f = fresnelInterface(1, 1.5, deg(d));
+      expect(Math.abs(fresnelReflectanceS(1, 1.5, deg(d)) - f.Rs)).toBeLessThan(1e-15);
+      expect(Math.abs(fresnelReflectanceP(1, 1.5, deg(d)) - f.Rp)).toBeLessThan(1e-15);
     }
   });
 });
@@ -244,12 +186,8 @@ describe("internal incidence, glass (1.52) → air, and total internal reflectio
 describe("absorbing medium (complex index)", () => {
   const metal = new Complex(0.2, 3); // metal-like N = n + ik
 
-  it("normal incidence: R = ((n−1)² + k²)/((n+1)² + k²) = 9.64/10.44", () => {
-    // closed form for an absorbing medium, Born & Wolf, chapter on the optics of metals (from memory)
+  it("normal incidence: r_p(0) = r_s(0) also for complex n2 (R itself: case fresnel/closed-form/absorbing/0.2+3i/normal)", () => {
     const f = fresnelInterface(1, metal, deg(0));
-    expect(Math.abs(f.Rs - 9.64 / 10.44)).toBeLessThan(1e-15);
-    expect(Math.abs(f.Rp - 9.64 / 10.44)).toBeLessThan(1e-15);
-    // r_p(0) = r_s(0) also for complex n2
     expect(f.rp.sub(f.rs).abs()).toBeLessThan(1e-15);
   });
 

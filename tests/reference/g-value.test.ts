@@ -21,7 +21,8 @@ import {
 } from "@/lib/physics/g-value";
 import { uValueEn673, type GlazingThermalInput } from "@/lib/physics/u-value";
 import { gValueDomain, type GValueCase, type GValueCaseInput } from "@/lib/reference-cases/g-value";
-import { caseById, expectedOf } from "./fixtures";
+import { evaluateGValue } from "@/lib/validation/engines/g-value";
+import { caseById, expectEvaluation, expectedOf } from "./fixtures";
 
 const gValueCase = (id: string): GValueCase => caseById(gValueDomain.cases, id);
 const opticsOf = (c: GValueCase) => {
@@ -50,6 +51,11 @@ const double6Air16: GlazingThermalInput = {
   panes: [{ thicknessM: 0.006 }, { thicknessM: 0.006 }],
   gaps: [{ widthM: 0.016, gas: "air" }],
 };
+
+// Every case through the evaluator the validation report runs; the blocks below check each part one by one.
+describe("every g-value case, through the validation evaluator", () => {
+  it.each(gValueDomain.cases)("$id", (c) => expectEvaluation(evaluateGValue(c), c));
+});
 
 describe("single pane", () => {
   // EN 410 single glazing (from memory): q_i = α_e h_i/(h_e + h_i) → N = 8/31 = 0.258065.

@@ -17,7 +17,8 @@ import {
   type GasProperties,
 } from "@/lib/physics/gas-properties";
 import { gasPropertiesDomain, type GasPropertiesCase } from "@/lib/reference-cases/gas-properties";
-import { caseById, expectedOf } from "./fixtures";
+import { evaluateGasProperties } from "@/lib/validation/engines/gas-properties";
+import { caseById, expectEvaluation, expectedOf } from "./fixtures";
 
 const gasCase = (id: string): GasPropertiesCase => caseById(gasPropertiesDomain.cases, id);
 
@@ -32,6 +33,11 @@ const en673Table10C = Object.fromEntries(
 ) as Record<GasName, GasProperties>;
 
 const pr = (g: GasProperties) => (g.dynamicViscosityPaS * g.specificHeatJPerKgK) / g.conductivityWPerMK;
+
+// Every case through the evaluator the validation report runs; the blocks below check the table and the mixing rule.
+describe("every gas-properties case, through the validation evaluator", () => {
+  it.each(gasPropertiesDomain.cases)("$id", (c) => expectEvaluation(evaluateGasProperties(c), c));
+});
 
 describe("EN 673 gas table at 10 °C", () => {
   it("holds exactly air, argon and krypton", () => {

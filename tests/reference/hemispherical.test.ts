@@ -6,7 +6,6 @@
 // float64 by scripts/reference/hemispherical.ts with its own 400-node Gauss–Legendre rule, per polarisation
 // where stacks are involved. Each case gives its tolerance (half a unit in the last printed digit).
 import { describe, expect, it } from "vitest";
-import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
 import { DEFAULT_HEMISPHERICAL_NODES, hemisphericalAverage, hemisphericalQuadrature } from "@/lib/physics/hemispherical";
 import { gaussLegendre } from "@/lib/physics/quadrature";
 import { asRadians } from "@/lib/physics/units";
@@ -19,21 +18,13 @@ import {
   single6mmCase,
   type HemisphericalCaseInput,
 } from "@/lib/reference-cases/hemispherical";
+import { hemisphericalValues } from "@/lib/validation/engines/hemispherical";
 import { expectCase, pane6mm, lowIron4mm, paneFromMm } from "./fixtures";
 
 const specsOf = (input: HemisphericalCaseInput): PaneSpec[] => input.panes.map((p) => ({ kind: "physical", ...paneFromMm(p) }));
 
-/** The engine's hemispherical values of the quantities a case names. */
-function engine(input: HemisphericalCaseInput): Record<string, number> {
-  if (input.nodes !== undefined) {
-    // quadrature-accuracy case: one pane's T with the given node count
-    expect(input.panes).toHaveLength(1);
-    const pane = paneFromMm(input.panes[0]!);
-    return { T: hemisphericalAverage((t) => absorbingPaneOptics(pane, asRadians(t)).T, input.nodes) };
-  }
-  const h = prepareGlazing(specsOf(input)).hemispherical().solar;
-  return { T: h.T, Rf: h.Rf, Rb: h.Rb, ...Object.fromEntries(h.absorptanceFront.map((a, i) => [`A${i + 1}`, a])) };
-}
+/** The engine's hemispherical values of a case: the evaluator the validation report runs. */
+const engine = hemisphericalValues;
 
 it("the case panes are the test panes of the fixtures; ids are unique", () => {
   expect(paneFromMm(single6mmCase.input.panes[0]!)).toEqual(pane6mm);

@@ -50,7 +50,8 @@ import {
   type TranspositionInput,
 } from "@/lib/reference-cases/irradiance";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { deg, expectBelow, expectedOf, expectValue } from "./fixtures";
+import { irradianceValues } from "@/lib/validation/engines/irradiance";
+import { deg, expectBelow, expectCase, expectedOf, expectValue } from "./fixtures";
 
 /** The cases whose id starts with `prefix`, with the input type of that group. */
 function group<I extends IrradianceInput>(prefix: string): ReferenceCase<I>[] {
@@ -65,6 +66,11 @@ const one = <I extends IrradianceInput>(id: string): ReferenceCase<I> => {
 };
 
 const cosd = (d: number): number => Math.cos((d * Math.PI) / 180);
+
+// Every case through the evaluator the validation report runs; the groups below check the models one by one.
+describe("every irradiance case, through the validation evaluator", () => {
+  it.each(irradiance.cases)("$id", (c) => expectCase(irradianceValues(c.input), c));
+});
 
 describe("extraterrestrial irradiance", () => {
   // Spencer (1971) series with Esc = 1366.1 W/m²; simple factor 1 + 0.033 cos(2π doy/365)

@@ -7,14 +7,7 @@
 // EN 410:2011 §5 and ISO 9050:2003 §4 (clause numbers from memory). Each case gives its tolerance.
 import { describe, expect, it } from "vitest";
 import { absorbingPaneOptics } from "@/lib/physics/absorbing-pane";
-import {
-  combineLayers,
-  combineTwoLayers,
-  glazingOpticsAt,
-  type LayerOptics,
-  type PolarizedLayerSource,
-  type StackOptics,
-} from "@/lib/physics/layer-stack";
+import { combineLayers, combineTwoLayers, glazingOpticsAt, type LayerOptics, type PolarizedLayerSource } from "@/lib/physics/layer-stack";
 import { prepareGlazing, type PaneSpec } from "@/lib/physics/optics";
 import { type Radians } from "@/lib/physics/units";
 import {
@@ -24,9 +17,9 @@ import {
   layerStackDomain,
   triple0Case,
   type LayerStackCaseInput,
-  type StackLayer,
 } from "@/lib/reference-cases/layer-stack";
-import { caseById, deg, expectCase, expectValue, expectedOf, pane6mm, paneFromMm } from "./fixtures";
+import { layerStackValues, stackQuantities as quantities, unpolarizedLayerOf } from "@/lib/validation/engines/layer-stack";
+import { caseById, deg, expectCase, expectValue, expectedOf, pane6mm } from "./fixtures";
 
 const spec6mm: PaneSpec = { kind: "physical", ...pane6mm };
 const source6mm: PolarizedLayerSource = (theta) => {
@@ -38,38 +31,8 @@ const layer6mmAt = (theta: Radians): LayerOptics => {
   return { T: o.T, Rf: o.R, Rb: o.R };
 };
 
-/** A case layer as the engine's per-polarisation layer source. */
-const sourceOf = (layer: StackLayer): PolarizedLayerSource => {
-  if (layer.kind === "given") return () => ({ s: layer, p: layer });
-  const pane = paneFromMm(layer.pane);
-  return (theta) => {
-    const o = absorbingPaneOptics(pane, theta);
-    return { s: { T: o.s.T, Rf: o.s.R, Rb: o.s.R }, p: { T: o.p.T, Rf: o.p.R, Rb: o.p.R } };
-  };
-};
-/** A case layer averaged over s and p at one angle (the route of combineLayers with unpolarised layers). */
-const unpolarizedLayerOf = (layer: StackLayer, theta: Radians): LayerOptics => {
-  const l = sourceOf(layer)(theta);
-  return { T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) };
-};
-
-const quantities = (r: StackOptics): Record<string, number> => ({
-  T: r.T,
-  Rf: r.Rf,
-  Rb: r.Rb,
-  ...Object.fromEntries(r.absorptanceFront.map((a, i) => [`A${i + 1}`, a])),
-});
-
-/** The engine's values of the quantities a layer-stack case names, by the case's route. */
-function engine(input: LayerStackCaseInput): Record<string, number> {
-  const theta = deg(input.thetaDeg);
-  const sources = input.layers.map(sourceOf);
-  if (input.route === "s" || input.route === "p") {
-    const route = input.route;
-    return quantities(combineLayers(sources.map((src) => src(theta)[route])));
-  }
-  return quantities(glazingOpticsAt(sources, theta, { polarization: input.route }));
-}
+/** The engine's values of a layer-stack case by the case's route: the evaluator the validation report runs. */
+const engine = layerStackValues;
 
 /** A normal-incidence case through combineLayers with unpolarised layers (s and p coincide at 0°). */
 function engineUnpolarized(input: LayerStackCaseInput): Record<string, number> {

@@ -26,6 +26,8 @@
 import { describe, expect, it } from "vitest";
 import { localTimeline, type Timeline } from "@/lib/time/local-timeline";
 import { localTimeline as timelineCases, type LocalTimelineCase } from "@/lib/reference-cases/local-timeline";
+import { evaluateLocalTimeline, expectedTimelineTexts } from "@/lib/validation/engines/local-timeline";
+import { expectEvaluation } from "./fixtures";
 
 const H = 3_600_000;
 const MIN = 60_000;
@@ -106,6 +108,8 @@ function checkCase(c: LocalTimelineCase): void {
   }
   const tl = localTimeline(spec);
   expectWellFormed(tl);
+  // the evaluator the validation report runs: every numeric value and every listed row
+  expectEvaluation(evaluateLocalTimeline(c), c, expectedTimelineTexts(c));
   for (const e of c.expected) {
     const m = /^(\w+)(?:\[(\d+)\])?$/.exec(e.quantity);
     const [name, index] = [m?.[1], Number(m?.[2])];

@@ -29,8 +29,8 @@ import {
   measuredPaneDomain,
   printedRoundTripCase,
   workedInversionCase,
-  type MeasuredPaneCaseInput,
 } from "@/lib/reference-cases/measured-pane";
+import { measuredPaneValues } from "@/lib/validation/engines/measured-pane";
 import { caseById, deg, expectCase, expectValue, expectedOf } from "./fixtures";
 
 const unpolarized = (model: MeasuredBandModel, theta: Radians) => {
@@ -38,28 +38,8 @@ const unpolarized = (model: MeasuredBandModel, theta: Radians) => {
   return { T: 0.5 * (l.s.T + l.p.T), Rf: 0.5 * (l.s.Rf + l.p.Rf), Rb: 0.5 * (l.s.Rb + l.p.Rb) };
 };
 
-/** The engine's values of the quantities a measured-pane case names. */
-function engine(input: MeasuredPaneCaseInput): Record<string, number> {
-  switch (input.kind) {
-    case "inversion": {
-      const inv = invertUncoatedPane(input.T, input.R, input.thicknessMm / 1000);
-      return {
-        b: inv.b,
-        faceReflectance: inv.faceReflectance,
-        internalTransmittance: inv.internalTransmittance,
-        refractiveIndex: inv.refractiveIndex,
-        absorptionPerMm: inv.absorptionPerM / 1000,
-      };
-    }
-    case "uncoated-at-angle": {
-      const pane = prepareMeasuredPane({ thicknessM: input.thicknessMm / 1000, solar: input.solar });
-      const o = unpolarized(pane.solar, deg(input.thetaDeg));
-      return { T: o.T, Rf: o.Rf, Rb: o.Rb, A: 1 - o.T - o.Rf };
-    }
-    case "karlsson-roos":
-      return { TOverT0: karlssonRoosTransmittanceRatio(deg(input.thetaDeg), input.p, input.q) };
-  }
-}
+/** The engine's values of a measured-pane case: the evaluator the validation report runs. */
+const engine = measuredPaneValues;
 
 it("case ids are unique", () => {
   expect(new Set(measuredPaneDomain.cases.map((c) => c.id)).size).toBe(measuredPaneDomain.cases.length);

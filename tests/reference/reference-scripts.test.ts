@@ -16,6 +16,7 @@ import { irradianceComparison } from "@scripts/reference/irradiance";
 import { layerStackComparison } from "@scripts/reference/layer-stack";
 import { measuredPaneComparison } from "@scripts/reference/measured-pane";
 import { shadingComparison } from "@scripts/reference/shading";
+import { shadingDiffuseComparison } from "@scripts/reference/shading-diffuse";
 import { uValueComparison } from "@scripts/reference/u-value";
 import { absorbingPaneDomain } from "@/lib/reference-cases/absorbing-pane";
 import { fresnelDomain } from "@/lib/reference-cases/fresnel";
@@ -27,6 +28,7 @@ import { irradiance } from "@/lib/reference-cases/irradiance";
 import { layerStackDomain } from "@/lib/reference-cases/layer-stack";
 import { measuredPaneDomain } from "@/lib/reference-cases/measured-pane";
 import { shading } from "@/lib/reference-cases/shading";
+import { shadingDiffuse } from "@/lib/reference-cases/shading-diffuse";
 import type { ReferenceDomain } from "@/lib/reference-cases/types";
 import { uValueDomain } from "@/lib/reference-cases/u-value";
 
@@ -55,6 +57,7 @@ const entries: readonly ScriptEntry[] = [
   { script: "incidence", domain: incidence, rows: incidenceComparison, slack: 1e-9, closedForm: false },
   { script: "irradiance", domain: irradiance, rows: irradianceComparison, slack: 1e-9, closedForm: false },
   { script: "shading", domain: shading, rows: shadingComparison, slack: 1e-9, closedForm: false },
+  { script: "shading-diffuse", domain: shadingDiffuse, rows: shadingDiffuseComparison, slack: 0, closedForm: false },
 ];
 
 /** |recomputed − printed| ≤ tolerance · (1 + slack) for every row, and the script's own verdict agrees. */

@@ -24,7 +24,8 @@ import {
 } from "@/lib/physics/surface-geometry";
 import { incidence, type IncidenceInput } from "@/lib/reference-cases/incidence";
 import type { ReferenceCase } from "@/lib/reference-cases/types";
-import { deg, expectBelow, expectedOf, expectValue } from "./fixtures";
+import { incidenceValues } from "@/lib/validation/engines/incidence";
+import { deg, expectBelow, expectCase, expectedOf, expectValue } from "./fixtures";
 
 const south = surfaceFrame(surfaceOrientationDeg(180, 90));
 const cosOnSouth = (alt: number, az: number): number => {
@@ -42,6 +43,7 @@ describe("angle of incidence: vertical south façade (β = 90°, az_surf = 180°
   const tableIds = ["alt30-az180", "alt30-az225", "alt60-az200", "alt45-az135"].map((k) => `incidence/south-facade/${k}`);
   const rows = tableIds.map(caseById);
   it.each(rows)("$label", (c) => {
+    expectCase(incidenceValues(c.input), c); // the evaluator the validation report runs
     const { sunAzimuthDeg: az } = c.input;
     const alt = altitudeOf(c.input);
     expectValue(cosOnSouth(alt, az), expectedOf(c, "cosTheta"));
@@ -52,6 +54,7 @@ describe("angle of incidence: vertical south façade (β = 90°, az_surf = 180°
 
   const grazing = caseById("incidence/south-facade/grazing-east");
   it(grazing.label, () => {
+    expectCase(incidenceValues(grazing.input), grazing);
     // closed form: cos(alt)·cos(90° − 180°) = 0 exactly; float64 leaves ~1e-17
     const { sunAzimuthDeg: az, surfaceAzimuthDeg, surfaceTiltDeg } = grazing.input;
     const alt = altitudeOf(grazing.input);
@@ -62,6 +65,7 @@ describe("angle of incidence: vertical south façade (β = 90°, az_surf = 180°
 
   const behind = caseById("incidence/south-facade/sun-behind");
   it(behind.label, () => {
+    expectCase(incidenceValues(behind.input), behind);
     const { sunAzimuthDeg: az, surfaceAzimuthDeg, surfaceTiltDeg } = behind.input;
     const alt = altitudeOf(behind.input);
     expectValue(cosOnSouth(alt, az), expectedOf(behind, "cosTheta"));
@@ -73,6 +77,7 @@ describe("angle of incidence: vertical south façade (β = 90°, az_surf = 180°
 describe("angle of incidence: other surfaces", () => {
   const others = ["incidence/east-facade/alt30-az120", "incidence/roof-30/alt50-az160"].map(caseById);
   it.each(others)("$label", (c) => {
+    expectCase(incidenceValues(c.input), c); // the evaluator the validation report runs
     const i = c.input;
     expectValue(angleOfIncidenceDeg(altitudeOf(i), i.sunAzimuthDeg, i.surfaceAzimuthDeg, i.surfaceTiltDeg), expectedOf(c, "thetaDeg"));
   });
@@ -92,6 +97,7 @@ describe("angle of incidence: other surfaces", () => {
 
   const spa = ["refracted-zenith", "published", "unrefracted-zenith"].map((k) => caseById(`incidence/spa-example/${k}`));
   it.each(spa)("SPA cross-check: $label", (c) => {
+    expectCase(incidenceValues(c.input), c); // the evaluator the validation report runs
     // The refracted-zenith value is computed from the published zenith and azimuth; the published incidence
     // 25.187000° is met within 1e-5° (the inputs are rounded to 5 decimals); the unrefracted zenith gives a
     // value 0.014° away, so the SPA example uses the refracted zenith.

@@ -24,7 +24,8 @@ import {
 } from "@/lib/physics/u-value";
 import type { GasFill } from "@/lib/physics/gas-properties";
 import { uValueDomain, type UValueCase, type UValueCaseInput } from "@/lib/reference-cases/u-value";
-import { caseById, expectedOf } from "./fixtures";
+import { evaluateUValue } from "@/lib/validation/engines/u-value";
+import { caseById, expectEvaluation, expectedOf } from "./fixtures";
 
 const MM = 1e-3;
 const AR90: GasFill = { argon: 0.9, air: 0.1 };
@@ -75,6 +76,12 @@ const roundToTenth = (x: number) => Math.round(x * 10) / 10;
 const tableCases = uValueDomain.cases.filter(
   (c) => c.input.kind === "unit" && c.expected.some((e) => e.quantity === "uValueWPerM2K") && c.input.externalCoefficientWPerM2K === undefined,
 );
+
+// Every case through the evaluator the validation report runs (a gap quantity holds in every gap); the
+// blocks below check the table, the intermediate values and the properties one by one.
+describe("every U-value case, through the validation evaluator", () => {
+  it.each(uValueDomain.cases)("$id", (c) => expectEvaluation(evaluateUValue(c), c));
+});
 
 describe("EN 673 check table (every row)", () => {
   it("has all 14 rows", () => {

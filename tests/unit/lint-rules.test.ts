@@ -42,6 +42,9 @@ const forbidden: [string, string, string, string][] = [
   ["time → physics", "src/lib/time/local-timeline.ts", importing("@/lib/physics/units"), "no-restricted-imports"],
   ["time → package", "src/lib/time/local-timeline.ts", importing("suncalc"), "no-restricted-imports"],
   ["reference-cases → physics", "src/lib/reference-cases/fresnel.ts", importing("@/lib/physics/fresnel"), "no-restricted-imports"],
+  ["validation → server", "src/lib/validation/report.ts", importing("@/lib/server/db/client"), "no-restricted-imports"],
+  ["validation → calc", "src/lib/validation/engines/fresnel.ts", importing("@/lib/calc/glazing"), "no-restricted-imports"],
+  ["validation → node:fs", "src/lib/validation/report.ts", importing("node:fs"), "no-restricted-imports"],
   ["reference script → physics", "scripts/reference/fresnel.ts", importing("@/lib/physics/fresnel"), "no-restricted-imports"],
   ["reference script → calc", "scripts/reference/glazing.ts", importing("@/lib/calc/glazing"), "no-restricted-imports"],
   ["reference script → physics, relative", "scripts/reference/fresnel.ts", importing("../src/lib/physics/fresnel"), "no-restricted-imports"],
@@ -86,6 +89,11 @@ const allowed: [string, string, string][] = [
   ],
   ["time → itself", "src/lib/time/local-timeline.ts", importing("./zones")],
   ["reference-cases → itself", "src/lib/reference-cases/fresnel.ts", importing("@/lib/reference-cases/types", "./types")],
+  [
+    "validation → physics, time, reference-cases, reference libraries",
+    "src/lib/validation/engines/sun.ts",
+    importing("@/lib/physics/units", "@/lib/time/local-timeline", "@/lib/reference-cases/types", "../types", "astronomy-engine", "suncalc"),
+  ],
   [
     "reference script → reference-cases, packages",
     "scripts/reference/sun.ts",

@@ -19,7 +19,14 @@ export type FresnelCaseInput =
    * Reciprocity: refract from n1 into n2 at thetaDeg, then reflect from n2 back towards n1 at the refracted angle.
    * Quantities: thetaTDeg (the refracted angle), RsBack, RpBack.
    */
-  | { readonly kind: "reciprocity"; readonly n1: number; readonly n2: number; readonly thetaDeg: number };
+  | { readonly kind: "reciprocity"; readonly n1: number; readonly n2: number; readonly thetaDeg: number }
+  /** An absorbing transmitting medium of complex index N = n + ik (closed-form cases only). */
+  | {
+      readonly kind: "absorbing-interface";
+      readonly n1: number;
+      readonly n2: { readonly re: number; readonly im: number };
+      readonly thetaDeg: number;
+    };
 
 export const FRESNEL_SCRIPT = "scripts/reference/fresnel.ts";
 
@@ -143,6 +150,73 @@ export const reciprocityCases: readonly ReferenceCase<FresnelCaseInput>[] = [
   },
 ];
 
+/** Exact to float64 rounding: the closed form evaluated in double precision. */
+const ROUNDING = { abs: 1e-15, reason: "exact in closed form; float64 rounding" } as const;
+const EXACT = { abs: 0, reason: "exact in closed form and in float64" } as const;
+const normalIncidence = (n1: number, n2: number) => (n1 - n2) / (n1 + n2);
+
+/** Closed forms the engine must meet to float64 rounding (not recomputed by the script). */
+export const closedFormCases: readonly ReferenceCase<FresnelCaseInput>[] = [
+  {
+    id: "fresnel/closed-form/normal/air-glass-1.5",
+    label: "normal incidence 1 → 1.5: R_s = R_p = ((n − 1)/(n + 1))² = 0.04",
+    input: { kind: "interface", n1: 1, n2: 1.5, thetaDeg: 0 },
+    expected: [ev("Rs", 0.04, ROUNDING), ev("Rp", 0.04, ROUNDING)],
+    source: {
+      kind: "closed-form",
+      formula: "R = ((n1 − n2)/(n1 + n2))² at normal incidence",
+      citation: "E. Hecht, Optics, 4th ed., §4.6 (from memory)",
+    },
+  },
+  ...(
+    [
+      [1, 1.5],
+      [1, 1.52],
+      [1.52, 1],
+      [1.33, 2.4],
+    ] as const
+  ).map(([n1, n2]): ReferenceCase<FresnelCaseInput> => ({
+    id: `fresnel/closed-form/normal-amplitudes/${n1}-${n2}`,
+    label: `normal incidence ${n1} → ${n2}: r_p = r_s = (n1 − n2)/(n1 + n2) = ${normalIncidence(n1, n2).toFixed(6)}, both real`,
+    input: { kind: "interface", n1, n2, thetaDeg: 0 },
+    expected: [
+      ev("rs.re", normalIncidence(n1, n2), ROUNDING),
+      ev("rp.re", normalIncidence(n1, n2), ROUNDING),
+      ev("rs.im", 0, EXACT),
+      ev("rp.im", 0, EXACT),
+    ],
+    source: { kind: "closed-form", formula: "r_s(0) = r_p(0) = (n1 − n2)/(n1 + n2) with the sign convention r_p(0) = r_s(0)" },
+  })),
+  {
+    id: "fresnel/closed-form/transmission-amplitudes/1.52/45deg",
+    label: "1 → 1.52 at 45°: t_s = 2n1 cos θi/(n1 cos θi + n2 cos θt) = 0.688980, t_p = 2n1 cos θi/(n1 cos θt + n2 cos θi) = 0.721535",
+    input: { kind: "interface", n1: 1, n2: 1.52, thetaDeg: 45 },
+    expected: [
+      ev("ts.re", 0.6889804508261655, { abs: 5e-15, reason: "float64 rounding of the closed form (14 decimals)" }),
+      ev("tp.re", 0.7215349736633521, { abs: 5e-15, reason: "float64 rounding of the closed form (14 decimals)" }),
+    ],
+    source: { kind: "closed-form", formula: "t_s and t_p of real indices", citation: "E. Hecht, Optics, 4th ed., §4.6 (from memory)" },
+  },
+  {
+    id: "fresnel/closed-form/grazing/air-glass-1.52",
+    label: "grazing incidence 1 → 1.52 (θi = 90°): R = 1 and T = 0 for s and p",
+    input: { kind: "interface", n1: 1, n2: 1.52, thetaDeg: 90 },
+    expected: [ev("Rs", 1, EXACT), ev("Rp", 1, EXACT), ev("Ts", 0, EXACT), ev("Tp", 0, EXACT)],
+    source: { kind: "closed-form", formula: "cos θi = 0: r_s = r_p = −1 in magnitude, no flux enters" },
+  },
+  {
+    id: "fresnel/closed-form/absorbing/0.2+3i/normal",
+    label: "normal incidence from air on a metal-like medium N = 0.2 + 3i: R = ((n − 1)² + k²)/((n + 1)² + k²) = 9.64/10.44",
+    input: { kind: "absorbing-interface", n1: 1, n2: { re: 0.2, im: 3 }, thetaDeg: 0 },
+    expected: [ev("Rs", 9.64 / 10.44, ROUNDING), ev("Rp", 9.64 / 10.44, ROUNDING)],
+    source: {
+      kind: "closed-form",
+      formula: "R = ((n − 1)² + k²)/((n + 1)² + k²) at normal incidence on N = n + ik",
+      citation: "M. Born & E. Wolf, Principles of Optics, 7th ed., optics of metals (chapter from memory)",
+    },
+  },
+];
+
 export const fresnelDomain: ReferenceDomain<FresnelCaseInput> = {
   domain: "fresnel",
   title: "Reflection and refraction at one interface (Fresnel equations)",
@@ -155,5 +229,6 @@ export const fresnelDomain: ReferenceDomain<FresnelCaseInput> = {
     ...totalInternalReflectionCases,
     ...phaseCases,
     ...reciprocityCases,
+    ...closedFormCases,
   ],
 };

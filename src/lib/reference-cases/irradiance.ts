@@ -10,6 +10,8 @@ import type { CaseSource, ReferenceCase, ReferenceDomain, Tolerance } from "./ty
 /** Extraterrestrial normal irradiance on a day of the year. */
 export interface ExtraterrestrialInput {
   readonly kind: "extraterrestrial";
+  /** The distance factor's formula: the Spencer (1971) series or the simple cosine form. */
+  readonly model: "spencer-1971" | "simple";
   /** Day of the year, 1 = 1 January. */
   readonly dayOfYear: number;
   /** Solar constant [W/m²] for the E0 value (the factor does not depend on it). */
@@ -237,14 +239,14 @@ const cases: readonly ReferenceCase<IrradianceInput>[] = [
   ...spencerRows.map(([doy, factor, e0]): ReferenceCase<IrradianceInput> => ({
     id: `extraterrestrial/spencer-1971/doy-${doy}`,
     label: `Spencer (1971), day ${doy}: factor ${factor}, E0 ${e0} W/m² with Esc = 1366.1 W/m²`,
-    input: { kind: "extraterrestrial", dayOfYear: doy, solarConstantWPerM2: 1366.1 },
+    input: { kind: "extraterrestrial", model: "spencer-1971", dayOfYear: doy, solarConstantWPerM2: 1366.1 },
     expected: [p("factor", "-", factor), p("extraterrestrialWPerM2", "W/m²", e0)],
     source: spencer,
   })),
   ...simpleRows.map(([doy, factor]): ReferenceCase<IrradianceInput> => ({
     id: `extraterrestrial/simple/doy-${doy}`,
     label: `1 + 0.033 cos(2π doy/365), day ${doy}: factor ${factor}`,
-    input: { kind: "extraterrestrial", dayOfYear: doy, solarConstantWPerM2: 1366.1 },
+    input: { kind: "extraterrestrial", model: "simple", dayOfYear: doy, solarConstantWPerM2: 1366.1 },
     expected: [p("factor", "-", factor)],
     source: simpleFactor,
   })),

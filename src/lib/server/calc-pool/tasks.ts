@@ -9,6 +9,8 @@ import { calculateGlazing } from "@/lib/calc/glazing";
 import { scheduleResponse } from "@/lib/calc/schedule-response";
 import { surfaceYearSummaries } from "@/lib/calc/surface-year";
 import { hourlyRowOf } from "@/lib/calc/workbook-tables";
+import { VALIDATION_DOMAINS } from "@/lib/validation/domains";
+import { buildValidationReport, type ReportVersions } from "@/lib/validation/report";
 
 export interface CalcTasks {
   glazing: GlazingRequest;
@@ -17,6 +19,8 @@ export interface CalcTasks {
   surfaceYear: ScheduleRequest;
   /** A workbook's hourly sheet: the schedule with its rows cut to the columns the sheet shows. */
   scheduleSheet: ScheduleRequest;
+  /** The validation report: every reference case through its evaluator, with the versions it names. */
+  validationReport: ReportVersions;
 }
 export type CalcTaskName = keyof CalcTasks;
 
@@ -28,6 +32,7 @@ const TASKS: { [K in CalcTaskName]: (input: CalcTasks[K]) => unknown } = {
     const res = scheduleResponse(req);
     return { ...res, surfaces: res.surfaces.map((s) => ({ ...s, rows: s.rows.map(hourlyRowOf) })) };
   },
+  validationReport: (versions) => buildValidationReport(VALIDATION_DOMAINS, { versions, now: () => new Date(), clock: () => performance.now() }),
 };
 
 export const isCalcTaskName = (name: unknown): name is CalcTaskName => typeof name === "string" && Object.hasOwn(TASKS, name);
