@@ -61,7 +61,15 @@ export const ROUTES: readonly RouteEntry[] = [
   { file: "v1/calc/glazing.ts", path: "/api/v1/calc/glazing", method: "POST", auth: "user", ok: 200, writes: false },
   { file: "v1/calc/schedule.ts", path: "/api/v1/calc/schedule", method: "POST", auth: "user", ok: 200, writes: false },
   { file: "v1/invitations/[id]/index.ts", path: "/api/v1/invitations/:id", method: "GET", auth: "anonymous", ok: 200, writes: false },
-  { file: "v1/invitations/[id]/accept.ts", path: "/api/v1/invitations/:id/accept", method: "POST", auth: "user", ok: 200, writes: true, sessionOnly: true },
+  {
+    file: "v1/invitations/[id]/accept.ts",
+    path: "/api/v1/invitations/:id/accept",
+    method: "POST",
+    auth: "user",
+    ok: 200,
+    writes: true,
+    sessionOnly: true,
+  },
   {
     file: "v1/orgs/[orgId]/members/index.ts",
     path: "/api/v1/orgs/:orgId/members",
@@ -513,7 +521,10 @@ export function scopeAllows(held: KeyScope, needed: KeyScope | "session-only"): 
 
 /** The row that serves `method` on an Astro route pattern such as "/api/v1/projects/[id]/workbook.csv". */
 export function routeOfPattern(method: string, pattern: string): RouteEntry | undefined {
-  const path = pattern.replace(/\[\.\.\.(\w+)\]/g, ":path*").replace(/\[(\w+)\]/g, ":$1").replace(/\/$/, "");
+  const path = pattern
+    .replace(/\[\.\.\.(\w+)\]/g, ":path*")
+    .replace(/\[(\w+)\]/g, ":$1")
+    .replace(/\/$/, "");
   const m = method.toUpperCase();
   return ROUTES.find((r) => r.path === path && (r.method === m || r.method === "ALL"));
 }

@@ -41,9 +41,7 @@ export interface ApiKeyPrincipal {
 export type UserRow = typeof user.$inferSelect;
 
 export type KeyCheck =
-  | { kind: "ok"; user: UserRow; apiKey: ApiKeyPrincipal }
-  | { kind: "invalid" }
-  | { kind: "limited"; retryAfterSeconds: number; limit: number };
+  { kind: "ok"; user: UserRow; apiKey: ApiKeyPrincipal } | { kind: "invalid" } | { kind: "limited"; retryAfterSeconds: number; limit: number };
 
 /** The per-key request limit: one fixed window of a minute, shared by every server through PostgreSQL. */
 export const apiKeyLimit = () => ({ name: "api-key", max: serverEnv().API_KEY_RATE_LIMIT, windowSeconds: 60 });
