@@ -28,6 +28,7 @@ import * as membersRoute from "@/pages/api/v1/orgs/[orgId]/members/index";
 import * as signupRoute from "@/pages/api/v1/signup";
 import * as acceptRoute from "@/pages/api/v1/invitations/[id]/accept";
 import * as meRoute from "@/pages/api/v1/me";
+import * as makeupsRoute from "@/pages/api/v1/orgs/[orgId]/makeups/index";
 
 afterAll(() => pool.end());
 
@@ -192,6 +193,16 @@ describe("Authorization: Bearer", () => {
       if (p.status === 403)
         expect(p.body!.detail).toBe(`This API key's scope (${scope}) does not allow this route; it needs a "read-write" key or wider`);
     }
+    // A route with a camel-case parameter, found from the lower-case pattern Astro reports.
+    const orgId = o.organizationId;
+    const library = await withKey(read, makeupsRoute.GET, "/api/v1/orgs/[orgid]/makeups", `/api/v1/orgs/${orgId}/makeups`, { orgId });
+    expect(library.status).toBe(200);
+    const save = { method: "POST", body: { name: "Scripted double", layers: [pane6, air16, pane6] } };
+    const saved = await withKey(calc, makeupsRoute.POST, "/api/v1/orgs/[orgid]/makeups", `/api/v1/orgs/${orgId}/makeups`, { orgId }, save);
+    expect(saved.status).toBe(403);
+    expect((await withKey(rw, makeupsRoute.POST, "/api/v1/orgs/[orgid]/makeups", `/api/v1/orgs/${orgId}/makeups`, { orgId }, save)).status).toBe(201);
+    const unknown = await withKey(read, makeupsRoute.GET, "/api/v1/orgs/[orgid]/nothing", `/api/v1/orgs/${orgId}/makeups`, { orgId });
+    expect([unknown.status, unknown.body!.detail]).toEqual([403, "This route is not open to API keys"]);
     const patched = await getProject(rw, o.projectId);
     expect((patched.body as { project: { description: string } }).project.description).toBe("Changed by a script");
   });
@@ -215,7 +226,7 @@ describe("Authorization: Bearer", () => {
     expect(other.status).toBe(404);
     expect(other.body!.detail).toBe("No such project, or it is not shared with you");
     expect((await patchProject(key, b.projectId)).status).toBe(404);
-    expect((await withKey(key, membersRoute.GET, "/api/v1/orgs/[orgId]/members", "/x", { orgId: b.organizationId })).status).toBe(403);
+    expect((await withKey(key, membersRoute.GET, "/api/v1/orgs/[orgid]/members", "/x", { orgId: b.organizationId })).status).toBe(403);
 
     const listed = await withKey(key, projectsRoute.GET, "/api/v1/projects", "/api/v1/projects", {});
     expect(listed.status).toBe(200);
@@ -236,12 +247,12 @@ describe("Authorization: Bearer", () => {
     const key = (await makeKey(o, "read-write")).key;
     const orgId = o.organizationId;
     const answers = [
-      await withKey(key, membersRoute.GET, "/api/v1/orgs/[orgId]/members", `/api/v1/orgs/${orgId}/members`, { orgId }),
-      await withKey(key, apiKeysRoute.GET, "/api/v1/orgs/[orgId]/api-keys", `/api/v1/orgs/${orgId}/api-keys`, { orgId }),
+      await withKey(key, membersRoute.GET, "/api/v1/orgs/[orgid]/members", `/api/v1/orgs/${orgId}/members`, { orgId }),
+      await withKey(key, apiKeysRoute.GET, "/api/v1/orgs/[orgid]/api-keys", `/api/v1/orgs/${orgId}/api-keys`, { orgId }),
       await withKey(
         key,
         apiKeysRoute.POST,
-        "/api/v1/orgs/[orgId]/api-keys",
+        "/api/v1/orgs/[orgid]/api-keys",
         `/api/v1/orgs/${orgId}/api-keys`,
         { orgId },
         { method: "POST", body: { name: "Child", scope: "read" } },

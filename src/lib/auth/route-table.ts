@@ -519,12 +519,16 @@ export function scopeAllows(held: KeyScope, needed: KeyScope | "session-only"): 
   return needed !== "session-only" && KEY_SCOPES.indexOf(held) >= KEY_SCOPES.indexOf(needed);
 }
 
-/** The row that serves `method` on an Astro route pattern such as "/api/v1/projects/[id]/workbook.csv". */
+/**
+ * The row that serves `method` on an Astro route pattern such as "/api/v1/projects/[id]/workbook.csv".
+ * Astro reports patterns in lower case ("/api/v1/orgs/[orgid]/members"), so paths are compared without case.
+ */
 export function routeOfPattern(method: string, pattern: string): RouteEntry | undefined {
   const path = pattern
     .replace(/\[\.\.\.(\w+)\]/g, ":path*")
     .replace(/\[(\w+)\]/g, ":$1")
-    .replace(/\/$/, "");
+    .replace(/\/$/, "")
+    .toLowerCase();
   const m = method.toUpperCase();
-  return ROUTES.find((r) => r.path === path && (r.method === m || r.method === "ALL"));
+  return ROUTES.find((r) => r.path.toLowerCase() === path && (r.method === m || r.method === "ALL"));
 }

@@ -296,7 +296,8 @@ export const callerOf = (userId: string, apiKey: ApiKeyPrincipal | null | undefi
  */
 export function apiKeyRefusal(apiKey: ApiKeyPrincipal, method: string, pattern: string | undefined): string | null {
   const route = pattern ? routeOfPattern(method, pattern) : undefined;
-  const needed = route ? keyScope(route) : "session-only";
+  if (!route) return "This route is not open to API keys";
+  const needed = keyScope(route);
   if (needed === "session-only") return "This route needs a signed-in session; API keys cannot call it";
   if (!scopeAllows(apiKey.scope, needed))
     return `This API key's scope (${apiKey.scope}) does not allow this route; it needs a "${needed}" key or wider`;
