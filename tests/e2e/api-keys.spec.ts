@@ -9,7 +9,7 @@ const overflow = (page: Page) => page.evaluate(() => document.documentElement.sc
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
 
 /** A request as a script makes it: the key in the Authorization header, no cookie, no Origin. */
-async function asScript(page: Page, key: string, method: "GET" | "POST", path: string, body?: unknown) {
+async function asScript(key: string, method: "GET" | "POST", path: string, body?: unknown) {
   const base = test.info().project.use.baseURL!;
   const res = await fetch(base + path, {
     method,
@@ -47,9 +47,9 @@ test("an owner makes a key, sees it once, uses it, revokes it, and the history s
   expect(await overflow(page)).toBe(0);
 
   // The key works from a script within its scope, and nowhere else.
-  const calc = await asScript(page, key, "POST", "/api/v1/calc/glazing", { layers: [pane6] });
+  const calc = await asScript(key, "POST", "/api/v1/calc/glazing", { layers: [pane6] });
   expect(calc.status).toBe(200);
-  const write = await asScript(page, key, "POST", "/api/v1/projects", { organizationId: "x", name: "Nope" });
+  const write = await asScript(key, "POST", "/api/v1/projects", { organizationId: "x", name: "Nope" });
   expect(write.status).toBe(403);
   expect(write.body?.detail).toContain('"read-write"');
 
@@ -64,12 +64,12 @@ test("an owner makes a key, sees it once, uses it, revokes it, and the history s
   await expect(row.getByRole("group")).toContainText(`Revoke “${name}”?`);
   await row.getByRole("button", { name: "Keep it" }).click();
   await expect(row.getByRole("group")).toHaveCount(0);
-  expect((await asScript(page, key, "GET", "/api/v1/me")).status).toBe(200);
+  expect((await asScript(key, "GET", "/api/v1/me")).status).toBe(200);
   await row.getByRole("button", { name: "Revoke…" }).click();
   await row.getByRole("button", { name: "Revoke key" }).click();
   await expect(row).toContainText("Revoked");
   await expect(row.getByRole("button")).toHaveCount(0);
-  const refused = await asScript(page, key, "GET", "/api/v1/me");
+  const refused = await asScript(key, "GET", "/api/v1/me");
   expect(refused.status).toBe(401);
   expect(refused.body?.detail).toBe("The API key is not valid or has been revoked");
 
