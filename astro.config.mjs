@@ -71,6 +71,9 @@ export default defineConfig({
   adapter: node({ mode: "middleware" }),
   integrations: [react(), calcWorker],
   security: {
+    // src/middleware.ts refuses cross-site form-like writes itself (lib/server/cross-origin.ts formWriteRefusal),
+    // so that scripts calling /api/v1 with an API key and no cookie need no Origin header.
+    checkOrigin: false,
     // Without this the node adapter distrusts the Host header: request.url becomes
     // http://localhost/… and same-origin form posts are refused.
     allowedDomains: [{ hostname: "127.0.0.1" }, { hostname: "localhost" }, ...extraHosts],

@@ -34,6 +34,9 @@ export default defineConfig({
       PORT: String(port),
       BETTER_AUTH_URL: baseURL,
       NODE_ENV: "production",
+      // The matrix alone starts about thirty deliveries in the demo organisation (sessions and API keys); the
+      // hourly limit itself is tested in tests/server/deliveries.test.ts.
+      DELIVERY_RATE_LIMIT: process.env.DELIVERY_RATE_LIMIT ?? "200",
     },
   },
 });

@@ -2,8 +2,9 @@ import { defineMiddleware } from "astro:middleware";
 import { auth } from "@/lib/server/auth";
 import { problem, unavailable } from "@/lib/server/http";
 import { serverEnv } from "@/lib/server/env";
-import { crossSiteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
+import { crossSiteRefusal, formWriteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
 import { isDatabaseUnavailable } from "@/lib/server/db/unavailable";
+import { apiKeyIdentity, bearerToken } from "@/lib/server/api-key-auth";
 import "@/lib/server/client-address"; // records each request's socket address from the first request on
 
 /** Pages that need a signed-in user; anonymous visitors are sent to /signin and back. */
@@ -21,9 +22,29 @@ const UNAVAILABLE_PAGE = "/unavailable";
 export const onRequest = defineMiddleware(async (context, next) => {
   if (context.isPrerendered) return next();
   const path = context.url.pathname;
-  if (isApiWrite(context.request.method, path)) {
-    const refusal = crossSiteRefusal(context.request.headers, TRUSTED());
+  const headers = context.request.headers;
+  const bearer = bearerToken(headers);
+  // A request with a bearer key and no cookie cannot be forged by a browser page: a page cannot add an
+  // Authorization header to a cross-site request without a CORS preflight this server never approves, and
+  // without cookies the browser lends the request no identity. Such a request proves who it is by its key.
+  const keyOnly = bearer !== null && !headers.has("cookie");
+  if (!(keyOnly && path.startsWith("/api/v1/"))) {
+    const refusal =
+      (isApiWrite(context.request.method, path) ? crossSiteRefusal(headers, TRUSTED()) : null) ??
+      formWriteRefusal(context.request.method, headers, context.url.origin, TRUSTED());
     if (refusal) return problem(403, refusal);
+  }
+  if (bearer !== null && path.startsWith("/api/auth/")) {
+    return problem(403, "This route needs a signed-in session; API keys cannot call it");
+  }
+  if (bearer !== null && path.startsWith("/api/v1/")) {
+    // The key alone decides who the caller is (a session cookie beside it is ignored).
+    const identity = await apiKeyIdentity(bearer);
+    if (identity instanceof Response) return identity;
+    context.locals.user = identity.user as NonNullable<App.Locals["user"]>;
+    context.locals.session = null;
+    context.locals.apiKey = identity.apiKey;
+    return next();
   }
   if (path.startsWith("/api/auth/") || path === "/api/health" || path === UNAVAILABLE_PAGE) {
     context.locals.user = null;

@@ -1,6 +1,6 @@
 // API callers for the matrix and fuzz tests: plain fetch with an explicit session cookie (no cookie jar, so a
 // response that signs someone else in never changes who the next request is from), an Origin header as a
-// browser sends, a per-request timeout and no redirects followed.
+// browser sends, a per-request timeout and no redirects followed; or an API key as a script sends it.
 import { expect, test } from "@playwright/test";
 import { DEMO_PASSWORD, demoUser } from "@/lib/demo-scenario";
 import type { RoleName } from "@/lib/auth/roles";
@@ -13,6 +13,11 @@ export interface Caller {
   actor: Actor;
   /** The Cookie header of the session, or null when anonymous. */
   cookie: string | null;
+  /**
+   * An API key: sent as `Authorization: Bearer …` the way a script sends it, without cookie or Origin
+   * (the key acts as `actor`, the member who made it).
+   */
+  bearer?: string;
 }
 
 export interface Answer {
@@ -29,8 +34,10 @@ export const ANONYMOUS: Caller = { actor: "anonymous", cookie: null };
 /** One request; `body` is sent as JSON (a string or bytes are sent as they are). */
 export async function call(caller: Caller, method: string, path: string, body?: unknown, timeoutMs = 15_000): Promise<Answer> {
   const base = baseUrl();
-  const headers: Record<string, string> = { origin: new URL(base).origin, accept: "application/json" };
-  if (caller.cookie) headers.cookie = caller.cookie;
+  const headers: Record<string, string> = caller.bearer
+    ? { authorization: `Bearer ${caller.bearer}`, accept: "application/json" }
+    : { origin: new URL(base).origin, accept: "application/json" };
+  if (caller.cookie && !caller.bearer) headers.cookie = caller.cookie;
   // FormData (multipart uploads) sets its own content type with the boundary.
   if (body !== undefined && !(body instanceof FormData)) headers["content-type"] = "application/json";
   const res = await fetch(base + path, {

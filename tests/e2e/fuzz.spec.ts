@@ -21,6 +21,7 @@ import { RequirementsRequest } from "@/lib/contracts/requirements";
 import { baseUrl, call, createOutsider, type Outsider } from "./api-actors";
 import { CommentRequest, DecisionRequest } from "@/lib/contracts/review";
 import { DeliveryRequest } from "@/lib/contracts/deliveries";
+import { ApiKeyCreateRequest } from "@/lib/contracts/api-keys";
 
 const SEED = Number(process.env.FC_SEED ?? 20261202);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 25);
@@ -351,6 +352,13 @@ const FUZZED: FuzzRoute[] = [
     schema: InvitationRequest,
     url: (c) => `/api/v1/orgs/${c.outsider.organizationId}/invitations`,
     example: () => ({ email: freshEmail(), role: "architect" }),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/api-keys",
+    schema: ApiKeyCreateRequest,
+    url: (c) => `/api/v1/orgs/${c.outsider.organizationId}/api-keys`,
+    example: () => ({ name: "Fuzzed key", scope: "calculate" }),
   },
   {
     method: "PATCH",

@@ -71,6 +71,7 @@ test("every main page renders under its Content-Security-Policy: no violations, 
     `/projects/${projectId}/sun`,
     `/projects/${projectId}/outbox`,
     `/orgs/${DEMO_ORGANIZATION.slug}/members`,
+    `/orgs/${DEMO_ORGANIZATION.slug}/api-keys`,
   ]) {
     expect(await visit(path), path).toBeGreaterThan(0);
   }

@@ -2,9 +2,11 @@
 // visitor, each demo role and a member of another organisation, against the status the table's rule and the
 // role table (src/lib/auth/roles.ts) give. Bodies are valid, so the answers are about access, not validation.
 // Writes that succeed go to throwaway rows (fresh projects, members and invitations), which are removed after.
+// Every row is also called with a read, a calculate and a read-write API key of the demo organisation (made by
+// its owner), against what the route table's key scope rule (keyScope) and the owner's rights give.
 import { expect, test } from "@playwright/test";
 import { permissionFor, roleCan } from "@/lib/auth/roles";
-import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
+import { KEY_SCOPES, keyScope, ROUTES, routeKey, scopeAllows, type KeyScope, type RouteEntry } from "@/lib/auth/route-table";
 import { ACTORS, ANONYMOUS, addMember, call, createOutsider, signInAs, signInDemo, type Actor, type Caller, type Outsider } from "./api-actors";
 import { AUTH_ROUTES } from "@/lib/server/auth-routes";
 import pg from "pg";
@@ -31,6 +33,9 @@ const AUTH_PROBES: Record<string, { url: string; body?: unknown; status: number 
 /** Fixtures shared by the cases, made once per worker. */
 interface World {
   callers: Record<Actor, Caller>;
+  /** API keys of the demo organisation, one per scope, made by the demo owner; their ids to revoke after. */
+  keys: Record<KeyScope, Caller>;
+  keyIds: string[];
   outsider: Outsider;
   orgId: string;
   clientMemberId: string;
@@ -65,6 +70,8 @@ interface Case {
   after?: (actor: Actor, status: number, body: unknown) => void;
   /** Names a second case of the same route (another form of its query), so that test titles stay unique. */
   variant?: string;
+  /** Waits for background work per call (a delivery's workbook): the test gets three times the usual time. */
+  slow?: true;
 }
 
 /** The status the route table's rule and the role table give `actor`. */
@@ -80,6 +87,16 @@ function expectedStatus(route: RouteEntry, actor: Actor, target?: Target): numbe
   }
   if (rule.permission && !roleCan(actor, permissionFor(rule.permission))) return 403;
   return route.ok;
+}
+
+/**
+ * The status for a call with an API key of `scope`: 403 when the route needs a session or a wider scope,
+ * otherwise what its maker (the demo owner) gets, since a key acts as the member who made it.
+ */
+function expectedKeyStatus(route: RouteEntry, scope: KeyScope, target?: Target): number {
+  const needed = keyScope(route);
+  if (!scopeAllows(scope, needed)) return 403;
+  return expectedStatus(route, "owner", target);
 }
 
 const consultant = () => w.callers.consultant;
@@ -391,6 +408,7 @@ const deliveryCases = (target: Target): Case[] => [
     method: "GET",
     path: "/api/v1/deliveries/:id/attachment",
     target,
+    slow: true,
     prepare: async () => ({ path: `/api/v1/deliveries/${await throwawayDelivery(target, true)}/attachment` }),
   },
 ];
@@ -537,6 +555,34 @@ const CASES: Case[] = [
   },
 ];
 
+/** A key of the demo organisation made by its owner, to be revoked by a case (and by afterAll if not). */
+async function throwawayKey(): Promise<string> {
+  const res = await call(owner(), "POST", `/api/v1/orgs/${w.orgId}/api-keys`, { name: "Matrix throwaway key", scope: "read" });
+  expect(res.status, res.text.slice(0, 200)).toBe(201);
+  const id = (res.body as { apiKey: { id: string } }).apiKey.id;
+  w.keyIds.push(id);
+  return id;
+}
+
+const apiKeyCases = (): Case[] => [
+  { method: "GET", path: "/api/v1/orgs/:orgId/api-keys", prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/api-keys` }) },
+  {
+    method: "POST",
+    path: "/api/v1/orgs/:orgId/api-keys",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/api-keys`, body: { name: "Matrix created key", scope: "calculate" } }),
+    after: (_a, status, body) => {
+      if (status === 201) w.keyIds.push((body as { apiKey: { id: string } }).apiKey.id);
+    },
+  },
+  {
+    method: "DELETE",
+    path: "/api/v1/orgs/:orgId/api-keys/:id",
+    prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/api-keys/${await throwawayKey()}` }),
+  },
+  { method: "GET", path: "/api/v1/orgs/:orgId/history", prepare: async () => ({ path: `/api/v1/orgs/${w.orgId}/history` }) },
+];
+CASES.push(...apiKeyCases());
+
 const routeOf = (c: Pick<Case, "method" | "path">) => ROUTES.find((r) => r.method === c.method && r.path === c.path);
 
 test.beforeAll(async () => {
@@ -554,8 +600,19 @@ test.beforeAll(async () => {
   expect(inv.status).toBe(201);
   const db = new pg.Client({ connectionString: process.env.DATABASE_URL });
   await db.connect();
+  const keys = {} as Record<KeyScope, Caller>;
+  const keyIds: string[] = [];
+  for (const scope of KEY_SCOPES) {
+    const res = await call(callers.owner, "POST", `/api/v1/orgs/${orgId}/api-keys`, { name: `Matrix key (${scope})`, scope });
+    expect(res.status, res.text.slice(0, 200)).toBe(201);
+    const created = res.body as { key: string; apiKey: { id: string } };
+    keys[scope] = { actor: "owner", cookie: null, bearer: created.key };
+    keyIds.push(created.apiKey.id);
+  }
   w = {
     db,
+    keys,
+    keyIds,
     makeups: [],
     callers,
     outsider,
@@ -575,6 +632,7 @@ test.afterAll(async () => {
   for (const id of w.members) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/members/${id}`);
   for (const id of w.invitations) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/invitations/${id}`);
   for (const id of w.panes) await call(w.callers.owner, "DELETE", `/api/v1/panes/${id}`);
+  for (const id of w.keyIds) await call(w.callers.owner, "DELETE", `/api/v1/orgs/${w.orgId}/api-keys/${id}`);
   await deleteMakeupRows(w.makeups);
   await closeWorkspaceRows();
   await removeMakeups(w.db, w.makeups);
@@ -592,11 +650,13 @@ test("every route in the table has a case, and every case a route", () => {
 
 for (const c of CASES) {
   test(`${routeKey(c)}${c.variant ? ` [${c.variant}]` : ""}${c.target ? ` (${c.target} project)` : ""}`, async () => {
+    if (c.slow) test.slow();
     const route = routeOf(c)!;
     const rows: string[] = [];
     // Least rights first, so a successful destructive call by a later role cannot hide a refusal.
+    let last: Prepared | undefined;
     for (const actor of ACTORS) {
-      const { path, body } = await c.prepare(actor);
+      const { path, body } = (last = await c.prepare(actor));
       const res = await call(w.callers[actor], c.method, path, body);
       c.after?.(actor, res.status, res.body);
       const ruled = actor !== "anonymous" && c.signedIn ? c.signedIn.status : expectedStatus(route, actor, c.target);
@@ -605,6 +665,24 @@ for (const c of CASES) {
       expect.soft(res.status, `${actor}: ${c.method} ${path} answered ${res.text.slice(0, 160)}`).toBe(want);
       if (res.status >= 400)
         expect.soft(res.headers.get("content-type") ?? "", `${actor}: refusals are problem+json`).toContain("application/problem+json");
+    }
+    // The same row with each API key: one call per key, after the sessions. A route that writes nothing is
+    // called on the owner's target; a writing route gets a fresh one per key.
+    for (const scope of KEY_SCOPES) {
+      const { path, body } = route.writes ? await c.prepare("owner") : last!;
+      const res = await call(w.keys[scope], c.method, path, body);
+      c.after?.("owner", res.status, res.body);
+      const allowed = scopeAllows(scope, keyScope(route));
+      const ruled = allowed ? (c.signedIn ? c.signedIn.status : expectedKeyStatus(route, scope, c.target)) : 403;
+      const want = allowed && c.want ? c.want("owner", ruled) : ruled;
+      rows.push(`${`key:${scope}`.padEnd(14)} ${res.status} (expected ${want})`);
+      expect.soft(res.status, `${scope} key: ${c.method} ${path} answered ${res.text.slice(0, 160)}`).toBe(want);
+      if (res.status >= 400)
+        expect.soft(res.headers.get("content-type") ?? "", `${scope} key: refusals are problem+json`).toContain("application/problem+json");
+      if (!allowed)
+        expect
+          .soft((res.body as { detail?: string }).detail, `${scope} key: the refusal says what is needed`)
+          .toContain(keyScope(route) === "session-only" ? "signed-in session" : `"${keyScope(route)}"`);
     }
     test.info().annotations.push({ type: "matrix", description: rows.join("\n") });
   });
@@ -628,6 +706,16 @@ test.describe("better-auth routes on the allowlist", () => {
         expect.soft(res.status, `${actor}: ${res.text.slice(0, 160)}`).toBe(probe.status);
       }
     });
+  }
+});
+
+test("API keys cannot call better-auth (403: a signed-in session is needed)", async () => {
+  for (const r of AUTH_ROUTES) {
+    const probe = AUTH_PROBES[`${r.method} ${r.path}`]!;
+    for (const scope of KEY_SCOPES) {
+      const res = await call(w.keys[scope], r.method, `/api/auth${probe.url}`, probe.body);
+      expect.soft(res.status, `${scope} key: ${r.method} /api/auth${probe.url} answered ${res.text.slice(0, 160)}`).toBe(403);
+    }
   }
 });
 

@@ -9,6 +9,7 @@ import * as projectContracts from "@/lib/contracts/projects";
 import * as scheduleContracts from "@/lib/contracts/schedule";
 import * as revisionContracts from "@/lib/contracts/revisions";
 import * as deliveryContracts from "@/lib/contracts/deliveries";
+import * as apiKeyContracts from "@/lib/contracts/api-keys";
 import { fieldPath, zodFieldErrors } from "@/lib/server/http";
 
 const pane = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
@@ -32,6 +33,7 @@ const samples: Record<string, unknown> = {
   SignInRequest: { email: "ana@example.test", password: "long enough" },
   InvitationRequest: { email: "ana@example.test", role: "client" },
   MemberRoleRequest: { role: "architect" },
+  ApiKeyCreateRequest: { name: "Nightly export", scope: "read" },
   ProjectCreateRequest: { organizationId: "org_1", ...project },
   ProjectUpdateRequest: project,
   ShareRequest: { memberId: "m_1" },
@@ -55,6 +57,7 @@ const modules = {
   ...scheduleContracts,
   ...revisionContracts,
   ...deliveryContracts,
+  ...apiKeyContracts,
   ...commonContracts,
 };
 const isSchema = (v: unknown): v is ZodType => typeof v === "object" && v !== null && "safeParse" in v && "_zod" in v;

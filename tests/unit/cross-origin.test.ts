@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { crossSiteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
+import { crossSiteRefusal, formWriteRefusal, isApiWrite, trustedOrigins } from "@/lib/server/cross-origin";
 
 const trusted = trustedOrigins({
   BETTER_AUTH_URL: "https://app.paneray.example/",
@@ -46,5 +46,24 @@ describe("crossSiteRefusal", () => {
   });
   it("refuses a foreign Origin even when Sec-Fetch-Site claims same-origin", () => {
     expect(crossSiteRefusal(h({ "sec-fetch-site": "same-origin", origin: "http://evil.example" }), trusted)).toMatch(/^Cross-site request refused/);
+  });
+});
+
+describe("formWriteRefusal", () => {
+  const own = "http://127.0.0.1:4321";
+  it("refuses writes with a form body or none unless they carry this server's origin or a trusted one", () => {
+    for (const type of ["application/x-www-form-urlencoded", "multipart/form-data; boundary=x", "text/plain;charset=UTF-8"]) {
+      expect(formWriteRefusal("POST", h({ "content-type": type }), own, trusted), type).toMatch(/^Cross-site POST form submission refused/);
+      expect(formWriteRefusal("POST", h({ "content-type": type, origin: "http://evil.example" }), own, trusted), type).not.toBeNull();
+      expect(formWriteRefusal("POST", h({ "content-type": type, origin: own }), own, trusted), type).toBeNull();
+      expect(formWriteRefusal("POST", h({ "content-type": type, origin: "https://app.paneray.example" }), own, trusted), type).toBeNull();
+    }
+    expect(formWriteRefusal("DELETE", h({}), own, trusted)).toMatch(/^Cross-site DELETE form submission refused/);
+    expect(formWriteRefusal("DELETE", h({ origin: own }), own, trusted)).toBeNull();
+  });
+  it("leaves JSON writes and reads to the other checks", () => {
+    expect(formWriteRefusal("POST", h({ "content-type": "application/json" }), own, trusted)).toBeNull();
+    expect(formWriteRefusal("GET", h({}), own, trusted)).toBeNull();
+    expect(formWriteRefusal("HEAD", h({ "content-type": "text/plain" }), own, trusted)).toBeNull();
   });
 });

@@ -22,6 +22,8 @@ const table: [Permission, Record<RoleName, boolean>][] = [
   [{ comment: ["create"] }, { owner: true, consultant: true, architect: true, client: false }],
   [{ export: ["create"] }, { owner: true, consultant: true, architect: false, client: false }],
   [{ export: ["receive"] }, { owner: true, consultant: true, architect: true, client: true }],
+  // Owners manage the organisation, its API keys included (README, API keys).
+  [{ apiKey: ["manage"] }, { owner: true, consultant: false, architect: false, client: false }],
 ];
 
 describe("role rules", () => {

@@ -3,7 +3,7 @@
 import { readdirSync, readFileSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
-import { ROUTES, routeKey, type RouteEntry } from "@/lib/auth/route-table";
+import { keyScope, routeOfPattern, ROUTES, routeKey, scopeAllows, type RouteEntry } from "@/lib/auth/route-table";
 
 const API_DIR = join(import.meta.dirname, "../../src/pages/api");
 const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE", "OPTIONS", "HEAD", "ALL"];
@@ -98,5 +98,70 @@ describe("route table", () => {
 
   it("notices a route file with a method the table does not list", () => {
     expect([...exportedMethods('export const GET = endpoint({ auth: "user" }, h);\nexport const PUT = x;').keys()]).toEqual(["GET", "PUT"]);
+  });
+});
+
+describe("API-key scope rule", () => {
+  const scopeOf = (method: string, path: string) => keyScope(ROUTES.find((r) => r.method === method && r.path === path)!);
+
+  it("needs a session for key management, members, invitations, sign-up, acceptance and better-auth", () => {
+    const sessionOnly = ROUTES.filter((r) => keyScope(r) === "session-only")
+      .map(routeKey)
+      .sort();
+    expect(sessionOnly).toEqual(
+      [
+        "ALL /api/auth/:path*",
+        "POST /api/v1/signup",
+        "POST /api/v1/invitations/:id/accept",
+        "GET /api/v1/orgs/:orgId/members",
+        "PATCH /api/v1/orgs/:orgId/members/:memberId",
+        "DELETE /api/v1/orgs/:orgId/members/:memberId",
+        "GET /api/v1/orgs/:orgId/invitations",
+        "POST /api/v1/orgs/:orgId/invitations",
+        "DELETE /api/v1/orgs/:orgId/invitations/:invitationId",
+        "GET /api/v1/orgs/:orgId/api-keys",
+        "POST /api/v1/orgs/:orgId/api-keys",
+        "DELETE /api/v1/orgs/:orgId/api-keys/:id",
+      ].sort(),
+    );
+  });
+
+  it("gives GET routes to read keys, the calculations to calculate keys and the other writes to read-write keys", () => {
+    expect(scopeOf("GET", "/api/v1/projects/:id/workbook")).toBe("read");
+    expect(scopeOf("POST", "/api/v1/calc/glazing")).toBe("calculate");
+    expect(scopeOf("POST", "/api/v1/calc/schedule")).toBe("calculate");
+    expect(scopeOf("PATCH", "/api/v1/projects/:id")).toBe("read-write");
+    expect(scopeOf("POST", "/api/v1/projects/:id/weather")).toBe("read-write");
+    for (const r of ROUTES) if (keyScope(r) === "read") expect(r.method, routeKey(r)).toBe("GET");
+  });
+
+  it("orders the scopes: each includes the narrower ones, none reaches a session-only route", () => {
+    expect([scopeAllows("read", "read"), scopeAllows("read", "calculate"), scopeAllows("read", "read-write")]).toEqual([true, false, false]);
+    expect([scopeAllows("calculate", "read"), scopeAllows("calculate", "calculate"), scopeAllows("calculate", "read-write")]).toEqual([
+      true,
+      true,
+      false,
+    ]);
+    expect([scopeAllows("read-write", "read"), scopeAllows("read-write", "calculate"), scopeAllows("read-write", "read-write")]).toEqual([
+      true,
+      true,
+      true,
+    ]);
+    for (const s of ["read", "calculate", "read-write"] as const) expect(scopeAllows(s, "session-only")).toBe(false);
+  });
+
+  it("finds the row of every route from the pattern Astro reports (in lower case)", () => {
+    for (const r of ROUTES) {
+      const pattern =
+        "/api/" +
+        r.file
+          .replace(/\.(ts|js|mjs)$/, "")
+          .replace(/(^|\/)index$/, "")
+          .replace(/\/$/, "");
+      const method = r.method === "ALL" ? "POST" : r.method;
+      expect(routeOfPattern(method, pattern), routeKey(r)).toBe(r);
+      expect(routeOfPattern(method, pattern.toLowerCase()), routeKey(r)).toBe(r);
+    }
+    expect(routeOfPattern("PUT", "/api/v1/projects/[id]")).toBeUndefined();
   });
 });

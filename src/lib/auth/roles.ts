@@ -24,6 +24,8 @@ export const statements = {
   /** Issuing a lettered schedule revision. */
   revision: ["issue"],
   export: ["create", "receive"],
+  /** manage: create, list and revoke the organisation's API keys. */
+  apiKey: ["manage"],
 } as const;
 
 export const ac = createAccessControl(statements);
@@ -41,6 +43,7 @@ export const owner = ac.newRole({
   ...ownerAc.statements,
   ...projectWork,
   option: ["assign", "review"],
+  apiKey: ["manage"],
 });
 
 export const consultant = ac.newRole({ ...projectWork });
@@ -110,6 +113,8 @@ export const PERMISSION_PHRASES: Partial<Record<PermissionKey, string>> = {
   "comment:create": "comment on options",
   "revision:issue": "issue schedule revisions",
   "export:create": "export or send schedules",
+  "apiKey:manage": "manage API keys",
+  "organization:update": "see the organisation's history",
 };
 
 /** The permission object for a "resource:action" key. */

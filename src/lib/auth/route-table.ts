@@ -49,17 +49,27 @@ export interface RouteEntry {
   readonly ok: 200 | 201 | 202 | 204;
   /** Whether the route changes stored data (the fuzz tests send hostile bodies to these). */
   readonly writes: boolean;
+  /** Only a signed-in session may call the route, never an API key (see keyScope). */
+  readonly sessionOnly?: true;
 }
 
 export const ROUTES: readonly RouteEntry[] = [
   { file: "health.ts", path: "/api/health", method: "GET", auth: "anonymous", ok: 200, writes: false },
-  { file: "auth/[...all].ts", path: "/api/auth/:path*", method: "ALL", auth: "better-auth", ok: 200, writes: true },
+  { file: "auth/[...all].ts", path: "/api/auth/:path*", method: "ALL", auth: "better-auth", ok: 200, writes: true, sessionOnly: true },
   { file: "v1/me.ts", path: "/api/v1/me", method: "GET", auth: "user", ok: 200, writes: false },
-  { file: "v1/signup.ts", path: "/api/v1/signup", method: "POST", auth: "anonymous", ok: 201, writes: true },
+  { file: "v1/signup.ts", path: "/api/v1/signup", method: "POST", auth: "anonymous", ok: 201, writes: true, sessionOnly: true },
   { file: "v1/calc/glazing.ts", path: "/api/v1/calc/glazing", method: "POST", auth: "user", ok: 200, writes: false },
   { file: "v1/calc/schedule.ts", path: "/api/v1/calc/schedule", method: "POST", auth: "user", ok: 200, writes: false },
   { file: "v1/invitations/[id]/index.ts", path: "/api/v1/invitations/:id", method: "GET", auth: "anonymous", ok: 200, writes: false },
-  { file: "v1/invitations/[id]/accept.ts", path: "/api/v1/invitations/:id/accept", method: "POST", auth: "user", ok: 200, writes: true },
+  {
+    file: "v1/invitations/[id]/accept.ts",
+    path: "/api/v1/invitations/:id/accept",
+    method: "POST",
+    auth: "user",
+    ok: 200,
+    writes: true,
+    sessionOnly: true,
+  },
   {
     file: "v1/orgs/[orgId]/members/index.ts",
     path: "/api/v1/orgs/:orgId/members",
@@ -67,6 +77,7 @@ export const ROUTES: readonly RouteEntry[] = [
     auth: { org: "orgId", permission: "member:update" },
     ok: 200,
     writes: false,
+    sessionOnly: true,
   },
   {
     file: "v1/orgs/[orgId]/members/[memberId].ts",
@@ -75,6 +86,7 @@ export const ROUTES: readonly RouteEntry[] = [
     auth: { org: "orgId", permission: "member:update" },
     ok: 200,
     writes: true,
+    sessionOnly: true,
   },
   {
     file: "v1/orgs/[orgId]/members/[memberId].ts",
@@ -83,6 +95,7 @@ export const ROUTES: readonly RouteEntry[] = [
     auth: { org: "orgId", permission: "member:delete" },
     ok: 200,
     writes: true,
+    sessionOnly: true,
   },
   {
     file: "v1/orgs/[orgId]/invitations/index.ts",
@@ -91,6 +104,7 @@ export const ROUTES: readonly RouteEntry[] = [
     auth: { org: "orgId", permission: "member:update" },
     ok: 200,
     writes: false,
+    sessionOnly: true,
   },
   {
     file: "v1/orgs/[orgId]/invitations/index.ts",
@@ -99,6 +113,7 @@ export const ROUTES: readonly RouteEntry[] = [
     auth: { org: "orgId", permission: "invitation:create" },
     ok: 201,
     writes: true,
+    sessionOnly: true,
   },
   {
     file: "v1/orgs/[orgId]/invitations/[invitationId].ts",
@@ -107,6 +122,7 @@ export const ROUTES: readonly RouteEntry[] = [
     auth: { org: "orgId", permission: "invitation:cancel" },
     ok: 200,
     writes: true,
+    sessionOnly: true,
   },
   { file: "v1/projects/index.ts", path: "/api/v1/projects", method: "GET", auth: "user", ok: 200, writes: false },
   {
@@ -437,7 +453,82 @@ export const ROUTES: readonly RouteEntry[] = [
     ok: 200,
     writes: false,
   },
+  // The organisation's API keys (owners; a signed-in session only) and its history.
+  {
+    file: "v1/orgs/[orgId]/api-keys/index.ts",
+    path: "/api/v1/orgs/:orgId/api-keys",
+    method: "GET",
+    auth: { org: "orgId", permission: "apiKey:manage" },
+    ok: 200,
+    writes: false,
+    sessionOnly: true,
+  },
+  {
+    file: "v1/orgs/[orgId]/api-keys/index.ts",
+    path: "/api/v1/orgs/:orgId/api-keys",
+    method: "POST",
+    auth: { org: "orgId", permission: "apiKey:manage" },
+    ok: 201,
+    writes: true,
+    sessionOnly: true,
+  },
+  {
+    file: "v1/orgs/[orgId]/api-keys/[id].ts",
+    path: "/api/v1/orgs/:orgId/api-keys/:id",
+    method: "DELETE",
+    auth: { org: "orgId", permission: "apiKey:manage" },
+    ok: 200,
+    writes: true,
+    sessionOnly: true,
+  },
+  {
+    file: "v1/orgs/[orgId]/history.ts",
+    path: "/api/v1/orgs/:orgId/history",
+    method: "GET",
+    auth: { org: "orgId", permission: "organization:update" },
+    ok: 200,
+    writes: false,
+  },
 ];
 
 /** "METHOD /path" of a row, for messages and test titles. */
 export const routeKey = (r: Pick<RouteEntry, "method" | "path">) => `${r.method} ${r.path}`;
+
+/** What an API key may be allowed to do, narrowest first; each scope includes the ones before it. */
+export const KEY_SCOPES = ["read", "calculate", "read-write"] as const;
+export type KeyScope = (typeof KEY_SCOPES)[number];
+
+/** The calculation routes: a "calculate" key may call these besides every GET route. */
+export const CALCULATION_PATHS: readonly string[] = ["/api/v1/calc/glazing", "/api/v1/calc/schedule"];
+
+/**
+ * The narrowest API-key scope that may call a route, or "session-only" when no key may (key management,
+ * members and invitations, sign-up, invitation acceptance and everything of better-auth):
+ * GET routes need "read", the calculation routes "calculate", every other route "read-write". A key also
+ * acts only within its organisation and with its member's role: the route's `auth` rule still applies.
+ */
+export function keyScope(route: Pick<RouteEntry, "method" | "path" | "sessionOnly" | "auth">): KeyScope | "session-only" {
+  if (route.sessionOnly || route.auth === "better-auth") return "session-only";
+  if (route.method === "GET") return "read";
+  if (CALCULATION_PATHS.includes(route.path)) return "calculate";
+  return "read-write";
+}
+
+/** Whether a key of scope `held` may call a route that needs `needed`. */
+export function scopeAllows(held: KeyScope, needed: KeyScope | "session-only"): boolean {
+  return needed !== "session-only" && KEY_SCOPES.indexOf(held) >= KEY_SCOPES.indexOf(needed);
+}
+
+/**
+ * The row that serves `method` on an Astro route pattern such as "/api/v1/projects/[id]/workbook.csv".
+ * Astro reports patterns in lower case ("/api/v1/orgs/[orgid]/members"), so paths are compared without case.
+ */
+export function routeOfPattern(method: string, pattern: string): RouteEntry | undefined {
+  const path = pattern
+    .replace(/\[\.\.\.(\w+)\]/g, ":path*")
+    .replace(/\[(\w+)\]/g, ":$1")
+    .replace(/\/$/, "")
+    .toLowerCase();
+  const m = method.toUpperCase();
+  return ROUTES.find((r) => r.path.toLowerCase() === path && (r.method === m || r.method === "ALL"));
+}

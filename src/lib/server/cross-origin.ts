@@ -4,6 +4,10 @@
  * headers name another site is refused, whatever cookies it carries. A request with neither header
  * (curl, scripts, server-to-server calls) does not come from a browser page and is let through; it
  * still needs a session like any other call.
+ *
+ * Besides, a write whose body an HTML form could send (a form content type, or no content type) must carry
+ * one of our origins, whatever the path (`formWriteRefusal`); the middleware skips both checks for requests
+ * that carry an API key and no cookie, which no browser page can forge.
  */
 import type { ServerEnv } from "@/lib/server/env";
 
@@ -43,4 +47,21 @@ export function crossSiteRefusal(headers: Headers, trusted: ReadonlySet<string>)
     return `Cross-site request refused: origin "${origin.slice(0, 200)}" is not one of this server's origins`;
   }
   return null;
+}
+
+/** The content types an HTML form (or a CORS-simple request) can send without a preflight. */
+const FORM_TYPES = ["application/x-www-form-urlencoded", "multipart/form-data", "text/plain"];
+
+/**
+ * Why a write that a plain HTML form could send (a form content type, or none at all) must be refused, or
+ * null: it must carry an `Origin` that is the request's own origin or a trusted one.
+ */
+export function formWriteRefusal(method: string, headers: Headers, ownOrigin: string, trusted: ReadonlySet<string>): string | null {
+  const m = method.toUpperCase();
+  if (!WRITE_METHODS.has(m)) return null;
+  const type = headers.get("content-type");
+  if (type !== null && !FORM_TYPES.some((t) => type.toLowerCase().includes(t))) return null;
+  const origin = headers.get("origin")?.trim();
+  if (origin !== undefined && (origin === ownOrigin || trusted.has(origin))) return null;
+  return `Cross-site ${m} form submission refused: a request with a form body or none must carry this server's Origin`;
 }

@@ -35,6 +35,8 @@ const Env = z.object({
   WORKER: z.string().default("on"),
   /** E-mail deliveries an organisation may start per hour (429 with Retry-After past it). */
   DELIVERY_RATE_LIMIT: z.coerce.number().int("DELIVERY_RATE_LIMIT must be a whole number").min(1).max(100_000).default(30),
+  /** Requests one API key may make per minute (429 with Retry-After past it), counted in PostgreSQL. */
+  API_KEY_RATE_LIMIT: z.coerce.number().int("API_KEY_RATE_LIMIT must be a whole number").min(1).max(1_000_000).default(600),
   /** Retries of a delivery whose sending failed, after the first attempt. */
   DELIVERY_RETRY_LIMIT: z.coerce.number().int("DELIVERY_RETRY_LIMIT must be a whole number").min(0).max(50).default(5),
   /** Seconds before the first retry; later ones wait about twice as long each time (with jitter). */

@@ -9,7 +9,9 @@ import type { FieldError, Problem } from "@/lib/contracts/problem";
 import { permissionFor, PERMISSION_PHRASES, type PermissionKey } from "@/lib/auth/roles";
 import { ConflictError, DomainError, ForbiddenError, InvalidError, NotFoundError, RateLimitedError } from "@/lib/server/errors";
 import { isDatabaseUnavailable, RETRY_AFTER_SECONDS } from "@/lib/server/db/unavailable";
-import type { Membership, ProjectRow } from "@/lib/server/services/access";
+import type { Caller, Membership, ProjectRow } from "@/lib/server/services/access";
+import type { ApiKeyPrincipal } from "@/lib/server/services/api-keys";
+import { keyScope, routeOfPattern, scopeAllows } from "@/lib/auth/route-table";
 import type { FacadeOption } from "@/lib/server/db/workspace-schema";
 
 /** The access rules, loaded on first use so that this module (and its tests) need no database. */
@@ -280,7 +282,27 @@ export type EndpointInput<A extends AuthSpec, P, B> = {
   request: Request;
   params: P;
   body: B;
+  /** The API key the request came with (null for a session): its caller acts in the key's organisation only. */
+  apiKey: ApiKeyPrincipal | null;
 } & AuthContext<A>;
+
+/** The caller as the access rules take it: the user, limited to the key's organisation when a key is used. */
+export const callerOf = (userId: string, apiKey: ApiKeyPrincipal | null | undefined): Caller =>
+  apiKey ? { userId, organizationId: apiKey.organizationId } : userId;
+
+/**
+ * Why a request made with `apiKey` may not call the route Astro matched (`pattern`), or null when its scope
+ * allows it: the route table's `keyScope` decides, and a route it does not know is refused.
+ */
+export function apiKeyRefusal(apiKey: ApiKeyPrincipal, method: string, pattern: string | undefined): string | null {
+  const route = pattern ? routeOfPattern(method, pattern) : undefined;
+  if (!route) return "This route is not open to API keys";
+  const needed = keyScope(route);
+  if (needed === "session-only") return "This route needs a signed-in session; API keys cannot call it";
+  if (!scopeAllows(apiKey.scope, needed))
+    return `This API key's scope (${apiKey.scope}) does not allow this route; it needs a "${needed}" key or wider`;
+  return null;
+}
 
 const phrase = (auth: ProjectAuth | OrgAuth | OptionAuth | DeliveryAuth | LibraryAuth) =>
   auth.action ?? (auth.permission && PERMISSION_PHRASES[auth.permission]) ?? "do this";
@@ -307,8 +329,14 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
 ): APIRoute {
   return withProblems(async (context) => {
     const user = context.locals.user ?? null;
+    const apiKey = context.locals.apiKey ?? null;
     const auth = spec.auth as AuthSpec;
+    if (apiKey) {
+      const refusal = apiKeyRefusal(apiKey, context.request.method, context.routePattern);
+      if (refusal) throw new HttpError(403, refusal);
+    }
     if (auth !== "anonymous" && !user) throw new HttpError(401, "Sign in to use this endpoint");
+    const caller = user ? callerOf(user.id, apiKey) : null;
     const params = (spec.params ? parseParams(context.params, spec.params) : {}) as P;
 
     let loaded: { project?: ProjectRow; membership?: Membership; option?: FacadeOption; deliveryId?: string } = {};
@@ -316,20 +344,20 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
       if (typeof auth !== "object") return;
       if ("project" in auth && from === "params") {
         const permission = auth.permission ? permissionFor(auth.permission) : undefined;
-        loaded = await (await access()).requireProject(user!.id, stringAt(source, auth.project), permission, phrase(auth));
+        loaded = await (await access()).requireProject(caller!, stringAt(source, auth.project), permission, phrase(auth));
       } else if ("option" in auth && from === "params") {
         const permission = auth.permission ? permissionFor(auth.permission) : undefined;
-        loaded = await (await access()).requireOption(user!.id, stringAt(source, auth.option), permission, phrase(auth));
+        loaded = await (await access()).requireOption(caller!, stringAt(source, auth.option), permission, phrase(auth));
       } else if ("delivery" in auth && from === "params") {
         const permission = auth.permission ? permissionFor(auth.permission) : undefined;
-        loaded = await (await access()).requireDelivery(user!.id, stringAt(source, auth.delivery), permission, phrase(auth));
+        loaded = await (await access()).requireDelivery(caller!, stringAt(source, auth.delivery), permission, phrase(auth));
       } else if (("makeup" in auth || "pane" in auth) && from === "params") {
         const [kind, key] = "makeup" in auth ? (["makeup", auth.makeup] as const) : (["pane", auth.pane] as const);
-        const r = await (await access()).requireLibraryItem(user!.id, kind, stringAt(source, key), permissionFor(auth.permission), phrase(auth));
+        const r = await (await access()).requireLibraryItem(caller!, kind, stringAt(source, key), permissionFor(auth.permission), phrase(auth));
         loaded = { membership: r.membership };
       } else if ("org" in auth && (auth.from ?? "params") === from) {
         loaded = {
-          membership: await (await access()).requireOrgPermission(user!.id, stringAt(source, auth.org), permissionFor(auth.permission), phrase(auth)),
+          membership: await (await access()).requireOrgPermission(caller!, stringAt(source, auth.org), permissionFor(auth.permission), phrase(auth)),
         };
       }
     };
@@ -337,6 +365,6 @@ export function endpoint<const A extends AuthSpec, P = Record<string, never>, B 
     await authorise("params", params);
     const body = (spec.body ? await readJson(context.request, spec.body, spec.maxBytes ?? MAX_JSON_BYTES) : undefined) as B;
     await authorise("body", body);
-    return handler({ context, request: context.request, params, body, user, ...loaded } as unknown as EndpointInput<A, P, B>);
+    return handler({ context, request: context.request, params, body, user, apiKey, ...loaded } as unknown as EndpointInput<A, P, B>);
   }, spec.engineErrorsField);
 }

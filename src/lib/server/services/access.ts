@@ -8,6 +8,22 @@ import { delivery, facadeOption, libraryPane, makeup, member, organization, proj
 import { ForbiddenError, NotFoundError } from "@/lib/server/errors";
 import { roleCan, type Permission, isRoleName, type RoleName } from "@/lib/auth/roles";
 
+/**
+ * Who is asking: a signed-in user (their id), or a member acting through one of the organisation's API keys,
+ * who is then a member of that organisation only (anything of another organisation is not found, exactly as
+ * for a non-member).
+ */
+export type Caller = string | KeyCaller;
+export interface KeyCaller {
+  userId: string;
+  /** The organisation of the key: the only one the caller acts in. */
+  organizationId: string;
+}
+
+export const userIdOf = (caller: Caller) => (typeof caller === "string" ? caller : caller.userId);
+/** The one organisation a key caller is limited to, or null for a session. */
+export const keyOrganizationOf = (caller: Caller) => (typeof caller === "string" ? null : caller.organizationId);
+
 export interface Membership {
   memberId: string;
   organizationId: string;
@@ -16,8 +32,9 @@ export interface Membership {
   role: RoleName;
 }
 
-/** The user's organisations with their role, oldest membership first. */
-export async function membershipsOf(userId: string): Promise<Membership[]> {
+/** The caller's organisations with their role, oldest membership first (a key caller: the key's only). */
+export async function membershipsOf(caller: Caller): Promise<Membership[]> {
+  const only = keyOrganizationOf(caller);
   const rows = await db
     .select({
       memberId: member.id,
@@ -28,13 +45,15 @@ export async function membershipsOf(userId: string): Promise<Membership[]> {
     })
     .from(member)
     .innerJoin(organization, eq(organization.id, member.organizationId))
-    .where(eq(member.userId, userId))
+    .where(and(eq(member.userId, userIdOf(caller)), only ? eq(member.organizationId, only) : undefined))
     .orderBy(asc(member.createdAt));
   return rows.filter((r): r is Membership => isRoleName(r.role));
 }
 
-export async function membershipIn(userId: string, organizationId: string): Promise<Membership | null> {
-  const all = await membershipsOf(userId);
+export async function membershipIn(caller: Caller, organizationId: string): Promise<Membership | null> {
+  const only = keyOrganizationOf(caller);
+  if (only && only !== organizationId) return null;
+  const all = await membershipsOf(caller);
   return all.find((m) => m.organizationId === organizationId) ?? null;
 }
 
@@ -43,8 +62,8 @@ export async function membershipIn(userId: string, organizationId: string): Prom
  * Not a member: NotFoundError (the organisation's existence is not revealed). Member without the
  * right: ForbiddenError naming the role.
  */
-export async function requireOrgPermission(userId: string, organizationId: string, permission: Permission, action: string): Promise<Membership> {
-  const m = await membershipIn(userId, organizationId);
+export async function requireOrgPermission(caller: Caller, organizationId: string, permission: Permission, action: string): Promise<Membership> {
+  const m = await membershipIn(caller, organizationId);
   if (!m) throw new NotFoundError("No such organisation, or you are not a member of it");
   if (!roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return m;
@@ -69,7 +88,7 @@ export async function canSeeProject(m: Membership, p: ProjectRow): Promise<boole
  * ForbiddenError (naming the role) when visible but the role lacks `permission`.
  */
 export async function requireProject(
-  userId: string,
+  caller: Caller,
   projectId: string,
   permission?: Permission,
   action = "change this project",
@@ -77,7 +96,7 @@ export async function requireProject(
   const p = (await db.select().from(project).where(eq(project.id, projectId)))[0];
   const notFound = new NotFoundError("No such project, or it is not shared with you");
   if (!p) throw notFound;
-  const m = await membershipIn(userId, p.organizationId);
+  const m = await membershipIn(caller, p.organizationId);
   if (!m || !(await canSeeProject(m, p))) throw notFound;
   if (permission && !roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return { project: p, membership: m };
@@ -88,7 +107,7 @@ export async function requireProject(
  * option does not exist or its project is not visible to them, ForbiddenError without `permission`.
  */
 export async function requireOption(
-  userId: string,
+  caller: Caller,
   optionId: string,
   permission?: Permission,
   action = "change this option",
@@ -96,7 +115,7 @@ export async function requireOption(
   const o = (await db.select().from(facadeOption).where(eq(facadeOption.id, optionId)))[0];
   if (!o) throw new NotFoundError("No such option, or its project is not shared with you");
   try {
-    return { ...(await requireProject(userId, o.projectId, permission, action)), option: o };
+    return { ...(await requireProject(caller, o.projectId, permission, action)), option: o };
   } catch (err) {
     if (err instanceof NotFoundError) throw new NotFoundError("No such option, or its project is not shared with you");
     throw err;
@@ -109,7 +128,7 @@ export async function requireOption(
  * caller is not a member of, ForbiddenError without the right.
  */
 export async function requireLibraryItem(
-  userId: string,
+  caller: Caller,
   kind: "makeup" | "pane",
   itemId: string,
   permission: Permission,
@@ -119,7 +138,7 @@ export async function requireLibraryItem(
   const row = (await db.select({ organizationId: table.organizationId }).from(table).where(eq(table.id, itemId)))[0];
   const notFound = new NotFoundError(kind === "makeup" ? "No such make-up in your library" : "No such pane in your library");
   if (!row) throw notFound;
-  const m = await membershipIn(userId, row.organizationId);
+  const m = await membershipIn(caller, row.organizationId);
   if (!m) throw notFound;
   if (!roleCan(m.role, permission)) throw ForbiddenError.forRole(m.role, action);
   return { membership: m, organizationId: row.organizationId };
@@ -130,7 +149,7 @@ export async function requireLibraryItem(
  * when the delivery does not exist or its project is not visible to them, ForbiddenError without `permission`.
  */
 export async function requireDelivery(
-  userId: string,
+  caller: Caller,
   deliveryId: string,
   permission?: Permission,
   action = "see this project's deliveries",
@@ -139,7 +158,7 @@ export async function requireDelivery(
   const notFound = new NotFoundError("No such delivery, or its project is not shared with you");
   if (!d) throw notFound;
   try {
-    return { ...(await requireProject(userId, d.projectId, permission, action)), deliveryId };
+    return { ...(await requireProject(caller, d.projectId, permission, action)), deliveryId };
   } catch (err) {
     if (err instanceof NotFoundError) throw notFound;
     throw err;

@@ -5,7 +5,7 @@ import { fieldError, InvalidError, NotFoundError } from "@/lib/server/errors";
 import { isRoleName, ROLE_NAMES, roleCan } from "@/lib/auth/roles";
 import type { ProjectCreateRequest, ProjectUpdateRequest, ShareEntry } from "@/lib/contracts/projects";
 import { DEFAULT_PAGE_LIMIT, pageOf, type Cursor, type Page } from "@/lib/contracts/pagination";
-import { canSeeProject, membershipsOf, type Membership, type ProjectRow } from "./access";
+import { canSeeProject, keyOrganizationOf, membershipsOf, userIdOf, type Caller, type Membership, type ProjectRow } from "./access";
 import { recordEvent, type Actor } from "./history";
 
 export type FacadeRow = typeof facade.$inferSelect;
@@ -122,13 +122,18 @@ export async function projectsForUser(
 }
 
 /**
- * One page of every project the user may see (optionally of one organisation), grouped per
- * organisation; every membership is listed, with the page's projects of that organisation.
+ * One page of every project the caller may see (optionally of one organisation), grouped per
+ * organisation; every membership is listed, with the page's projects of that organisation. A caller
+ * acting through an API key sees its key's organisation only.
  */
 export async function projectsPage(
-  userId: string,
-  q: VisibleQuery,
+  caller: Caller,
+  query: VisibleQuery,
 ): Promise<{ organizations: { membership: Membership; projects: ProjectListRow[] }[]; nextCursor: string | null }> {
+  const only = keyOrganizationOf(caller);
+  if (only && query.organizationId && query.organizationId !== only) return { organizations: [], nextCursor: null };
+  const q = only ? { ...query, organizationId: only } : query;
+  const userId = userIdOf(caller);
   const page = await visibleProjects(userId, q);
   const memberships = page.memberships ?? (await membershipsOf(userId));
   return {

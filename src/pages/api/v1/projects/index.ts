@@ -1,7 +1,7 @@
 import { rowId } from "@/lib/contracts/common";
 import { InstantPageQuery, queryOf } from "@/lib/contracts/pagination";
 import { ProjectCreateRequest } from "@/lib/contracts/projects";
-import { endpoint, json } from "@/lib/server/http";
+import { callerOf, endpoint, json } from "@/lib/server/http";
 import { createProject, projectsPage } from "@/lib/server/services/projects";
 
 const ListQuery = InstantPageQuery.extend({ organizationId: rowId.optional() });
@@ -9,10 +9,11 @@ const ListQuery = InstantPageQuery.extend({ organizationId: rowId.optional() });
 /**
  * One page of the caller's projects (`?limit=`, `?cursor=`, optionally `?organizationId=`), most
  * recently changed first, grouped per organisation; `nextCursor` fetches the next page (null at the end).
+ * With an API key: the key's organisation only.
  */
-export const GET = endpoint({ auth: "user" }, async ({ user, context }) => {
+export const GET = endpoint({ auth: "user" }, async ({ user, apiKey, context }) => {
   const q = ListQuery.parse(queryOf(context.url));
-  const page = await projectsPage(user.id, q);
+  const page = await projectsPage(callerOf(user.id, apiKey), q);
   return json({
     nextCursor: page.nextCursor,
     organizations: page.organizations.map((g) => ({
