@@ -166,23 +166,26 @@ export const GlazingRequest = z
 export type GlazingRequest = z.output<typeof GlazingRequest>;
 export type GlazingRequestInput = z.input<typeof GlazingRequest>;
 
-/** The values of a make-up at one angle or averaged over the hemisphere. */
-export interface GlazingValues {
-  solarTransmittance: number;
-  solarReflectanceFront: number;
-  solarReflectanceBack: number;
-  /** One per pane, outdoor first, of solar radiation incident from outdoors. */
-  layerAbsorptance: number[];
-  gValue: number;
-  /** null unless every pane has measured visible values */
-  visibleTransmittance: number | null;
-  visibleReflectanceFront: number | null;
-  visibleReflectanceBack: number | null;
-}
+// ---- responses ------------------------------------------------------------------------------------------------
 
-export interface GlazingAngleRow extends GlazingValues {
-  angleDeg: number;
-}
+const share = z.number().describe("0–1");
+const lightValue = z.number().nullable().describe("0–1; null unless every pane has measured visible values");
+
+/** The values of a make-up at one angle or averaged over the hemisphere. */
+export const GlazingValues = z.object({
+  solarTransmittance: share,
+  solarReflectanceFront: share,
+  solarReflectanceBack: share,
+  layerAbsorptance: z.array(z.number()).describe("One per pane, outdoor first, of solar radiation incident from outdoors"),
+  gValue: z.number().describe("Total solar energy transmittance (EN 410), 0–1"),
+  visibleTransmittance: lightValue,
+  visibleReflectanceFront: lightValue,
+  visibleReflectanceBack: lightValue,
+});
+export type GlazingValues = z.output<typeof GlazingValues>;
+
+export const GlazingAngleRow = GlazingValues.extend({ angleDeg: z.number().describe("Angle of incidence, degrees") });
+export type GlazingAngleRow = z.output<typeof GlazingAngleRow>;
 
 /**
  * The make-up's light transmittance at normal incidence. "measured": every pane has its three light values
@@ -190,20 +193,21 @@ export interface GlazingAngleRow extends GlazingValues {
  * reflectance is unknown and τv is exact only when no unknown reflectance enters it (a single pane), a
  * range otherwise; "not given": some pane has no light values.
  */
-export interface LightSummary {
-  basis: "measured" | "transmittance only" | "not given";
-  transmittance: number | null;
-  range: { low: number; high: number } | null;
-  reflectanceFront: number | null;
-  reflectanceBack: number | null;
-}
+export const LightSummary = z.object({
+  basis: z.enum(["measured", "transmittance only", "not given"]),
+  transmittance: z.number().nullable(),
+  range: z.object({ low: z.number(), high: z.number() }).nullable(),
+  reflectanceFront: z.number().nullable(),
+  reflectanceBack: z.number().nullable(),
+});
+export type LightSummary = z.output<typeof LightSummary>;
 
-export interface GlazingResponse {
-  angles: GlazingAngleRow[];
-  hemispherical: GlazingValues;
-  /** Centre-of-glass U-value, W/(m²K), unrounded. */
-  uValue: number;
-  warnings: string[];
-  light: LightSummary;
-  [extra: string]: unknown;
-}
+/** Body of a successful POST /api/v1/calc/glazing (further members may be added in later versions). */
+export const GlazingResponse = z.looseObject({
+  angles: z.array(GlazingAngleRow).describe("One row per requested angle"),
+  hemispherical: GlazingValues,
+  uValue: z.number().describe("Centre-of-glass U-value (EN 673), W/(m²K), unrounded"),
+  warnings: z.array(z.string()),
+  light: LightSummary,
+});
+export type GlazingResponse = z.output<typeof GlazingResponse>;

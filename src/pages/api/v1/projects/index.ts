@@ -1,17 +1,14 @@
-import { rowId } from "@/lib/contracts/common";
-import { InstantPageQuery, queryOf } from "@/lib/contracts/pagination";
-import { ProjectCreateRequest } from "@/lib/contracts/projects";
+import { queryOf } from "@/lib/contracts/pagination";
+import { ProjectCreateRequest, ProjectListQuery } from "@/lib/contracts/projects";
 import { endpoint, json } from "@/lib/server/http";
 import { createProject, projectsPage } from "@/lib/server/services/projects";
-
-const ListQuery = InstantPageQuery.extend({ organizationId: rowId.optional() });
 
 /**
  * One page of the caller's projects (`?limit=`, `?cursor=`, optionally `?organizationId=`), most
  * recently changed first, grouped per organisation; `nextCursor` fetches the next page (null at the end).
  */
 export const GET = endpoint({ auth: "user" }, async ({ user, context }) => {
-  const q = ListQuery.parse(queryOf(context.url));
+  const q = ProjectListQuery.parse(queryOf(context.url));
   const page = await projectsPage(user.id, q);
   return json({
     nextCursor: page.nextCursor,
