@@ -5,7 +5,7 @@
 import { readdirSync, readFileSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
-import Ajv2020 from "ajv/dist/2020";
+import Ajv2020 from "ajv/dist/2020.js";
 import { ROUTES, routeKey } from "@/lib/auth/route-table";
 import { OPERATIONS, TAGS, operationKey, pathParams } from "@/lib/api-docs/operations";
 import { buildOpenApi, documentedRoutes, DIALECT, type JsonSchema, type OpenApiOperation } from "@/lib/api-docs/openapi";
@@ -182,4 +182,17 @@ describe("the examples fit their schemas", () => {
       }
     });
   }
+});
+
+describe("the schemas refuse what the API does not send", () => {
+  it("an answer with a missing field or an undocumented one fails", () => {
+    const ajv = newAjv();
+    const validate = ajv.compile(resolvable(doc.components.schemas.ProjectResponse!));
+    const ok = OPERATIONS.find((o) => operationKey(o) === "GET /api/v1/projects/:id")!.example.response as { project: Record<string, unknown> };
+    expect(validate(ok)).toBe(true);
+    const { name: _name, ...nameless } = ok.project;
+    void _name;
+    expect(validate({ ...ok, project: nameless })).toBe(false);
+    expect(validate({ ...ok, project: { ...ok.project, secret: "x" } })).toBe(false);
+  });
 });
