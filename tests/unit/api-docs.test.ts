@@ -155,9 +155,15 @@ describe("the document is OpenAPI 3.1", () => {
     }
     for (const item of Object.values(doc.paths))
       for (const op of Object.values(item)) {
-        for (const p of (op.parameters ?? []) as { schema: JsonSchema }[]) (ajv.compile(resolvable(p.schema)), compiled++);
+        for (const p of (op.parameters ?? []) as { schema: JsonSchema }[]) {
+          ajv.compile(resolvable(p.schema));
+          compiled++;
+        }
         const content = (op.requestBody as { content?: Record<string, { schema: JsonSchema }> } | undefined)?.content ?? {};
-        for (const c of Object.values(content)) (ajv.compile(resolvable(c.schema)), compiled++);
+        for (const c of Object.values(content)) {
+          ajv.compile(resolvable(c.schema));
+          compiled++;
+        }
       }
     expect(compiled).toBeGreaterThan(100);
   });

@@ -15,7 +15,10 @@ import { OPERATIONS, TAGS, operationKey, pathParams, type Operation } from "./op
 import { API_DOCUMENT_VERSION } from "./version";
 
 export type JsonSchema = Record<string, unknown>;
-type Doc = Record<string, unknown> & { paths: Record<string, Record<string, OpenApiOperation>>; components: { schemas: Record<string, JsonSchema> } };
+type Doc = Record<string, unknown> & {
+  paths: Record<string, Record<string, OpenApiOperation>>;
+  components: { schemas: Record<string, JsonSchema>; securitySchemes: Record<string, unknown> };
+};
 
 export interface OpenApiOperation {
   operationId: string;
@@ -43,6 +46,10 @@ export function keyScopeFor(route: Pick<RouteEntry, "method" | "path" | "writes"
   return route.method === "GET" && !route.writes ? "read" : "read-write";
 }
 
+/** Words for the permissions whose refusals never name them (the endpoints give their own action). */
+const EXTRA_PHRASES: Partial<Record<PermissionKey, string>> = { "export:receive": "receive schedule workbooks" };
+const phraseOf = (p: PermissionKey) => PERMISSION_PHRASES[p] ?? EXTRA_PHRASES[p] ?? p;
+
 const rolesWith = (p: PermissionKey) => ROLE_NAMES.filter((r) => roleCan(r, permissionFor(p))).map((r) => ROLE_LABELS[r].toLowerCase() + "s");
 const list = (xs: string[]) => (xs.length <= 1 ? xs.join("") : `${xs.slice(0, -1).join(", ")} and ${xs.at(-1)}`);
 
@@ -52,7 +59,7 @@ export function accessText(auth: RouteAuth): string {
   if (auth === "user") return "Any signed-in user, or any organisation API key.";
   if (auth === "better-auth") return "Answered by the sign-in service.";
   const permission = auth.permission;
-  const allowed = permission ? `${list(rolesWith(permission))} (${PERMISSION_PHRASES[permission] ?? permission})` : null;
+  const allowed = permission ? `${list(rolesWith(permission))} (${phraseOf(permission)})` : null;
   if ("project" in auth || "option" in auth || "delivery" in auth) {
     const what = "project" in auth ? "the project" : "option" in auth ? "the option's project" : "the delivery's project";
     const sees = `Members who see ${what} (owners, consultants and architects of its organisation; clients when it is shared with them)`;
