@@ -9,6 +9,7 @@ import { z } from "@/lib/contracts/zod";
 import { ROUTES, routeKey, type RouteAuth, type RouteEntry } from "@/lib/auth/route-table";
 import { permissionFor, PERMISSION_PHRASES, ROLE_LABELS, ROLE_NAMES, roleCan, type PermissionKey } from "@/lib/auth/roles";
 import { ProblemSchema } from "@/lib/contracts/problem";
+import { documentedAs } from "@/lib/contracts/wire";
 import { MAX_PAGE_LIMIT, DEFAULT_PAGE_LIMIT } from "@/lib/contracts/pagination";
 import { MAX_UPLOAD_BYTES, UPLOAD_FIELD } from "@/lib/contracts/uploads";
 import { OPERATIONS, TAGS, operationKey, pathParams, type Operation } from "./operations";
@@ -93,10 +94,21 @@ export function errorStatuses(route: RouteEntry, op: Operation): Record<number, 
 
 /** JSON Schema of a zod schema, without its own `$schema` (the document's dialect applies). */
 export function jsonSchemaOf(schema: z.ZodType, io: "input" | "output"): JsonSchema {
-  const { $schema: _dialect, ...rest } = z.toJSONSchema(schema, { io, target: "draft-2020-12", unrepresentable: "any" }) as JsonSchema;
+  const { $schema: _dialect, ...rest } = z.toJSONSchema(schema, {
+    io,
+    target: "draft-2020-12",
+    unrepresentable: "any",
+    // Checks made in code: the shape they accept, with the schema's own limits (e.g. minItems) kept.
+    override: ({ zodSchema, jsonSchema }) => {
+      const shape = documentedAs.get(zodSchema as unknown as z.ZodType);
+      if (shape) Object.assign(jsonSchema, { ...jsonSchemaOf(shape, io), ...pick(jsonSchema, ["minItems", "maxItems"]) });
+    },
+  }) as JsonSchema;
   void _dialect;
   return rest;
 }
+
+const pick = (o: JsonSchema, keys: string[]) => Object.fromEntries(keys.filter((k) => k in o).map((k) => [k, o[k]]));
 
 const ref = (name: string) => ({ $ref: `#/components/schemas/${name}` });
 

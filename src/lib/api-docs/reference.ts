@@ -78,16 +78,15 @@ function constraintsOf(s: JsonSchema): string {
   return out.join(", ");
 }
 
-/** The fields of an object schema as rows; nested objects (and arrays of objects) follow their parent, one level deeper. */
+/**
+ * The fields of an object schema as rows; nested objects (and arrays of objects) follow their parent one level
+ * deeper, and each form of a union of objects gets a heading row ("one of: …") with its fields below it.
+ */
 export function fieldRows(schema: JsonSchema, doc: Doc, depth = 0, prefix = ""): FieldRow[] {
   const s = resolve(schema, doc);
-  const alts = (s.anyOf ?? s.oneOf) as JsonSchema[] | undefined;
-  const objectAlts = alts?.map((a) => resolve(a, doc)).filter((a) => a.type === "object" && a.properties);
-  if (objectAlts?.length)
-    return objectAlts.flatMap((a, i) => [
-      ...(objectAlts.length > 1 ? [altRow(i, depth)] : []),
-      ...fieldRows(a, doc, depth + (objectAlts.length > 1 ? 1 : 0), prefix),
-    ]);
+  const alts = ((s.anyOf ?? s.oneOf) as JsonSchema[] | undefined)?.map((a) => resolve(a, doc)).filter((a) => a.type === "object" && a.properties);
+  if (alts?.length === 1) return fieldRows(alts[0]!, doc, depth, prefix);
+  if (alts?.length) return alts.flatMap((a, i) => [altRow(a, i, depth), ...fieldRows(a, doc, depth + 1, prefix)]);
   const props = (s.properties ?? {}) as Record<string, JsonSchema>;
   const required = new Set((s.required as string[] | undefined) ?? []);
   const rows: FieldRow[] = [];
@@ -104,20 +103,23 @@ export function fieldRows(schema: JsonSchema, doc: Doc, depth = 0, prefix = ""):
     });
     if (depth >= MAX_DEPTH) continue;
     const inner = p.type === "array" ? resolve((p.items as JsonSchema) ?? {}, doc) : p;
-    const innerAlts = ((inner.anyOf ?? inner.oneOf) as JsonSchema[] | undefined)?.map((a) => resolve(a, doc));
-    const nested = inner.properties ? inner : innerAlts?.find((a) => a.type === "object" && a.properties);
-    if (nested) rows.push(...fieldRows(nested, doc, depth + 1, p.type === "array" ? `${name}[]` : name));
+    const hasObject = inner.properties || ((inner.anyOf ?? inner.oneOf) as JsonSchema[] | undefined)?.some((a) => resolve(a, doc).properties);
+    if (hasObject) rows.push(...fieldRows(inner, doc, depth + 1, p.type === "array" ? `${name}[]` : name));
   }
   return rows;
 }
-const altRow = (i: number, depth: number): FieldRow => ({
-  name: `one of: form ${i + 1}`,
-  type: "object",
-  constraints: "",
-  required: false,
-  description: "",
-  depth,
-});
+const altRow = (a: JsonSchema, i: number, depth: number): FieldRow => {
+  const kind = ((a.properties as Record<string, JsonSchema>).kind?.const as string | undefined) ?? null;
+  const keys = ((a.required as string[] | undefined) ?? []).filter((k) => k !== "kind");
+  return {
+    name: `one of: form ${i + 1}`,
+    type: kind ? `kind "${kind}"` : "object",
+    constraints: "",
+    required: false,
+    description: keys.length ? `With ${keys.join(", ")}` : "",
+    depth,
+  };
+};
 
 const shellQuote = (s: string) => `'${s.replace(/'/g, `'\\''`)}'`;
 

@@ -4,6 +4,7 @@
  */
 import { z } from "./zod";
 import { bounded, fraction } from "./numbers";
+import { docShape } from "./wire";
 
 export const MAX_PANES = 6;
 
@@ -118,12 +119,18 @@ export type Gap = z.infer<typeof Gap>;
 
 const DEFAULT_ANGLES = Array.from({ length: 10 }, (_, i) => i * 10);
 
+/** A layer as the API document shows it: a pane (glass properties or measured values) or a gas gap. */
+export const LayerShape = z.union([PhysicalPane, MeasuredPane, Gap]);
+
 export const GlazingRequest = z
   .object({
-    layers: z
-      .array(z.unknown())
-      .min(1, "layers must contain at least one pane")
-      .max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
+    layers: docShape(
+      z
+        .array(z.unknown())
+        .min(1, "layers must contain at least one pane")
+        .max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
+      z.array(LayerShape).describe("Outdoors first: pane, gap, pane, … starting and ending with a pane"),
+    ),
     anglesDeg: z
       .array(bounded("anglesDeg", 0, 90))
       .min(1, "anglesDeg must not be empty")

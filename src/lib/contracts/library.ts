@@ -5,13 +5,16 @@
  */
 import { z } from "./zod";
 import { name, optionalText } from "./common";
-import { GlazingRequest, Pane } from "./glazing";
+import { GlazingRequest, LayerShape, MeasuredPane, Pane, PhysicalPane } from "./glazing";
 import { MakeupValues } from "./results";
 import { UploadInfo } from "./uploads";
-import { id, instant, nextCursor } from "./wire";
+import { docShape, id, instant, nextCursor } from "./wire";
 
 /** Layers, outdoors first, validated exactly as the glazing calculation validates them. */
-const Layers = z.array(z.unknown()).transform((layers, ctx) => {
+const Layers = docShape(
+  z.array(z.unknown()),
+  z.array(LayerShape).describe("Outdoors first: pane, gap, pane, … as POST /calc/glazing takes them"),
+).transform((layers, ctx) => {
   const parsed = GlazingRequest.safeParse({ layers, anglesDeg: [0] });
   if (!parsed.success) {
     for (const issue of parsed.error.issues) ctx.addIssue({ ...issue } as never);
@@ -33,7 +36,10 @@ export const MakeupPatchRequest = z
   });
 export type MakeupPatchRequest = z.output<typeof MakeupPatchRequest>;
 
-const PaneLayer = z.unknown().transform((raw, ctx) => {
+const PaneLayer = docShape(
+  z.unknown(),
+  z.union([PhysicalPane.partial({ kind: true }), MeasuredPane.partial({ kind: true })]).describe("The pane; `kind` may be left out"),
+).transform((raw, ctx) => {
   const parsed = Pane.safeParse(typeof raw === "object" && raw !== null ? { kind: "pane", ...raw } : raw);
   if (!parsed.success) {
     for (const issue of parsed.error.issues) ctx.addIssue({ ...issue } as never);

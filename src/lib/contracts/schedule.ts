@@ -4,7 +4,8 @@
  */
 import { z } from "./zod";
 import { name, plainString, timeZone } from "./common";
-import { GlazingRequest } from "./glazing";
+import { GlazingRequest, LayerShape } from "./glazing";
+import { docShape } from "./wire";
 import { finite, positive } from "./numbers";
 
 /** Surfaces × rows one request may ask for (a full year of hours for 6 surfaces; about 13 MB of JSON). */
@@ -102,7 +103,7 @@ export const ScheduleSurface = z.object({
   name: name("name", 120),
   azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
   tiltDeg: finite("tiltDeg", 0, 180),
-  layers: z.array(z.unknown()),
+  layers: docShape(z.array(z.unknown()), z.array(LayerShape).describe("The make-up, outdoors first, as POST /calc/glazing takes it")),
   shading: Shading.optional(),
   /** Glazed area for the W and kWh columns; default the shading window's area, else none. */
   glazedAreaM2: positive("glazedAreaM2", 10_000).optional(),
@@ -111,7 +112,10 @@ export const ScheduleSurface = z.object({
 export const ScheduleRequest = z
   .object({
     site: Site,
-    surfaces: z.array(z.unknown()).min(1, "surfaces must contain at least one surface").max(MAX_SURFACES, `at most ${MAX_SURFACES} surfaces`),
+    surfaces: docShape(
+      z.array(z.unknown()).min(1, "surfaces must contain at least one surface").max(MAX_SURFACES, `at most ${MAX_SURFACES} surfaces`),
+      z.array(ScheduleSurface),
+    ),
     from: localDate("from"),
     to: localDate("to"),
     stepMinutes: z

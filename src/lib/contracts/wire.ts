@@ -15,3 +15,15 @@ export const id = z.string().describe("Id");
 
 /** Text that may be absent (stored as null). */
 export const nullableText = z.string().nullable();
+
+/**
+ * Schemas whose checks run in code the JSON Schema cannot carry (e.g. layers parsed one by one in a transform,
+ * so that messages name the layer), with the shape the API document shows for them instead.
+ */
+export const documentedAs = new WeakMap<z.ZodType, z.ZodType>();
+
+/** `schema`, shown in the API document with the JSON Schema of `shape`. */
+export function docShape<T extends z.ZodType>(schema: T, shape: z.ZodType): T {
+  documentedAs.set(schema, shape);
+  return schema;
+}
