@@ -13,6 +13,10 @@ test("every operation of the document is on the page with its curl and fetch exa
     Object.entries(item).map(([method, op]) => ({ path, method: method.toUpperCase(), ...op })),
   );
   expect(ops.length).toBeGreaterThan(50);
+  const consoleErrors: string[] = [];
+  page.on("console", (m) => {
+    if (m.type() === "error") consoleErrors.push(m.text());
+  });
   await page.setViewportSize({ width: 1440, height: 900 });
   await page.goto("/docs/api");
   await expect(page.getByRole("heading", { name: "Paneray API reference" })).toBeVisible();
@@ -35,6 +39,9 @@ test("every operation of the document is on the page with its curl and fetch exa
   await expect(glazing.getByRole("cell", { name: "layers", exact: true })).toBeVisible();
   await expect(glazing.getByRole("cell", { name: "hemispherical", exact: true })).toBeVisible();
   expect(await overflow(page)).toBeLessThanOrEqual(0);
+  // The copy buttons hydrate under the Content-Security-Policy (no inline scripts or styles refused).
+  await expect(page.locator('[data-operation="postCalcSchedule"]').getByRole("button", { name: /Copy the curl example/ })).toBeEnabled();
+  expect(consoleErrors).toEqual([]);
   await page.screenshot({ path: test.info().outputPath("api-1440.png") });
   await glazing.screenshot({ path: test.info().outputPath("api-1440-glazing.png") });
 });
