@@ -2,13 +2,17 @@
 // each operation's example request (`x-paneray-example`) is sent with its placeholder ids replaced by rows this
 // test makes in an organisation of its own (so nothing other specs use changes), and the answer must have the
 // documented success status and a body the documented schema accepts (ajv, draft 2020-12); files are opened
-// (the workbooks with exceljs). Deletions run last, after every other example.
+// (the workbooks with exceljs). Each example is sent by the least role its route table rule allows (client,
+// architect, consultant, owner; the client sees the project because it is shared with them), so the examples
+// also show who may call what. Deletions run last, after every other example.
 import { expect, test } from "@playwright/test";
 import Ajv2020 from "ajv/dist/2020.js";
 import ExcelJS from "exceljs";
 import { createHash } from "node:crypto";
 import { EXAMPLE_IDS, EXAMPLE_LAYERS } from "@/lib/api-docs/examples";
-import { ANONYMOUS, addMember, baseUrl, call, createOutsider, type Caller, type Outsider } from "./api-actors";
+import { ANONYMOUS, addMember, baseUrl, call, createOutsider, signInAs, type Caller, type Outsider } from "./api-actors";
+import { ROUTES, type RouteEntry } from "@/lib/auth/route-table";
+import { permissionFor, roleCan, type RoleName } from "@/lib/auth/roles";
 import { uniqueEmail } from "./helpers";
 
 test.describe.configure({ timeout: 240_000 });
@@ -30,6 +34,7 @@ type Doc = { paths: Record<string, Record<string, Op>>; components: { schemas: R
 let doc: Doc;
 let owner: Outsider;
 let invitee: Outsider;
+const callers: Partial<Record<RoleName, Caller>> = {};
 const ids: Record<string, string> = {};
 /** Placeholders of one operation that name another row than elsewhere. */
 const only: Record<string, Record<string, string>> = {};
@@ -47,7 +52,12 @@ test.beforeAll(async () => {
   invitee = await createOutsider("api-invitee");
   const org = owner.organizationId;
   ids.organizationId = org;
-  ids.memberId = (await addMember(owner, org, "client")).memberId;
+  callers.owner = { ...owner, actor: "owner" };
+  for (const role of ["client", "architect", "consultant"] as const) {
+    const m = await addMember(owner, org, role);
+    if (role === "client") ids.memberId = m.memberId;
+    callers[role] = await signInAs(role, m.email, "added-member-2026");
+  }
   ids.otherMemberId = (await addMember(owner, org, "architect")).memberId;
   const me = (await must(owner, "GET", "/api/v1/me")) as { user: { id: string } };
   ids.userId = me.user.id;
@@ -85,6 +95,7 @@ test.beforeAll(async () => {
         option: { id: string };
       }
     ).option.id;
+  await must(owner, "POST", `/api/v1/projects/${ids.projectId}/shares`, { memberId: ids.memberId });
   ids.optionId = await option("Examples option");
   ids.otherOptionId = await option("Examples approved option");
   await must(owner, "POST", `/api/v1/options/${ids.otherOptionId}/decision`, { decision: "approved" });
@@ -112,6 +123,13 @@ test.beforeAll(async () => {
     .not.toBeNull();
 });
 
+/** The least role that the route's rule lets call it on a project shared with the client. */
+function leastRole(route: RouteEntry): RoleName {
+  const rule = route.auth;
+  if (typeof rule !== "object") return "client";
+  return (["client", "architect", "consultant", "owner"] as const).find((r) => !rule.permission || roleCan(r, permissionFor(rule.permission)))!;
+}
+
 /** `value` with every placeholder id replaced (in strings and in object keys). */
 function substitute(value: unknown, map: Record<string, string>): unknown {
   if (typeof value === "string") return Object.entries(map).reduce((s, [from, to]) => s.split(from).join(to), value);
@@ -132,13 +150,17 @@ test("every documented example request answers as documented", async () => {
   const problems: string[] = [];
   let sent = 0;
   let validated = 0;
+  const roles: Record<string, number> = {};
   for (const { path, method, op } of ordered) {
     const ex = op["x-paneray-example"];
     const map = { ...placeholders, ...only[op.operationId] };
     const url =
       path.replace(/\{(\w+)\}/g, (_, n: string) => encodeURIComponent(String(substitute(ex.params?.[n] ?? "", map)))) +
       (ex.query ? `?${new URLSearchParams(substitute(ex.query, map) as Record<string, string>)}` : "");
-    const caller = op.operationId === "postInvitationsByIdAccept" ? invitee : op.security.length === 0 ? ANONYMOUS : owner;
+    const route = ROUTES.find((r) => r.method === method && r.path === path.replace(/\{(\w+)\}/g, ":$1"))!;
+    const role = leastRole(route);
+    const caller = op.operationId === "postInvitationsByIdAccept" ? invitee : op.security.length === 0 ? ANONYMOUS : callers[role]!;
+    roles[caller.actor] = (roles[caller.actor] ?? 0) + 1;
     const [status, success] = Object.entries(op.responses).find(([s]) => Number(s) < 400)!;
     let body: unknown = ex.body === undefined ? undefined : substitute(ex.body, map);
     if (ex.file) {
@@ -182,7 +204,7 @@ test("every documented example request answers as documented", async () => {
     if (!validate(res.body)) problems.push(`${key}: ${ajv.errorsText(validate.errors?.slice(0, 5))}`);
     else validated++;
   }
-  console.log(`api examples: ${sent} requests sent, ${validated} answered as documented`);
+  console.log(`api examples: ${sent} requests sent, ${validated} answered as documented; callers ${JSON.stringify(roles)}`);
   expect(problems).toEqual([]);
   expect(validated).toBe(ops.length);
 });
