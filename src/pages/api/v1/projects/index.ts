@@ -1,6 +1,6 @@
 import { queryOf } from "@/lib/contracts/pagination";
-import { ProjectCreateRequest, ProjectListQuery } from "@/lib/contracts/projects";
-import { endpoint, json } from "@/lib/server/http";
+import { ProjectCreateRequest, ProjectCreatedResponse, ProjectListQuery, ProjectListResponse } from "@/lib/contracts/projects";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { createProject, projectsPage } from "@/lib/server/services/projects";
 
 /**
@@ -10,7 +10,7 @@ import { createProject, projectsPage } from "@/lib/server/services/projects";
 export const GET = endpoint({ auth: "user" }, async ({ user, context }) => {
   const q = ProjectListQuery.parse(queryOf(context.url));
   const page = await projectsPage(user.id, q);
-  return json({
+  return jsonOf(ProjectListResponse, {
     nextCursor: page.nextCursor,
     organizations: page.organizations.map((g) => ({
       organizationId: g.membership.organizationId,
@@ -25,6 +25,6 @@ export const POST = endpoint(
   { auth: { org: "organizationId", from: "body", permission: "project:create" }, body: ProjectCreateRequest },
   async ({ user, body }) => {
     const row = await createProject(body, user.id);
-    return json({ project: row }, 201, { location: `/api/v1/projects/${row.id}` });
+    return jsonOf(ProjectCreatedResponse, { project: row }, 201, { location: `/api/v1/projects/${row.id}` });
   },
 );
