@@ -11,7 +11,7 @@ import "@/lib/server/client-address"; // records each request's socket address f
 const PROTECTED_PAGES = [/^\/dashboard\/?$/, /^\/glazing\/?$/, /^\/library\/?$/, /^\/projects(\/|$)/, /^\/orgs(\/|$)/, /^\/account(\/|$)/];
 
 /** API routes open to anonymous callers. */
-const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, /^\/api\/v1\/invitations\/[^/]+$/];
+const PUBLIC_API = [/^\/api\/health$/, /^\/api\/auth\//, /^\/api\/v1\/signup$/, /^\/api\/v1\/openapi\.json$/, /^\/api\/v1\/invitations\/[^/]+$/];
 
 let trusted: ReadonlySet<string> | undefined;
 const TRUSTED = () => (trusted ??= trustedOrigins(serverEnv()));

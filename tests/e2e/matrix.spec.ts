@@ -464,6 +464,7 @@ const uploadCases = (target: Target): Case[] => [
 const CASES: Case[] = [
   { method: "GET", path: "/api/health", prepare: fixed("/api/health") },
   { method: "GET", path: "/api/v1/me", prepare: fixed("/api/v1/me") },
+  { method: "GET", path: "/api/v1/openapi.json", prepare: fixed("/api/v1/openapi.json") },
   {
     method: "POST",
     path: "/api/v1/signup",

@@ -58,6 +58,7 @@ export const ROUTES: readonly RouteEntry[] = [
   { file: "auth/[...all].ts", path: "/api/auth/:path*", method: "ALL", auth: "better-auth", ok: 200, writes: true, sessionOnly: true },
   { file: "v1/me.ts", path: "/api/v1/me", method: "GET", auth: "user", ok: 200, writes: false },
   { file: "v1/signup.ts", path: "/api/v1/signup", method: "POST", auth: "anonymous", ok: 201, writes: true, sessionOnly: true },
+  { file: "v1/openapi.json.ts", path: "/api/v1/openapi.json", method: "GET", auth: "anonymous", ok: 200, writes: false },
   { file: "v1/calc/glazing.ts", path: "/api/v1/calc/glazing", method: "POST", auth: "user", ok: 200, writes: false },
   { file: "v1/calc/schedule.ts", path: "/api/v1/calc/schedule", method: "POST", auth: "user", ok: 200, writes: false },
   { file: "v1/invitations/[id]/index.ts", path: "/api/v1/invitations/:id", method: "GET", auth: "anonymous", ok: 200, writes: false },

@@ -3,7 +3,8 @@
  * history routes (zod schemas, so that the API document can be generated from them).
  */
 import { z } from "./zod";
-import { name, rowId } from "./common";
+import { name } from "./common";
+import { id, instant, nextCursor } from "./wire";
 import { KEY_SCOPES, type KeyScope } from "@/lib/auth/route-table";
 
 /** Every key starts with this, so that a leaked key is recognisable (e.g. by secret scanners). */
@@ -26,30 +27,27 @@ export const ApiKeyCreateRequest = z.object({
 });
 export type ApiKeyCreateRequest = z.infer<typeof ApiKeyCreateRequest>;
 
-const instant = z.iso.datetime({ offset: true });
-
 /** A key as the list shows it: never the key itself. */
 export const ApiKeyEntry = z.object({
-  id: rowId,
+  id,
   name: z.string(),
   scope: keyScopeSchema,
-  /** The first characters of the key, to recognise it ("pnr_3fA9c…"). */
-  start: z.string(),
-  createdByName: z.string(),
+  start: z.string().describe("The first characters of the key, to recognise it"),
+  createdByName: z.string().describe("The owner who made the key (the key acts as them)"),
   createdAt: instant,
-  lastUsedAt: instant.nullable(),
-  revokedAt: instant.nullable(),
+  lastUsedAt: instant.nullable().describe("Updated at most once a minute; null until first used"),
+  revokedAt: instant.nullable().describe("null while the key works"),
 });
 export type ApiKeyEntry = z.infer<typeof ApiKeyEntry>;
 
 /** GET /api/v1/orgs/:orgId/api-keys: one page of the organisation's keys, newest first, revoked ones included. */
-export const ApiKeyListResponse = z.object({ apiKeys: z.array(ApiKeyEntry), nextCursor: z.string().nullable() });
+export const ApiKeyListResponse = z.object({ apiKeys: z.array(ApiKeyEntry), nextCursor });
 export type ApiKeyListResponse = z.infer<typeof ApiKeyListResponse>;
 
 /** POST /api/v1/orgs/:orgId/api-keys (201): the new key, with the secret `key` shown this once. */
 export const ApiKeyCreatedResponse = z.object({
   apiKey: ApiKeyEntry,
-  key: z.string().startsWith(API_KEY_PREFIX),
+  key: z.string().startsWith(API_KEY_PREFIX).describe("The key itself: shown this once, stored only as a hash"),
 });
 export type ApiKeyCreatedResponse = z.infer<typeof ApiKeyCreatedResponse>;
 
@@ -59,8 +57,8 @@ export type ApiKeyRevokedResponse = z.infer<typeof ApiKeyRevokedResponse>;
 
 /** One event of the organisation's history. */
 export const OrganizationEventEntry = z.object({
-  id: rowId,
-  kind: z.string(),
+  id,
+  kind: z.string().describe("What happened, e.g. api-key.created, api-key.revoked"),
   summary: z.string(),
   actorName: z.string(),
   createdAt: instant,
@@ -68,5 +66,5 @@ export const OrganizationEventEntry = z.object({
 export type OrganizationEventEntry = z.infer<typeof OrganizationEventEntry>;
 
 /** GET /api/v1/orgs/:orgId/history: one page of events, newest first. */
-export const OrganizationHistoryResponse = z.object({ events: z.array(OrganizationEventEntry), nextCursor: z.string().nullable() });
+export const OrganizationHistoryResponse = z.object({ events: z.array(OrganizationEventEntry), nextCursor });
 export type OrganizationHistoryResponse = z.infer<typeof OrganizationHistoryResponse>;

@@ -4,6 +4,7 @@
  */
 import { z } from "./zod";
 import { email, optionalText, plainString, rowId } from "./common";
+import { id, instant, nextCursor } from "./wire";
 
 /** At most this many addresses a delivery (typed addresses and members together). */
 export const MAX_DELIVERY_RECIPIENTS = 50;
@@ -59,31 +60,6 @@ export const splitAddresses = (text: string): string[] =>
     .map((s) => s.trim())
     .filter(Boolean);
 
-export interface DeliveryRecipient {
-  email: string;
-  name?: string;
-  memberId?: string;
-}
-
-export interface DeliveryResponse {
-  id: string;
-  projectId: string;
-  revision: string;
-  recipients: DeliveryRecipient[];
-  message: string | null;
-  status: DeliveryStatus;
-  /** Sending attempts made so far (0 while the first waits in the queue). */
-  attempts: number;
-  /** The SMTP server's (or the workbook's) error of the last failed attempt. */
-  lastError: string | null;
-  createdAt: string;
-  createdBy: string;
-  sentAt: string | null;
-  messageId: string | null;
-  /** The workbook attached, once built (the same bytes on every attempt). */
-  attachment: { fileName: string; sha256: string; sizeBytes: number } | null;
-}
-
 /** Who the outbox form offers as recipients: members of the project's organisation who receive exports. */
 export interface DeliveryMemberChoice {
   memberId: string;
@@ -91,3 +67,32 @@ export interface DeliveryMemberChoice {
   email: string;
   role: string;
 }
+
+// ---- responses ------------------------------------------------------------------------------------------------
+
+export const DeliveryRecipient = z.object({ email: z.string(), name: z.string().optional(), memberId: z.string().optional() });
+export type DeliveryRecipient = z.output<typeof DeliveryRecipient>;
+
+export const DeliveryResponse = z.object({
+  id,
+  projectId: id,
+  revision: z.string(),
+  recipients: z.array(DeliveryRecipient),
+  message: z.string().nullable(),
+  status: z.enum(DELIVERY_STATUSES),
+  attempts: z.number().int().describe("Sending attempts so far (0 while the first waits in the queue)"),
+  lastError: z.string().nullable().describe("The SMTP server's (or the workbook's) error of the last failed attempt"),
+  createdAt: instant,
+  createdBy: z.string(),
+  sentAt: instant.nullable(),
+  messageId: z.string().nullable(),
+  attachment: z
+    .object({ fileName: z.string(), sha256: z.string(), sizeBytes: z.number().int() })
+    .nullable()
+    .describe("The workbook attached, once built (the same bytes on every attempt)"),
+});
+export type DeliveryResponse = z.output<typeof DeliveryResponse>;
+
+export const DeliveryStatusResponse = z.object({ delivery: DeliveryResponse });
+export const DeliveryCreatedResponse = z.object({ id, status: z.enum(DELIVERY_STATUSES), delivery: DeliveryResponse });
+export const DeliveryPageResponse = z.object({ deliveries: z.array(DeliveryResponse).describe("Newest first"), nextCursor });

@@ -4,6 +4,7 @@
  */
 import { z } from "./zod";
 import { bounded, fraction } from "./numbers";
+import { docShape } from "./wire";
 
 export const MAX_PANES = 6;
 
@@ -118,12 +119,18 @@ export type Gap = z.infer<typeof Gap>;
 
 const DEFAULT_ANGLES = Array.from({ length: 10 }, (_, i) => i * 10);
 
+/** A layer as the API document shows it: a pane (glass properties or measured values) or a gas gap. */
+export const LayerShape = z.union([PhysicalPane, MeasuredPane, Gap]);
+
 export const GlazingRequest = z
   .object({
-    layers: z
-      .array(z.unknown())
-      .min(1, "layers must contain at least one pane")
-      .max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
+    layers: docShape(
+      z
+        .array(z.unknown())
+        .min(1, "layers must contain at least one pane")
+        .max(2 * MAX_PANES - 1, `at most ${MAX_PANES} panes (${2 * MAX_PANES - 1} layers)`),
+      z.array(LayerShape).describe("Outdoors first: pane, gap, pane, … starting and ending with a pane"),
+    ),
     anglesDeg: z
       .array(bounded("anglesDeg", 0, 90))
       .min(1, "anglesDeg must not be empty")
@@ -166,23 +173,26 @@ export const GlazingRequest = z
 export type GlazingRequest = z.output<typeof GlazingRequest>;
 export type GlazingRequestInput = z.input<typeof GlazingRequest>;
 
-/** The values of a make-up at one angle or averaged over the hemisphere. */
-export interface GlazingValues {
-  solarTransmittance: number;
-  solarReflectanceFront: number;
-  solarReflectanceBack: number;
-  /** One per pane, outdoor first, of solar radiation incident from outdoors. */
-  layerAbsorptance: number[];
-  gValue: number;
-  /** null unless every pane has measured visible values */
-  visibleTransmittance: number | null;
-  visibleReflectanceFront: number | null;
-  visibleReflectanceBack: number | null;
-}
+// ---- responses ------------------------------------------------------------------------------------------------
 
-export interface GlazingAngleRow extends GlazingValues {
-  angleDeg: number;
-}
+const share = z.number().describe("0–1");
+const lightValue = z.number().nullable().describe("0–1; null unless every pane has measured visible values");
+
+/** The values of a make-up at one angle or averaged over the hemisphere. */
+export const GlazingValues = z.object({
+  solarTransmittance: share,
+  solarReflectanceFront: share,
+  solarReflectanceBack: share,
+  layerAbsorptance: z.array(z.number()).describe("One per pane, outdoor first, of solar radiation incident from outdoors"),
+  gValue: z.number().describe("Total solar energy transmittance (EN 410), 0–1"),
+  visibleTransmittance: lightValue,
+  visibleReflectanceFront: lightValue,
+  visibleReflectanceBack: lightValue,
+});
+export type GlazingValues = z.output<typeof GlazingValues>;
+
+export const GlazingAngleRow = GlazingValues.extend({ angleDeg: z.number().describe("Angle of incidence, degrees") });
+export type GlazingAngleRow = z.output<typeof GlazingAngleRow>;
 
 /**
  * The make-up's light transmittance at normal incidence. "measured": every pane has its three light values
@@ -190,20 +200,21 @@ export interface GlazingAngleRow extends GlazingValues {
  * reflectance is unknown and τv is exact only when no unknown reflectance enters it (a single pane), a
  * range otherwise; "not given": some pane has no light values.
  */
-export interface LightSummary {
-  basis: "measured" | "transmittance only" | "not given";
-  transmittance: number | null;
-  range: { low: number; high: number } | null;
-  reflectanceFront: number | null;
-  reflectanceBack: number | null;
-}
+export const LightSummary = z.object({
+  basis: z.enum(["measured", "transmittance only", "not given"]),
+  transmittance: z.number().nullable(),
+  range: z.object({ low: z.number(), high: z.number() }).nullable(),
+  reflectanceFront: z.number().nullable(),
+  reflectanceBack: z.number().nullable(),
+});
+export type LightSummary = z.output<typeof LightSummary>;
 
-export interface GlazingResponse {
-  angles: GlazingAngleRow[];
-  hemispherical: GlazingValues;
-  /** Centre-of-glass U-value, W/(m²K), unrounded. */
-  uValue: number;
-  warnings: string[];
-  light: LightSummary;
-  [extra: string]: unknown;
-}
+/** Body of a successful POST /api/v1/calc/glazing (further members may be added in later versions). */
+export const GlazingResponse = z.looseObject({
+  angles: z.array(GlazingAngleRow).describe("One row per requested angle"),
+  hemispherical: GlazingValues,
+  uValue: z.number().describe("Centre-of-glass U-value (EN 673), W/(m²K), unrounded"),
+  warnings: z.array(z.string()),
+  light: LightSummary,
+});
+export type GlazingResponse = z.output<typeof GlazingResponse>;

@@ -1,7 +1,8 @@
 /** Requests and answers of a façade's options: candidate make-ups from the library, named by the consultant. */
 import { z } from "./zod";
 import { name, rowId } from "./common";
-import type { MakeupValues } from "./results";
+import { MakeupValues } from "./results";
+import { id, instant } from "./wire";
 
 export const OptionCreateRequest = z.object({ facadeId: rowId, makeupId: rowId, name: name("Option name", 120) });
 export type OptionCreateRequest = z.infer<typeof OptionCreateRequest>;
@@ -26,23 +27,31 @@ export type OptionPatchRequest = z.infer<typeof OptionPatchRequest>;
 
 export type OptionStatus = "proposed" | "approved" | "rejected";
 
-export interface OptionEntry {
-  id: string;
-  projectId: string;
-  facadeId: string;
-  name: string;
-  position: number;
-  status: OptionStatus;
-  version: number;
-  makeupId: string;
-  makeupName: string;
-  /** The revision the option points at. */
-  makeupRevision: number;
-  /** The library's newest revision of the make-up; greater than makeupRevision when the library changed since. */
-  latestMakeupRevision: number;
-  description: string;
-  layers: unknown[];
-  values: MakeupValues;
-  createdAt: string;
-  updatedAt: string;
-}
+// ---- responses ------------------------------------------------------------------------------------------------
+
+export const OptionEntry = z.object({
+  id,
+  projectId: id,
+  facadeId: id,
+  name: z.string(),
+  position: z.number().int(),
+  status: z.enum(["proposed", "approved", "rejected"]),
+  version: z.number().int().describe("Send it back with PATCH (409 when someone changed the option meanwhile)"),
+  makeupId: id,
+  makeupName: z.string(),
+  makeupRevision: z.number().int().describe("The make-up revision the option points at"),
+  latestMakeupRevision: z.number().int().describe("The library's newest revision; greater than makeupRevision when the library changed since"),
+  description: z.string(),
+  layers: z.array(z.unknown()),
+  values: MakeupValues,
+  createdAt: instant,
+  updatedAt: instant,
+});
+export type OptionEntry = z.output<typeof OptionEntry>;
+
+export const OptionListResponse = z.object({ options: z.array(OptionEntry) });
+export const OptionCreatedResponse = z.object({ option: OptionEntry });
+export const OptionUpdatedResponse = z.object({
+  option: OptionEntry,
+  approvalWithdrawn: z.boolean().describe("True when the change sent an approved option back to proposed"),
+});

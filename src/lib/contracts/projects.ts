@@ -2,6 +2,9 @@ import { z } from "./zod";
 import { name, optionalText, rowId, timeZone } from "./common";
 import { finite, positive } from "./numbers";
 import { shadingDevices } from "./schedule";
+import { ROLE_NAMES } from "@/lib/auth/roles";
+import { id, instant, nextCursor } from "./wire";
+import { InstantPageQuery } from "./pagination";
 
 /** An empty number field (a form's NaN, "" or null) is "not given". */
 const optionalNumber = <T extends z.ZodType>(schema: T) =>
@@ -92,11 +95,72 @@ export type ProjectUpdateRequest = z.infer<typeof ProjectUpdateRequest>;
 
 export const ShareRequest = z.object({ memberId: rowId });
 
+// ---- responses ------------------------------------------------------------------------------------------------
+
+/** A project as stored. */
+export const ProjectView = z.object({
+  id,
+  organizationId: id,
+  name: z.string(),
+  reference: z.string().nullable().describe("The firm's own job number"),
+  buildingName: z.string().nullable(),
+  siteName: z.string(),
+  latitudeDeg: z.number(),
+  longitudeDeg: z.number(),
+  timeZone: z.string().describe("IANA time zone of the site"),
+  elevationM: z.number(),
+  groundAlbedo: z.number(),
+  skyModel: z.enum(SKY_MODELS),
+  linkeTurbidity: z.array(z.number()).nullable().describe("Twelve monthly values, January first; null = the engine's default"),
+  description: z.string().nullable(),
+  createdById: z.string().nullable(),
+  createdAt: instant,
+  updatedAt: instant,
+});
+
+/** A façade as stored. */
+export const FacadeView = z.object({
+  id,
+  projectId: id,
+  name: z.string(),
+  azimuthDeg: z.number().describe("Outward normal, degrees clockwise from north"),
+  tiltDeg: z.number().describe("From horizontal: 90 = vertical wall"),
+  glazedAreaM2: z.number().nullable(),
+  windowWidthM: z.number().nullable(),
+  windowHeightM: z.number().nullable(),
+  shading: z
+    .looseObject({ overhang: z.unknown().optional(), fins: z.unknown().optional(), horizonDeg: z.number().optional() })
+    .nullable()
+    .describe("Shading devices around the typical window; null = none"),
+  position: z.number().int(),
+  createdAt: instant,
+  updatedAt: instant,
+});
+
+export const ProjectListResponse = z.object({
+  nextCursor,
+  organizations: z.array(
+    z.object({
+      organizationId: id,
+      organizationName: z.string(),
+      role: z.enum(ROLE_NAMES),
+      projects: z.array(ProjectView.extend({ facadeCount: z.number().int() })).describe("Most recently changed first"),
+    }),
+  ),
+});
+export const ProjectCreatedResponse = z.object({ project: ProjectView });
+export const ProjectResponse = z.object({
+  project: ProjectView,
+  facades: z.array(FacadeView),
+  role: z.enum(ROLE_NAMES).describe("The caller's role"),
+});
+export const ProjectUpdatedResponse = z.object({ project: ProjectView, facades: z.array(FacadeView) });
+
 /** A member who sees only shared projects, and whether they see this one (the shares endpoints' rows). */
-export interface ShareEntry {
-  memberId: string;
-  name: string;
-  email: string;
-  role: string;
-  shared: boolean;
-}
+export const ShareEntry = z.object({ memberId: id, name: z.string(), email: z.string(), role: z.string(), shared: z.boolean() });
+export type ShareEntry = z.output<typeof ShareEntry>;
+export const SharesPageResponse = z.object({ shares: z.array(ShareEntry), nextCursor });
+export const ShareListResponse = z.object({ shares: z.array(ShareEntry) });
+
+/** GET /projects: a page, optionally of one organisation. */
+export const ProjectListQuery = InstantPageQuery.extend({ organizationId: rowId.optional() });

@@ -48,11 +48,27 @@ export type RequirementsRequest = z.infer<typeof RequirementsRequest>;
 
 export type FlagStatus = "pass" | "fail" | "unknown";
 
+// ---- responses ------------------------------------------------------------------------------------------------
+
+const requirementKey = z.enum(["maxGValue", "minLightTransmittance", "maxUValue", "maxPeakTransmittedWm2", "maxAnnualSolarGainKWhm2"]);
+// A key added to Limits but not here fails to compile.
+const _everyKeyListed: Exclude<RequirementKey, z.output<typeof requirementKey>> extends never ? true : never = true;
+void _everyKeyListed;
+
 /** One requirement checked for one option: margin = limit − value for maxima, value − limit for minima (≥ 0 passes); null when unknown. */
-export interface RequirementFlag {
-  requirement: RequirementKey;
-  limit: number;
-  value: number | null;
-  status: FlagStatus;
-  margin: number | null;
-}
+export const RequirementFlag = z.object({
+  requirement: requirementKey,
+  limit: z.number(),
+  value: z.number().nullable(),
+  status: z.enum(["pass", "fail", "unknown"]),
+  margin: z.number().nullable(),
+});
+export type RequirementFlag = z.output<typeof RequirementFlag>;
+
+/** GET and PUT /projects/:id/requirements: the limits, per-façade overrides (by façade id) and the version to send back. */
+export const RequirementsResponse = z.object({
+  project: Limits,
+  facades: z.record(z.string(), Limits).describe("Overrides by façade id"),
+  version: z.number().int().describe("0 while nothing has been entered"),
+  updatedAt: z.string().nullable(),
+});

@@ -1,141 +1,151 @@
-/** Wire types of GET /api/v1/projects/:id/results and of issued revisions' snapshots. */
-import type { GlazingAngleRow, GlazingValues, LightSummary } from "./glazing";
-import type { IrradianceSource } from "./uploads";
-import type { Limits, RequirementFlag } from "./requirements";
+/** Wire types of GET /api/v1/projects/:id/results and /compare, and of issued revisions and their snapshots. */
+import { z } from "./zod";
+import { GlazingAngleRow, GlazingValues, LightSummary } from "./glazing";
+import { IrradianceSource } from "./uploads";
+import { Limits, RequirementFlag } from "./requirements";
+import { id, instant } from "./wire";
 
 /** What a saved make-up revision stores as its values (computed when it is saved). */
-export interface MakeupValues {
-  normal: GlazingValues;
-  hemispherical: GlazingValues;
-  /** Centre-of-glass U-value, W/(m²K). */
-  uValue: number;
-  warnings: string[];
-  /** Light transmittance at normal incidence with its basis (absent in values stored before it was kept). */
-  light?: LightSummary;
-}
+export const MakeupValues = z.object({
+  normal: GlazingValues.describe("At normal incidence"),
+  hemispherical: GlazingValues.describe("Averaged over the hemisphere (diffuse radiation)"),
+  uValue: z.number().describe("Centre-of-glass U-value (EN 673), W/(m²K)"),
+  warnings: z.array(z.string()),
+  light: LightSummary.optional().describe("Light transmittance at normal incidence with its basis (absent in values stored before it was kept)"),
+});
+export type MakeupValues = z.output<typeof MakeupValues>;
 
-export interface OptionResult {
-  optionId: string;
-  name: string;
-  status: "proposed" | "approved" | "rejected";
-  makeupId: string;
-  makeupRevision: number;
-  makeupName: string;
-  description: string;
-  values: MakeupValues;
-  annual: { transmittedKWhm2: number; solarGainKWhm2: number };
-  peak: { transmittedWm2: number; at: string | null };
-  /** Twelve monthly sums, January first, kWh/m². */
-  monthly: { transmittedKWhm2: number[]; solarGainKWhm2: number[] };
-  flags: RequirementFlag[];
-  /** Set when the stored make-up cannot be computed (its layers no longer validate); the figures are then zero. */
-  problem?: string;
-  /** SHA-256 of this option's inputs (make-up layers, façade, site, year, engine); its cache key. */
-  inputsKey?: string;
-}
+const optionStatus = z.enum(["proposed", "approved", "rejected"]);
+const annual = z.object({ transmittedKWhm2: z.number(), solarGainKWhm2: z.number() }).describe("Yearly sums, kWh/m²");
+const peak = z.object({ transmittedWm2: z.number(), at: z.string().nullable().describe("The hour of the peak, local time with offset") });
+const monthly = z
+  .object({ transmittedKWhm2: z.array(z.number()), solarGainKWhm2: z.array(z.number()) })
+  .describe("Twelve monthly sums, January first, kWh/m²");
+/** A façade's window with its shading devices as the engine took them; null = unshaded. */
+const shading = z.unknown().optional().describe("The façade's typical window and shading devices as the engine took them (null = unshaded)");
 
-export interface FacadeResult {
-  facadeId: string;
-  name: string;
-  azimuthDeg: number;
-  tiltDeg: number;
-  glazedAreaM2: number | null;
-  /** The limits that apply to this façade (project limits with its overrides). */
-  limits: Limits;
-  options: OptionResult[];
-  /** The façade's typical window and shading devices as the engine took them (null = unshaded). */
-  shading?: unknown;
-}
+export const OptionResult = z.object({
+  optionId: id,
+  name: z.string(),
+  status: optionStatus,
+  makeupId: id,
+  makeupRevision: z.number().int(),
+  makeupName: z.string(),
+  description: z.string(),
+  values: MakeupValues,
+  annual,
+  peak,
+  monthly,
+  flags: z.array(RequirementFlag),
+  problem: z.string().optional().describe("Set when the stored make-up cannot be computed; the figures are then zero"),
+  inputsKey: z.string().optional().describe("SHA-256 of this option's inputs (make-up layers, façade, site, year, engine)"),
+});
+export type OptionResult = z.output<typeof OptionResult>;
 
-export interface ResultsResponse {
-  projectId: string;
-  year: number;
-  /** SHA-256 of everything the results were computed from; equal inputs give equal keys. */
-  inputsKey: string;
-  computedAt: string;
-  facades: FacadeResult[];
-  /** The site and sky the results were computed for, shown beside them. */
-  site?: RevisionSnapshot["site"];
-  /** How many façade × option results came from the cache and how many were computed for this answer. */
-  cache?: { hits: number; misses: number };
-  /** The irradiance the figures come from: the clear-sky model, or the project's weather file and its period. */
-  irradiance?: IrradianceSource;
-}
+export const FacadeResult = z.object({
+  facadeId: id,
+  name: z.string(),
+  azimuthDeg: z.number(),
+  tiltDeg: z.number(),
+  glazedAreaM2: z.number().nullable(),
+  limits: Limits.describe("The limits that apply to this façade (project limits with its overrides)"),
+  options: z.array(OptionResult),
+  shading,
+});
+export type FacadeResult = z.output<typeof FacadeResult>;
+
+export const SiteSnapshot = z.object({
+  name: z.string(),
+  latitudeDeg: z.number(),
+  longitudeDeg: z.number(),
+  timeZone: z.string(),
+  elevationM: z.number(),
+  groundAlbedo: z.number(),
+  skyModel: z.string(),
+  linkeTurbidity: z.array(z.number()).nullable(),
+});
+
+export const ResultsResponse = z.object({
+  projectId: id,
+  year: z.number().int(),
+  inputsKey: z.string().describe("SHA-256 of everything the results were computed from; equal inputs give equal keys"),
+  computedAt: instant,
+  facades: z.array(FacadeResult),
+  site: SiteSnapshot.optional(),
+  cache: z
+    .object({ hits: z.number().int(), misses: z.number().int() })
+    .optional()
+    .describe("Façade × option results from the cache and computed now"),
+  irradiance: IrradianceSource.optional(),
+});
+export type ResultsResponse = z.output<typeof ResultsResponse>;
 
 /** One approved option in an issued revision, frozen at issue time. */
-export interface RevisionFacadeSnapshot {
-  facadeId: string;
-  facadeName: string;
-  azimuthDeg: number;
-  tiltDeg: number;
-  optionId: string;
-  optionName: string;
-  makeupId: string;
-  makeupRevision: number;
-  makeupName: string;
-  description: string;
-  layers: unknown[];
-  values: MakeupValues;
-  annual: OptionResult["annual"];
-  peak: OptionResult["peak"];
-  monthly: OptionResult["monthly"];
-  flags: RequirementFlag[];
-  /** The façade's glazed area (m²) and window with shading devices as the engine took them when issued (absent in revisions issued before they were kept). */
-  glazedAreaM2?: number | null;
-  shading?: unknown;
-}
+export const RevisionFacadeSnapshot = z.object({
+  facadeId: id,
+  facadeName: z.string(),
+  azimuthDeg: z.number(),
+  tiltDeg: z.number(),
+  optionId: id,
+  optionName: z.string(),
+  makeupId: id,
+  makeupRevision: z.number().int(),
+  makeupName: z.string(),
+  description: z.string(),
+  layers: z.array(z.unknown()).describe("The make-up's layers as POST /calc/glazing takes them"),
+  values: MakeupValues,
+  annual,
+  peak,
+  monthly,
+  flags: z.array(RequirementFlag),
+  glazedAreaM2: z.number().nullable().optional(),
+  shading,
+});
+export type RevisionFacadeSnapshot = z.output<typeof RevisionFacadeSnapshot>;
 
-export interface RevisionSnapshot {
-  year: number;
-  site: {
-    name: string;
-    latitudeDeg: number;
-    longitudeDeg: number;
-    timeZone: string;
-    elevationM: number;
-    groundAlbedo: number;
-    skyModel: string;
-    linkeTurbidity: number[] | null;
-  };
-  facades: RevisionFacadeSnapshot[];
-  /** Where the irradiance came from when issued (absent in revisions issued before it was kept: clear sky). */
-  irradiance?: IrradianceSource;
-  /**
-   * The weather rows the results were computed from, kept with the revision so that its workbook's hourly
-   * sheets can be computed again after the project's weather file is replaced. Stored only; the API leaves it out.
-   */
-  weather?: { time: string; ghi: number; dni: number; dhi: number }[];
-  /** Façades without an approved option when the revision was issued. */
-  unapproved?: { facadeId: string; name: string }[];
-}
+const unapproved = z.array(z.object({ facadeId: id, name: z.string() })).describe("Façades without an approved option, left out of the revision");
 
-export interface RevisionResponse {
-  revision: string;
-  sequence: number;
-  note: string | null;
-  issuedAt: string;
-  issuedBy: string;
-  facades: RevisionFacadeSnapshot[];
-  snapshot: RevisionSnapshot;
-  /** Façades without an approved option, left out of this revision. */
-  unapproved?: { facadeId: string; name: string }[];
-}
+export const RevisionSnapshot = z.object({
+  year: z.number().int(),
+  site: SiteSnapshot,
+  facades: z.array(RevisionFacadeSnapshot),
+  irradiance: IrradianceSource.optional(),
+  /** The weather rows the results were computed from; stored with the revision, never in the API's answers. */
+  weather: z.array(z.object({ time: z.string(), ghi: z.number(), dni: z.number(), dhi: z.number() })).optional(),
+  unapproved: unapproved.optional(),
+});
+export type RevisionSnapshot = z.output<typeof RevisionSnapshot>;
 
-/** One option of GET /projects/:id/compare: its results, angular curves and what a day's profile needs. */
-export interface CompareOption extends OptionResult {
-  facadeId: string;
-  facadeName: string;
-  /** Angular values of the stored layers (as POST /calc/glazing gives them), 0° to 90° by 5°. */
-  angles: GlazingAngleRow[];
-  /** The surface as POST /calc/schedule takes it, for the hourly profile of a chosen day. */
-  surface: { name: string; azimuthDeg: number; tiltDeg: number; layers: unknown[]; shading?: unknown };
-}
+export const RevisionResponse = z.object({
+  revision: z.string().describe("The revision's letter: A, B, … Z, AA, …"),
+  sequence: z.number().int(),
+  note: z.string().nullable(),
+  issuedAt: instant,
+  issuedBy: z.string(),
+  facades: z.array(RevisionFacadeSnapshot),
+  snapshot: RevisionSnapshot,
+  unapproved: unapproved.optional(),
+});
+export type RevisionResponse = z.output<typeof RevisionResponse>;
 
-export interface CompareResponse {
-  projectId: string;
-  year: number;
-  inputsKey: string;
-  site: RevisionSnapshot["site"];
-  irradiance?: IrradianceSource;
-  options: CompareOption[];
-}
+export const RevisionListResponse = z.object({ revisions: z.array(RevisionResponse).describe("Newest first") });
+
+export const CompareOption = OptionResult.extend({
+  facadeId: id,
+  facadeName: z.string(),
+  angles: z.array(GlazingAngleRow).describe("Angular values of the stored layers, 0° to 90° by 5°"),
+  surface: z
+    .object({ name: z.string(), azimuthDeg: z.number(), tiltDeg: z.number(), layers: z.array(z.unknown()), shading })
+    .describe("The surface as POST /calc/schedule takes it"),
+});
+export type CompareOption = z.output<typeof CompareOption>;
+
+export const CompareResponse = z.object({
+  projectId: id,
+  year: z.number().int(),
+  inputsKey: z.string(),
+  site: SiteSnapshot,
+  irradiance: IrradianceSource.optional(),
+  options: z.array(CompareOption),
+});
+export type CompareResponse = z.output<typeof CompareResponse>;

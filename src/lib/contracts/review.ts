@@ -1,6 +1,7 @@
 /** Comments on façade options, approvals and rejections, and the project's history: requests and wire types. */
 import { z } from "./zod";
 import { optionalText, rowId, text } from "./common";
+import { id, instant, nextCursor } from "./wire";
 
 export const COMMENT_MAX = 5000;
 export const DECISION_NOTE_MAX = 2000;
@@ -17,48 +18,55 @@ export const DecisionRequest = z.object({
 });
 export type DecisionRequest = z.infer<typeof DecisionRequest>;
 
-export interface CommentView {
-  id: string;
-  optionId: string;
-  parentId: string | null;
-  author: { id: string | null; name: string };
-  body: string;
-  createdAt: string;
-}
+// ---- responses ------------------------------------------------------------------------------------------------
 
-export interface DecisionView {
-  id: string;
-  optionId: string;
-  decision: "approved" | "rejected";
-  note: string | null;
-  decidedBy: string;
-  at: string;
-}
+const optionStatus = z.enum(["proposed", "approved", "rejected"]);
 
-export interface OptionStatusView {
-  id: string;
-  facadeId: string;
-  name: string;
-  status: "proposed" | "approved" | "rejected";
-  version: number;
-}
+export const CommentView = z.object({
+  id,
+  optionId: id,
+  parentId: z.string().nullable().describe("The comment this one answers"),
+  author: z.object({ id: z.string().nullable(), name: z.string() }),
+  body: z.string(),
+  createdAt: instant,
+});
+export type CommentView = z.output<typeof CommentView>;
 
-export interface DecisionResponse {
-  option: OptionStatusView;
-  /** The option of the same façade that was approved before and is now back to "proposed". */
-  previouslyApproved?: OptionStatusView;
-  decisions: DecisionView[];
-}
+export const DecisionView = z.object({
+  id,
+  optionId: id,
+  decision: z.enum(["approved", "rejected"]),
+  note: z.string().nullable(),
+  decidedBy: z.string(),
+  at: instant,
+});
+export type DecisionView = z.output<typeof DecisionView>;
 
-export interface HistoryItem {
-  id: string;
-  kind: string;
-  summary: string;
-  actor: string;
-  at: string;
-  detail: unknown;
-}
-export interface HistoryResponse {
-  items: HistoryItem[];
-  nextCursor: string | null;
-}
+export const OptionStatusView = z.object({ id, facadeId: id, name: z.string(), status: optionStatus, version: z.number().int() });
+export type OptionStatusView = z.output<typeof OptionStatusView>;
+
+export const DecisionResponse = z.object({
+  option: OptionStatusView,
+  previouslyApproved: OptionStatusView.optional().describe("The option of the same façade approved before, now back to proposed"),
+  decisions: z.array(DecisionView),
+});
+export type DecisionResponse = z.output<typeof DecisionResponse>;
+
+export const HistoryItem = z.object({
+  id,
+  kind: z.string().describe('What happened, e.g. "option.approved"'),
+  summary: z.string(),
+  actor: z.string(),
+  at: instant,
+  detail: z.unknown(),
+});
+export type HistoryItem = z.output<typeof HistoryItem>;
+
+export const HistoryResponse = z.object({ items: z.array(HistoryItem).describe("Newest first"), nextCursor });
+export type HistoryResponse = z.output<typeof HistoryResponse>;
+
+export const CommentsResponse = z.object({
+  status: optionStatus,
+  comments: z.array(CommentView).describe("Oldest first"),
+  decisions: z.array(DecisionView),
+});

@@ -4,7 +4,8 @@
  */
 import { z } from "./zod";
 import { name, plainString, timeZone } from "./common";
-import { GlazingRequest } from "./glazing";
+import { GlazingRequest, LayerShape } from "./glazing";
+import { docShape } from "./wire";
 import { finite, positive } from "./numbers";
 
 /** Surfaces × rows one request may ask for (a full year of hours for 6 surfaces; about 13 MB of JSON). */
@@ -102,7 +103,7 @@ export const ScheduleSurface = z.object({
   name: name("name", 120),
   azimuthDeg: finite("azimuthDeg", 0, 360).transform((v) => (v === 360 ? 0 : v)),
   tiltDeg: finite("tiltDeg", 0, 180),
-  layers: z.array(z.unknown()),
+  layers: docShape(z.array(z.unknown()), z.array(LayerShape).describe("The make-up, outdoors first, as POST /calc/glazing takes it")),
   shading: Shading.optional(),
   /** Glazed area for the W and kWh columns; default the shading window's area, else none. */
   glazedAreaM2: positive("glazedAreaM2", 10_000).optional(),
@@ -111,7 +112,10 @@ export const ScheduleSurface = z.object({
 export const ScheduleRequest = z
   .object({
     site: Site,
-    surfaces: z.array(z.unknown()).min(1, "surfaces must contain at least one surface").max(MAX_SURFACES, `at most ${MAX_SURFACES} surfaces`),
+    surfaces: docShape(
+      z.array(z.unknown()).min(1, "surfaces must contain at least one surface").max(MAX_SURFACES, `at most ${MAX_SURFACES} surfaces`),
+      z.array(ScheduleSurface),
+    ),
     from: localDate("from"),
     to: localDate("to"),
     stepMinutes: z
@@ -152,65 +156,70 @@ export const ScheduleRequest = z
 export type ScheduleRequest = z.output<typeof ScheduleRequest>;
 export type ScheduleRequestInput = z.input<typeof ScheduleRequest>;
 
-export interface ScheduleRow {
-  time: string;
-  sunAltitudeDeg: number;
-  sunAzimuthDeg: number;
-  incidenceDeg: number;
-  beamTransmittance: number;
-  sunlitFraction: number;
-  beamIncidentWm2: number;
-  diffuseIncidentWm2: number;
-  transmittedWm2: number;
-  solarGainWm2: number;
-  transmittedW?: number | null;
-  solarGainW?: number | null;
-}
+// ---- responses ------------------------------------------------------------------------------------------------
 
-export interface PeriodTotals {
-  incidentKWhPerM2: number;
-  transmittedKWhPerM2: number;
-  solarGainKWhPerM2: number;
-  transmittedKWh: number | null;
-  solarGainKWh: number | null;
-  peak: { time: string; transmittedWm2: number; solarGainWm2: number } | null;
-}
+export const ScheduleRow = z.object({
+  time: z.string().describe("Local time with offset: the midpoint of the step the values stand for"),
+  sunAltitudeDeg: z.number(),
+  sunAzimuthDeg: z.number(),
+  incidenceDeg: z.number().describe("Angle between the sun and the surface's normal"),
+  beamTransmittance: z.number(),
+  sunlitFraction: z.number().describe("Share of the window in sun (shading devices, horizon)"),
+  beamIncidentWm2: z.number(),
+  diffuseIncidentWm2: z.number(),
+  transmittedWm2: z.number(),
+  solarGainWm2: z.number(),
+  transmittedW: z.number().nullable().optional().describe("With a glazed area"),
+  solarGainW: z.number().nullable().optional().describe("With a glazed area"),
+});
+export type ScheduleRow = z.output<typeof ScheduleRow>;
+
+export const PeriodTotals = z.object({
+  incidentKWhPerM2: z.number(),
+  transmittedKWhPerM2: z.number(),
+  solarGainKWhPerM2: z.number(),
+  transmittedKWh: z.number().nullable(),
+  solarGainKWh: z.number().nullable(),
+  peak: z.object({ time: z.string(), transmittedWm2: z.number(), solarGainWm2: z.number() }).nullable(),
+});
+export type PeriodTotals = z.output<typeof PeriodTotals>;
 
 /** Daily, monthly and whole-period totals of one surface. */
-export interface ScheduleSurfaceTotals {
-  daily: (PeriodTotals & { date: string })[];
-  monthly: (PeriodTotals & { month: string })[];
-  period: PeriodTotals & { from: string; to: string };
-}
+export const ScheduleSurfaceTotals = z.object({
+  daily: z.array(PeriodTotals.extend({ date: z.string() })),
+  monthly: z.array(PeriodTotals.extend({ month: z.string() })),
+  period: PeriodTotals.extend({ from: z.string(), to: z.string() }),
+});
+export type ScheduleSurfaceTotals = z.output<typeof ScheduleSurfaceTotals>;
 
 /** One surface of a schedule response: its glazing's summary values, its rows and totals. */
-export interface ScheduleSurfaceResult {
-  name: string;
-  azimuthDeg: number;
-  tiltDeg: number;
-  glazedAreaM2: number | null;
-  normalTransmittance: number;
-  diffuseTransmittance: number;
-  normalGValue: number;
-  diffuseGValue: number;
-  /** Centre-of-glass U-value, W/(m²K). */
-  uValue: number;
-  rows: ScheduleRow[];
-  totals: ScheduleSurfaceTotals;
-}
+export const ScheduleSurfaceResult = z.object({
+  name: z.string(),
+  azimuthDeg: z.number(),
+  tiltDeg: z.number(),
+  glazedAreaM2: z.number().nullable(),
+  normalTransmittance: z.number(),
+  diffuseTransmittance: z.number(),
+  normalGValue: z.number(),
+  diffuseGValue: z.number(),
+  uValue: z.number().describe("Centre-of-glass U-value, W/(m²K)"),
+  rows: z.array(ScheduleRow),
+  totals: ScheduleSurfaceTotals,
+});
+export type ScheduleSurfaceResult = z.output<typeof ScheduleSurfaceResult>;
 
 /** Body of a successful POST /api/v1/calc/schedule. */
-export interface ScheduleResponse {
-  site: { latitudeDeg: number; longitudeDeg: number; timeZone: string; elevationM: number };
-  from: string;
-  to: string;
-  stepMinutes: number;
-  timeZone: string;
-  rowsPerSurface: number;
-  irradiance: "weather series" | "clear sky";
-  sky: { model: "perez" | "hay-davies" | "isotropic"; albedo: number };
-  /** The models used, in words, one entry per step of the computation. */
-  methods: Record<string, string>;
-  surfaces: ScheduleSurfaceResult[];
-  warnings: string[];
-}
+export const ScheduleResponse = z.object({
+  site: z.object({ latitudeDeg: z.number(), longitudeDeg: z.number(), timeZone: z.string(), elevationM: z.number() }),
+  from: z.string(),
+  to: z.string(),
+  stepMinutes: z.number().int(),
+  timeZone: z.string(),
+  rowsPerSurface: z.number().int(),
+  irradiance: z.enum(["weather series", "clear sky"]),
+  sky: z.object({ model: z.enum(["perez", "hay-davies", "isotropic"]), albedo: z.number() }),
+  methods: z.record(z.string(), z.string()).describe("The models used, in words, one entry per step of the computation"),
+  surfaces: z.array(ScheduleSurfaceResult),
+  warnings: z.array(z.string()),
+});
+export type ScheduleResponse = z.output<typeof ScheduleResponse>;

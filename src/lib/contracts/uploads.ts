@@ -4,6 +4,9 @@
  * upload forms and the tests.
  */
 
+import { z } from "./zod";
+import { id, instant } from "./wire";
+
 /** Largest file accepted (bytes); a larger one is refused (413) as soon as the limit is passed. */
 export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
 /** The multipart field that carries the file. */
@@ -42,33 +45,52 @@ export interface UploadError {
 }
 
 /** The file as it was kept. */
-export interface UploadInfo {
-  id: string;
-  fileName: string;
-  sizeBytes: number;
-  sha256: string;
-  rowCount: number;
-  createdAt: string;
-  createdBy: string;
-}
+export const UploadInfo = z.object({
+  id,
+  fileName: z.string(),
+  sizeBytes: z.number().int(),
+  sha256: z.string().describe("SHA-256 of the file's bytes, hex"),
+  rowCount: z.number().int(),
+  createdAt: instant,
+  createdBy: z.string(),
+});
+export type UploadInfo = z.output<typeof UploadInfo>;
 
 /** A project's weather series as the API describes it (without the hourly values). */
-export interface WeatherSummary {
-  /** First and last hour of the file (instants, the start of each hour). */
-  from: string;
-  to: string;
-  /** The local dates in the project's time zone that the results cover. */
-  fromDate: string;
-  toDate: string;
-  hours: number;
-  stepMinutes: number;
-  /** Hours with an air temperature. */
-  airTemperatureHours: number;
-  sha256: string;
-  upload: UploadInfo;
-}
+export const WeatherSummary = z.object({
+  from: instant.describe("First hour of the file (the start of the hour)"),
+  to: instant.describe("Last hour of the file (the start of the hour)"),
+  fromDate: z.string().describe("First local date (YYYY-MM-DD) in the project's time zone that the results cover"),
+  toDate: z.string().describe("Last local date (YYYY-MM-DD) that the results cover"),
+  hours: z.number().int(),
+  stepMinutes: z.number().int(),
+  airTemperatureHours: z.number().int().describe("Hours with an air temperature"),
+  sha256: z.string(),
+  upload: UploadInfo,
+});
+export type WeatherSummary = z.output<typeof WeatherSummary>;
 
 /** Which irradiance the figures were computed from. */
-export type IrradianceSource =
-  | { source: "clear sky" }
-  | { source: "weather series"; fileName: string; sha256: string; from: string; to: string; fromDate: string; toDate: string; hours: number };
+export const IrradianceSource = z.union([
+  z.object({ source: z.literal("clear sky") }),
+  z.object({
+    source: z.literal("weather series"),
+    fileName: z.string(),
+    sha256: z.string(),
+    from: z.string(),
+    to: z.string(),
+    fromDate: z.string(),
+    toDate: z.string(),
+    hours: z.number().int(),
+  }),
+]);
+export type IrradianceSource = z.output<typeof IrradianceSource>;
+
+export const WeatherResponse = z.object({ weather: WeatherSummary.nullable().describe("null while the results use the clear sky") });
+export const WeatherCreatedResponse = z.object({
+  from: z.string(),
+  to: z.string(),
+  hours: z.number().int(),
+  sha256: z.string(),
+  weather: WeatherSummary,
+});

@@ -145,6 +145,29 @@ export function parseParams<T>(params: unknown, schema: ZodType<T>): T {
   return parsed.data;
 }
 
+/** What JSON.stringify makes of a value's type: dates become strings (`toJSON`), the rest keeps its shape. */
+export type Jsonified<T> = T extends Date
+  ? string
+  : T extends readonly (infer U)[]
+    ? Jsonified<U>[]
+    : T extends object
+      ? { [K in keyof T]: Jsonified<T[K]> }
+      : T;
+
+/**
+ * `json(data)` for a documented answer: what `data` becomes as JSON must have the type of the response schema in
+ * the contracts (the compiler checks it; nothing is validated at run time), so a handler and the API document
+ * cannot drift apart.
+ */
+export function jsonOf<S extends ZodType, const T>(
+  _schema: S,
+  data: T & (Jsonified<T> extends z.input<S> ? unknown : { "does not fit the response schema": never }),
+  status = 200,
+  headers: HeadersInit = {},
+): Response {
+  return json(data, status, headers);
+}
+
 export function json(data: unknown, status = 200, headers: HeadersInit = {}): Response {
   return new Response(JSON.stringify(data), {
     status,

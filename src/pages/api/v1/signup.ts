@@ -1,6 +1,6 @@
-import { SignUpRequest } from "@/lib/contracts/auth";
+import { SignUpRequest, SignUpResponse } from "@/lib/contracts/auth";
 import { limitSignUp } from "@/lib/server/auth-gate";
-import { endpoint, json } from "@/lib/server/http";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { SIGN_UP_PENDING_MESSAGE, signUp } from "@/lib/server/services/accounts";
 
 /**
@@ -17,8 +17,8 @@ export const POST = endpoint({ auth: "anonymous", body: SignUpRequest, maxBytes:
   const limited = await limitSignUp(request, astroAddress);
   if (limited) return limited;
   const result = await signUp(body);
-  if (result.kind === "pending-verification") return json({ status: "verification-sent", message: SIGN_UP_PENDING_MESSAGE }, 201);
-  const res = json({ userId: result.userId, organizationId: result.organizationId }, 201);
+  if (result.kind === "pending-verification") return jsonOf(SignUpResponse, { status: "verification-sent", message: SIGN_UP_PENDING_MESSAGE }, 201);
+  const res = jsonOf(SignUpResponse, { userId: result.userId, organizationId: result.organizationId }, 201);
   for (const c of result.headers.getSetCookie()) res.headers.append("set-cookie", c);
   return res;
 });

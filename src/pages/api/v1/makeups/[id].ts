@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
-import { MakeupPatchRequest } from "@/lib/contracts/library";
-import { endpoint, json } from "@/lib/server/http";
+import { MakeupDetailResponse, MakeupEntry, MakeupPatchRequest } from "@/lib/contracts/library";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { InvalidError } from "@/lib/server/errors";
 import { deleteMakeup, getMakeup, makeupRevisions, optionsUsingMakeup, updateMakeup } from "@/lib/server/services/library";
 
@@ -16,13 +16,13 @@ export const GET = endpoint({ auth: { makeup: "id", permission: "glazing:read" }
     revision = Number(raw);
   }
   const [entry, revisions, usedBy] = await Promise.all([getMakeup(params.id, revision), makeupRevisions(params.id), optionsUsingMakeup(params.id)]);
-  return json({ ...entry, revisions, usedBy });
+  return jsonOf(MakeupDetailResponse, { ...entry, revisions, usedBy });
 });
 
 /** Saves a new revision; `revision` is the one the change was based on (409 when someone saved meanwhile). */
 export const PATCH = endpoint(
   { auth: { makeup: "id", permission: "glazing:update" }, params, body: MakeupPatchRequest, maxBytes: 64 * 1024, engineErrorsField: "layers" },
-  async ({ params, body, user }) => json(await updateMakeup(params.id, { id: user.id, name: user.name }, body)),
+  async ({ params, body, user }) => jsonOf(MakeupEntry, await updateMakeup(params.id, { id: user.id, name: user.name }, body)),
 );
 
 /** Deletes the make-up and its revisions; 409 naming the options when any uses it. */

@@ -1,6 +1,7 @@
+import { DeliveryStatusResponse } from "@/lib/contracts/deliveries";
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
-import { endpoint, json } from "@/lib/server/http";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { NotFoundError } from "@/lib/server/errors";
 import { deliveryStatus } from "@/lib/server/services/deliveries";
 
@@ -10,5 +11,5 @@ const params = z.object({ id: rowId });
 export const GET = endpoint({ auth: { delivery: "id", permission: "export:create" }, params }, async ({ deliveryId }) => {
   const d = await deliveryStatus(deliveryId);
   if (!d) throw new NotFoundError("No such delivery, or its project is not shared with you");
-  return json({ delivery: d });
+  return jsonOf(DeliveryStatusResponse, { delivery: d });
 });

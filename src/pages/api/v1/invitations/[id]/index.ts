@@ -1,6 +1,7 @@
+import { InvitationSummaryResponse } from "@/lib/contracts/auth";
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
-import { endpoint, json } from "@/lib/server/http";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { NotFoundError } from "@/lib/server/errors";
 import { invitationSummary } from "@/lib/server/services/members";
 
@@ -8,5 +9,5 @@ import { invitationSummary } from "@/lib/server/services/members";
 export const GET = endpoint({ auth: "anonymous", params: z.object({ id: rowId }) }, async ({ params }) => {
   const inv = await invitationSummary(params.id);
   if (!inv) throw new NotFoundError("No such invitation");
-  return json({ invitation: inv });
+  return jsonOf(InvitationSummaryResponse, { invitation: inv });
 });

@@ -1,9 +1,10 @@
+import { ResultsResponse } from "@/lib/contracts/results";
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
 import { queryOf } from "@/lib/contracts/pagination";
 import { ResultsQuery } from "@/lib/contracts/revisions";
 import { QueueFullError } from "@/lib/server/calc-pool";
-import { endpoint, HttpError, json } from "@/lib/server/http";
+import { endpoint, HttpError, jsonOf } from "@/lib/server/http";
 import { projectResults } from "@/lib/server/services/results";
 
 const params = z.object({ id: rowId });
@@ -12,7 +13,7 @@ const params = z.object({ id: rowId });
 export const GET = endpoint({ auth: { project: "id", permission: "project:readAll" }, params }, async ({ project, context }) => {
   const q = ResultsQuery.parse(queryOf(context.url));
   try {
-    return json(await projectResults(project.id, q.year ?? new Date().getFullYear()));
+    return jsonOf(ResultsResponse, await projectResults(project.id, q.year ?? new Date().getFullYear()));
   } catch (err) {
     if (err instanceof QueueFullError)
       throw new HttpError(503, `Every calculation worker is busy; try again in ${err.retryAfterS} s.`, { retryAfterSeconds: err.retryAfterS });

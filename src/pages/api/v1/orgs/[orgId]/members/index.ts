@@ -1,7 +1,8 @@
+import { MembersPageResponse } from "@/lib/contracts/auth";
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
 import { DEFAULT_PAGE_LIMIT, InstantPageQuery, queryOf } from "@/lib/contracts/pagination";
-import { endpoint, json } from "@/lib/server/http";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { invitationsPage, membersPage } from "@/lib/server/services/members";
 
 /**
@@ -14,7 +15,7 @@ export const GET = endpoint(
   async ({ params, context }) => {
     const q = InstantPageQuery.parse(queryOf(context.url));
     const [members, invitations] = await Promise.all([membersPage(params.orgId, q), invitationsPage(params.orgId, { limit: DEFAULT_PAGE_LIMIT })]);
-    return json({
+    return jsonOf(MembersPageResponse, {
       members: members.items,
       nextCursor: members.nextCursor,
       invitations: invitations.items,

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
-import { endpoint, json, problem } from "@/lib/server/http";
+import { PaneImportResponse } from "@/lib/contracts/library";
+import { endpoint, jsonOf, problem } from "@/lib/server/http";
 import { readUploadedFile } from "@/lib/server/upload-body";
 import { validatePanesCsv } from "@/lib/server/uploads/panes-csv";
 import { importPanes } from "@/lib/server/services/uploads";
@@ -25,5 +26,5 @@ export const POST = endpoint({ auth: { org: "orgId", permission: "glazing:create
     );
   }
   const saved = await importPanes(params.orgId, { id: user.id, name: user.name }, file, checked.panes);
-  return json({ panes: saved.panes, upload: saved.upload, sha256: file.sha256 }, 201);
+  return jsonOf(PaneImportResponse, { panes: saved.panes, upload: saved.upload, sha256: file.sha256 }, 201);
 });

@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
 import { DEFAULT_PAGE_LIMIT, queryOf, TextPageQuery } from "@/lib/contracts/pagination";
-import { ShareRequest } from "@/lib/contracts/projects";
-import { endpoint, json } from "@/lib/server/http";
+import { ShareRequest, SharesPageResponse } from "@/lib/contracts/projects";
+import { endpoint, jsonOf } from "@/lib/server/http";
 import { shareProject, sharesPage } from "@/lib/server/services/projects";
 
 const params = z.object({ id: rowId });
@@ -12,7 +12,7 @@ export const GET = endpoint(
   { auth: { project: "id", permission: "project:share", action: "manage who sees this project" }, params },
   async ({ project, context }) => {
     const page = await sharesPage(project, TextPageQuery.parse(queryOf(context.url)));
-    return json({ shares: page.items, nextCursor: page.nextCursor });
+    return jsonOf(SharesPageResponse, { shares: page.items, nextCursor: page.nextCursor });
   },
 );
 
@@ -21,6 +21,6 @@ export const POST = endpoint(
   async ({ project, body, user }) => {
     await shareProject(project, body.memberId, user.id);
     const page = await sharesPage(project, { limit: DEFAULT_PAGE_LIMIT });
-    return json({ shares: page.items, nextCursor: page.nextCursor }, 201);
+    return jsonOf(SharesPageResponse, { shares: page.items, nextCursor: page.nextCursor }, 201);
   },
 );

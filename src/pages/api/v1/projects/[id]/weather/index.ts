@@ -1,6 +1,7 @@
+import { WeatherCreatedResponse, WeatherResponse } from "@/lib/contracts/uploads";
 import { z } from "zod";
 import { rowId } from "@/lib/contracts/common";
-import { endpoint, json, problem } from "@/lib/server/http";
+import { endpoint, problem, jsonOf } from "@/lib/server/http";
 import { readUploadedFile } from "@/lib/server/upload-body";
 import { validateWeatherCsv } from "@/lib/server/uploads/weather-csv";
 import { deleteWeather, saveWeather, weatherOf } from "@/lib/server/services/uploads";
@@ -9,7 +10,7 @@ const params = z.object({ id: rowId });
 
 /** The project's weather series (period, hours, file and SHA-256), or `weather: null` when its results use clear sky. */
 export const GET = endpoint({ auth: { project: "id", permission: "project:readAll" }, params }, async ({ project }) =>
-  json({ weather: await weatherOf(project.id) }),
+  jsonOf(WeatherResponse, { weather: await weatherOf(project.id) }),
 );
 
 /**
@@ -30,7 +31,7 @@ export const POST = endpoint({ auth: { project: "id", permission: "project:updat
     );
   }
   const weather = await saveWeather(project, { id: user.id, name: user.name }, file, checked.weather);
-  return json({ from: weather.from, to: weather.to, hours: weather.hours, sha256: weather.sha256, weather }, 201);
+  return jsonOf(WeatherCreatedResponse, { from: weather.from, to: weather.to, hours: weather.hours, sha256: weather.sha256, weather }, 201);
 });
 
 /** Removes the weather series: the results use the clear-sky model again. */
