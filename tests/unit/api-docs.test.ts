@@ -6,10 +6,10 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
 import Ajv2020 from "ajv/dist/2020.js";
-import { ROUTES, routeKey } from "@/lib/auth/route-table";
+import { keyScope, ROUTES, routeKey } from "@/lib/auth/route-table";
 import { OPERATIONS, TAGS, operationKey, pathParams } from "@/lib/api-docs/operations";
 import { buildOpenApi, documentedRoutes, DIALECT, type JsonSchema, type OpenApiOperation } from "@/lib/api-docs/openapi";
-import { exportedMethods } from "./route-table.test";
+import { exportedMethods } from "./fixtures/route-files";
 
 const doc = buildOpenApi();
 const V1 = join(import.meta.dirname, "../../src/pages/api/v1");
@@ -81,12 +81,14 @@ describe("every route under /api/v1 is documented", () => {
     }
   });
 
-  it("anonymous routes need no credentials; every other names the session cookie and the API key", () => {
+  it("anonymous routes need no credentials; session-only routes the session cookie; every other the cookie or an API key of the scope the route table gives", () => {
     for (const row of documentedRoutes()) {
       const op = opAt(row.method, row.path)!;
+      const scope = keyScope(row);
       if (row.auth === "anonymous") expect(op.security, routeKey(row)).toEqual([]);
       else {
-        expect(op.security, routeKey(row)).toEqual([{ sessionCookie: [] }, { bearerAuth: [] }]);
+        expect(op.security, routeKey(row)).toEqual(scope === "session-only" ? [{ sessionCookie: [] }] : [{ sessionCookie: [] }, { bearerAuth: [] }]);
+        expect(op["x-paneray-key-scope"], routeKey(row)).toBe(scope);
         expect(Object.keys(op.responses), routeKey(row)).toContain("401");
       }
       if (typeof row.auth === "object") expect(Object.keys(op.responses), routeKey(row)).toContain("404");

@@ -1,38 +1,11 @@
 // The route table (src/lib/auth/route-table.ts) against the route files: every file under src/pages/api and
 // every method it exports has exactly one row, and each row's rule is the one the endpoint declares.
-import { readdirSync, readFileSync } from "node:fs";
-import { join, relative } from "node:path";
+import { readFileSync } from "node:fs";
+import { relative } from "node:path";
 import { describe, expect, it } from "vitest";
 import { keyScope, routeOfPattern, ROUTES, routeKey, scopeAllows, type RouteEntry } from "@/lib/auth/route-table";
 
-const API_DIR = join(import.meta.dirname, "../../src/pages/api");
-const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE", "OPTIONS", "HEAD", "ALL"];
-
-function routeFiles(dir: string): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
-    e.isDirectory() ? routeFiles(join(dir, e.name)) : /\.(ts|js|mjs)$/.test(e.name) ? [join(dir, e.name)] : [],
-  );
-}
-
-/** The exported methods of a route file, each with the source of its export statement. */
-export function exportedMethods(source: string): Map<string, string> {
-  const out = new Map<string, string>();
-  const parts = source.split(/^export\s+(?:const|async\s+function|function)\s+/m).slice(1);
-  for (const part of parts) {
-    const name = /^([A-Z]+)\b/.exec(part)?.[1];
-    if (name && METHODS.includes(name)) out.set(name, part);
-  }
-  for (const m of source.matchAll(/^export\s*\{([^}]*)\}/gm)) {
-    for (const n of m[1]!.split(",").map((s) =>
-      s
-        .trim()
-        .split(/\s+as\s+/)
-        .pop()!,
-    ))
-      if (METHODS.includes(n)) out.set(n, "");
-  }
-  return out;
-}
+import { API_DIR, exportedMethods, routeFiles } from "./fixtures/route-files";
 
 const files = routeFiles(API_DIR).map((f) => ({ file: relative(API_DIR, f).split("\\").join("/"), source: readFileSync(f, "utf8") }));
 const found = files.flatMap(({ file, source }) => [...exportedMethods(source)].map(([method, code]) => ({ file, method, code })));
