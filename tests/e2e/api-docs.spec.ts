@@ -4,7 +4,7 @@
 import { expect, test, type Page } from "@playwright/test";
 import { ANONYMOUS, call } from "./api-actors";
 
-type Doc = { paths: Record<string, Record<string, { operationId: string; security: unknown[] }>> };
+type Doc = { paths: Record<string, Record<string, { operationId: string; security: Record<string, unknown>[] }>> };
 const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
 
 test("every operation of the document is on the page with its curl and fetch examples", async ({ page }) => {
@@ -29,10 +29,17 @@ test("every operation of the document is on the page with its curl and fetch exa
     const base = op.path.split("{")[0]!;
     expect(curl, op.operationId).toContain(base);
     expect(fetchCode, op.operationId).toContain(`await fetch("`);
-    if (op.security.length) {
+    if (op.security.some((s) => "bearerAuth" in s)) {
       expect(curl, op.operationId).toContain('-H "Authorization: Bearer $PANERAY_KEY"');
       expect(fetchCode, op.operationId).toContain("Authorization: `Bearer ${process.env.PANERAY_KEY}`");
-    } else expect(curl).not.toContain("Authorization");
+    } else {
+      // Anonymous routes need nothing; session-only ones the session cookie, never a key.
+      expect(curl, op.operationId).not.toContain("Authorization");
+      if (op.security.length) {
+        expect(curl, op.operationId).toContain("PANERAY_SESSION_COOKIES");
+        expect(fetchCode, op.operationId).toContain("API keys cannot call this");
+      }
+    }
   }
   // The field table of a request body, nested fields included.
   const glazing = page.locator('[data-operation="postCalcGlazing"]');

@@ -67,7 +67,13 @@ import {
   WeatherCreatedResponse,
   WeatherResponse,
 } from "@/lib/contracts/uploads";
-import { ApiKeyCreatedResponse, ApiKeyCreateRequest, ApiKeyListResponse, ApiKeyRevokedResponse, OrganizationHistoryResponse } from "@/lib/contracts/api-keys";
+import {
+  ApiKeyCreatedResponse,
+  ApiKeyCreateRequest,
+  ApiKeyListResponse,
+  ApiKeyRevokedResponse,
+  OrganizationHistoryResponse,
+} from "@/lib/contracts/api-keys";
 import * as ex from "./examples";
 import { API_DOCUMENT_VERSION } from "./version";
 
