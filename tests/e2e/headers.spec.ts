@@ -167,3 +167,24 @@ test("API writes from another site are refused and change nothing; same-origin a
   expect(plain.status()).toBe(200);
   expect((await request.delete(`/api/v1/projects/${created.id}`, { headers: { origin: origin() } })).status()).toBeLessThan(300);
 });
+
+test("text answers are compressed as the client accepts; workbooks go out as they are", async ({ request }) => {
+  for (const encoding of ["br", "gzip"]) {
+    const res = await fetch(`${origin()}/docs/api`, { headers: { "accept-encoding": encoding } });
+    expect(res.headers.get("content-encoding"), encoding).toBe(encoding);
+    expect(res.headers.get("vary")).toMatch(/accept-encoding/i);
+    expect(res.headers.get("content-security-policy")).toContain("frame-ancestors 'none'");
+    expect(await res.text()).toContain("Paneray API reference");
+  }
+  const plain = await fetch(`${origin()}/api/v1/openapi.json`, { headers: { "accept-encoding": "identity" } });
+  expect(plain.headers.get("content-encoding")).toBeNull();
+  expect((await plain.json()).openapi).toBe("3.1.0");
+
+  await apiSignIn(request);
+  const projects = (await (await request.get("/api/v1/projects")).json()) as { organizations: { projects: { id: string; name: string }[] }[] };
+  const id = projects.organizations[0]!.projects.find((p) => p.name === DEMO_PROJECTS[0].name)!.id;
+  const book = await request.get(`/api/v1/projects/${id}/workbook?revision=A`, { headers: { "accept-encoding": "br, gzip" } });
+  expect(book.status()).toBe(200);
+  expect(book.headers()["content-encoding"]).toBeUndefined();
+  expect((await book.body()).subarray(0, 2).toString()).toBe("PK"); // a zip file, as sent
+});
