@@ -28,7 +28,7 @@ import { deg } from "./angles";
 const cosd = (d: number): number => Math.cos((d * Math.PI) / 180);
 
 /** One clear-sky hour on a surface: the sky, the incidence, each sky model and the totals. */
-function transpositionValues(ex: TranspositionInput): Record<string, number> {
+export function transpositionValues(ex: TranspositionInput): Record<string, number> {
   const e0 = extraterrestrialIrradianceSpencer1971(ex.dayOfYear, ex.solarConstantWPerM2);
   const am = relativeAirMassKastenYoung1989(ex.zenithDeg);
   const sky = clearSkyIneichenPerez2002({
