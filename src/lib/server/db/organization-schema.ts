@@ -2,10 +2,10 @@
  * What belongs to an organisation as a whole: its API keys (for scripts and integrations) and its history
  * (who changed what and when, e.g. a key created or revoked).
  */
-import { check, index, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { check, index, pgTable, text, timestamp } from "drizzle-orm/pg-core";
 import { sql } from "drizzle-orm";
 import { organization, user } from "./auth-schema";
-import { createdAt, id } from "./columns";
+import { createdAt, eventColumns, id } from "./columns";
 
 /**
  * An organisation's API key. Only the SHA-256 of the key is stored (`key_hash`, hex); `start` keeps the
@@ -44,14 +44,7 @@ export const organizationEvent = pgTable(
     organizationId: text("organization_id")
       .notNull()
       .references(() => organization.id, { onDelete: "cascade" }),
-    actorId: text("actor_id").references(() => user.id, { onDelete: "set null" }),
-    actorName: text("actor_name").notNull(),
-    /** e.g. "api-key.created", "api-key.revoked". */
-    kind: text("kind").notNull(),
-    /** One readable sentence, e.g. "Created the API key “Nightly export” (read)". */
-    summary: text("summary").notNull(),
-    detail: jsonb("detail"),
-    createdAt: createdAt(),
+    ...eventColumns(),
   },
   (t) => [index("organization_event_org_idx").on(t.organizationId, t.createdAt.desc(), t.id)],
 );

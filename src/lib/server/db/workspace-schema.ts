@@ -8,7 +8,7 @@ import { index, integer, jsonb, pgTable, text, timestamp, unique, uniqueIndex, c
 import { user } from "./auth-schema";
 import { facade, project } from "./app-schema";
 import { makeup, makeupRevision } from "./library-schema";
-import { createdAt, id, updatedAt } from "./columns";
+import { createdAt, eventColumns, id, updatedAt } from "./columns";
 
 export const OPTION_STATUSES = ["proposed", "approved", "rejected"] as const;
 export type OptionStatus = (typeof OPTION_STATUSES)[number];
@@ -133,14 +133,7 @@ export const projectEvent = pgTable(
     projectId: text("project_id")
       .notNull()
       .references(() => project.id, { onDelete: "cascade" }),
-    actorId: text("actor_id").references(() => user.id, { onDelete: "set null" }),
-    actorName: text("actor_name").notNull(),
-    /** e.g. "option.created", "option.approved", "requirements.updated", "revision.issued". */
-    kind: text("kind").notNull(),
-    /** One readable sentence, e.g. "Approved “Clear triple” for North". */
-    summary: text("summary").notNull(),
-    detail: jsonb("detail"),
-    createdAt: createdAt(),
+    ...eventColumns(),
   },
   (t) => [index("project_event_project_idx").on(t.projectId, t.createdAt.desc(), t.id)],
 );
