@@ -1,11 +1,11 @@
 // The API reference page /docs/api: public, every operation of the document (GET /api/v1/openapi.json) with its
 // curl and fetch examples (the key in `Authorization: Bearer $PANERAY_KEY`), a working copy button, linked from
 // the footer, and no horizontal overflow at 1440 and 390 px (code blocks scroll inside).
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import { ANONYMOUS, call } from "./api-actors";
+import { overflow } from "./helpers";
 
 type Doc = { paths: Record<string, Record<string, { operationId: string; security: Record<string, unknown>[] }>> };
-const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
 
 test("every operation of the document is on the page with its curl and fetch examples", async ({ page }) => {
   const doc = (await call(ANONYMOUS, "GET", "/api/v1/openapi.json")).body as Doc;

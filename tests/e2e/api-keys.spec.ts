@@ -1,11 +1,10 @@
 // The owners' API keys page: a key is made, shown once, works as `Authorization: Bearer` from a script, is
 // listed by its start, revoked after an in-page confirmation (refused at once), and the organisation's history
 // shows both events. Other roles get the forbidden page. Both widths without horizontal overflow.
-import { expect, test, type Page } from "@playwright/test";
-import { DEMO_ORGANIZATION, DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+import { expect, test } from "@playwright/test";
+import { DEMO_ORGANIZATION, DEMO_PASSWORD, demoUser, signIn, overflow } from "./helpers";
 
 const PAGE = `/orgs/${DEMO_ORGANIZATION.slug}/api-keys`;
-const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
 const pane6 = { kind: "pane", thicknessMm: 6, refractiveIndex: 1.52, absorptionPerMm: 0.02 };
 
 /** A request as a script makes it: the key in the Authorization header, no cookie, no Origin. */

@@ -60,3 +60,18 @@ export async function confirmEmail(via: Page | APIRequestContext, email: string)
   if ("goto" in via) await via.goto(link);
   else expect((await via.get(link)).ok()).toBe(true);
 }
+
+/** How far the page is wider than the window, px (0: no horizontal overflow). */
+export const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+
+/** The on-screen size of the smallest visible chart label of the page (SVG text scaled by its drawing), px. */
+export const smallestChartLabel = (page: Page) =>
+  page.evaluate(() => {
+    let smallest = Infinity;
+    for (const t of document.querySelectorAll<SVGTextElement>("main svg text")) {
+      const m = t.getScreenCTM();
+      if (!m || !t.textContent?.trim() || t.getBoundingClientRect().width === 0) continue;
+      smallest = Math.min(smallest, Number.parseFloat(getComputedStyle(t).fontSize) * Math.hypot(m.a, m.b));
+    }
+    return smallest;
+  });

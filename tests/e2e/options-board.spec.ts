@@ -6,7 +6,7 @@
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import type { OptionEntry } from "@/lib/contracts/options";
 import { call, signInDemo, type Caller } from "./api-actors";
-import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+import { DEMO_PASSWORD, demoUser, signIn, overflow } from "./helpers";
 import { lightText, makeupLight } from "@/lib/calc/makeup-light";
 import { clearPane, closeWorkspaceRows, deleteMakeupRows, doubleUnit, insertMakeupRow, insertOptionRow, tintedPane } from "./workspace-rows";
 
@@ -66,7 +66,6 @@ async function phone(browser: Browser): Promise<Page> {
 
 const optionsNow = async () => ((await call(consultant, "GET", `/api/v1/projects/${projectId}/options`)).body as { options: OptionEntry[] }).options;
 const card = (page: Page, facade: string) => page.locator(`[data-testid="facade-options"][data-facade="${facade}"]`);
-const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
 
 /** The row shows the make-up's name, description, revision and the stored values the API gives. */
 async function expectRowShows(page: Page, facade: string, o: OptionEntry) {

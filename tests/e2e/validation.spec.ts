@@ -2,24 +2,10 @@
 // domain, case and value with a pass; the CSV download parses with one row per expected value; the footer and
 // the results and revision pages link to it; it fits 390 px with chart labels of 10 px or more. Screenshots of
 // 1440 and 390 px go to test-results/.
-import { expect, test, type Page } from "@playwright/test";
+import { expect, test } from "@playwright/test";
 import Papa from "papaparse";
 import type { ValidationReport } from "@/lib/validation/report";
-import { DEMO_PASSWORD, DEMO_PROJECTS, demoUser, signIn } from "./helpers";
-
-const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
-
-/** The on-screen size of the smallest visible chart label, px. */
-const smallestChartLabel = (page: Page) =>
-  page.evaluate(() => {
-    let smallest = Infinity;
-    for (const t of document.querySelectorAll<SVGTextElement>("main svg text")) {
-      const m = t.getScreenCTM();
-      if (!m || !t.textContent?.trim() || t.getBoundingClientRect().width === 0) continue;
-      smallest = Math.min(smallest, Number.parseFloat(getComputedStyle(t).fontSize) * Math.hypot(m.a, m.b));
-    }
-    return smallest;
-  });
+import { DEMO_PASSWORD, DEMO_PROJECTS, demoUser, signIn, overflow, smallestChartLabel } from "./helpers";
 
 let report: ValidationReport;
 

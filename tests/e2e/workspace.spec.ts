@@ -5,7 +5,7 @@
 // have no horizontal overflow at 390 px.
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import type { OptionEntry } from "@/lib/contracts/options";
-import { DEMO_PASSWORD, demoUser, signIn } from "./helpers";
+import { DEMO_PASSWORD, demoUser, signIn, overflow, smallestChartLabel } from "./helpers";
 
 const stamp = Date.now().toString(36);
 const CLEAR = `Browser clear double ${stamp}`;
@@ -19,8 +19,6 @@ async function as(browser: Browser, role: "consultant" | "architect" | "client",
   await signIn(page, demoUser(role).email, DEMO_PASSWORD);
   return page;
 }
-
-const overflow = (page: Page) => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
 
 test.describe.configure({ mode: "serial" });
 
@@ -166,18 +164,6 @@ test("the workspace pages have no horizontal overflow at 390 px", async ({ brows
     expect(await overflow(page), path).toBe(0);
   }
 });
-
-/** The on-screen size of the smallest chart label of the page (SVG text scaled by its drawing), px. */
-const smallestChartLabel = (page: Page) =>
-  page.evaluate(() => {
-    let smallest = Infinity;
-    for (const t of document.querySelectorAll<SVGTextElement>("main svg text")) {
-      const m = t.getScreenCTM();
-      if (!m || !t.textContent?.trim() || t.getBoundingClientRect().width === 0) continue;
-      smallest = Math.min(smallest, Number.parseFloat(getComputedStyle(t).fontSize) * Math.hypot(m.a, m.b));
-    }
-    return smallest;
-  });
 
 test("chart and drawing labels are at least 10 px at 390 px wide", async ({ browser }) => {
   const page = await as(browser, "consultant", 390);
