@@ -47,7 +47,9 @@ test("every operation of the document is on the page with its curl and fetch exa
   await expect(glazing.getByRole("cell", { name: "hemispherical", exact: true })).toBeVisible();
   expect(await overflow(page)).toBeLessThanOrEqual(0);
   // The copy buttons hydrate under the Content-Security-Policy (no inline scripts or styles refused).
-  await expect(page.locator('[data-operation="postCalcSchedule"]').getByRole("button", { name: /Copy the curl example/ })).toBeEnabled();
+  const scheduleCopy = page.locator('[data-operation="postCalcSchedule"]').getByRole("button", { name: /Copy the curl example/ });
+  await scheduleCopy.scrollIntoViewIfNeeded(); // islands hydrate when they come into view
+  await expect(scheduleCopy).toBeEnabled();
   expect(consoleErrors).toEqual([]);
   await page.screenshot({ path: test.info().outputPath("api-1440.png") });
   await glazing.screenshot({ path: test.info().outputPath("api-1440-glazing.png") });
@@ -63,6 +65,7 @@ test("the page is linked from the footer, copies a snippet and does not overflow
   const card = page.locator('[data-operation="getProjectsByIdWorkbook"]');
   await card.scrollIntoViewIfNeeded();
   const copy = card.getByRole("button", { name: /Copy the curl example/ });
+  await expect(copy).toBeEnabled(); // the island has hydrated
   await copy.click();
   await expect(copy).toHaveText("Copied");
   expect(await page.evaluate(() => navigator.clipboard.readText())).toBe(await card.locator('[data-snippet="curl"]').textContent());
