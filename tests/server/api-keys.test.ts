@@ -236,6 +236,8 @@ describe("Authorization: Bearer", () => {
     const asked = await withKey(key, projectsRoute.GET, "/api/v1/projects", `/api/v1/projects?organizationId=${b.organizationId}`, {});
     expect((asked.body as { organizations: unknown[] }).organizations).toEqual([]);
     const me = await withKey(key, meRoute.GET, "/api/v1/me", "/api/v1/me", {});
+    // The caller every handler sees (and records in histories and comments) is the maker with the key's name.
+    expect((me.body as { user: { name: string } }).user.name).toBe(`${a.caller.name} (API key “Script (read-write)”)`);
     expect((me.body as { memberships: { organizationId: string }[] }).memberships.map((m) => m.organizationId)).toEqual([a.organizationId]);
     // A session of the same person still sees both organisations.
     const session = await callRoute(projectsRoute.GET, a.caller, "/api/v1/projects", {});

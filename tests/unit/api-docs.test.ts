@@ -99,6 +99,19 @@ describe("every route under /api/v1 is documented", () => {
   });
 });
 
+describe("the statuses of API-key refusals are documented", () => {
+  it("a route a narrower key may not call lists 403; a session-only route lists 403; a route open to keys lists 429", () => {
+    for (const row of documentedRoutes()) {
+      const op = opAt(row.method, row.path)!;
+      const statuses = Object.keys(op.responses);
+      const scope = keyScope(row);
+      if (scope === "session-only" || scope !== "read") expect(statuses, routeKey(row)).toContain("403");
+      if (row.auth !== "anonymous" && scope !== "session-only") expect(statuses, routeKey(row)).toContain("429");
+      expect(statuses, `${routeKey(row)}: a bad key answers 401 on every route`).toContain("401");
+    }
+  });
+});
+
 describe("the document is OpenAPI 3.1", () => {
   it("has the required top-level members", () => {
     expect(doc.openapi).toBe("3.1.0");

@@ -69,8 +69,16 @@ export function errorStatuses(route: RouteEntry, op: Operation): Record<number, 
   if (op.body?.kind === "json" || op.query)
     out[400] = op.body ? "The body (or the query) is invalid; `errors` names each field" : "The query is invalid; `errors` names each field";
   if (op.body?.kind === "multipart") out[400] = "The file is invalid";
-  if (auth !== "anonymous") out[401] = "Not signed in, or the API key is unknown, revoked or outside its scope";
-  if (typeof auth === "object" && auth.permission) out[403] = "The caller's role does not allow this";
+  const scope = keyScope(route);
+  out[401] =
+    auth === "anonymous"
+      ? "An API key was sent and it is unknown or revoked (the route itself needs none)"
+      : "Not signed in, or the API key is unknown or revoked (or its maker is no longer an owner there)";
+  const refusals: string[] = [];
+  if (typeof auth === "object" && auth.permission) refusals.push("the caller's role does not allow this");
+  if (scope === "session-only") refusals.push("an API key was sent: this route needs a signed-in session");
+  else if (scope !== "read") refusals.push(`an API key whose scope is narrower than ${scope}`);
+  if (refusals.length) out[403] = refusals.join("; or ").replace(/^./, (c) => c.toUpperCase());
   if (typeof auth === "object") out[404] = "Not found, or not visible to the caller";
   else if (op.params) out[404] = "Not found";
   if (op.body) {
@@ -78,7 +86,11 @@ export function errorStatuses(route: RouteEntry, op: Operation): Record<number, 
       op.body.kind === "multipart" ? `The file is larger than ${MAX_UPLOAD_BYTES / 1024 / 1024} MB` : "The body is larger than the route's limit";
     out[415] = op.body.kind === "multipart" ? `The body is not multipart/form-data with a field "${UPLOAD_FIELD}"` : "The body is not JSON";
   }
-  if (op.rateLimited) out[429] = `Too many requests (${op.rateLimited}); \`Retry-After\` says when to try again`;
+  const limits = [
+    ...(op.rateLimited ? [op.rateLimited] : []),
+    ...(auth !== "anonymous" && scope !== "session-only" ? ["an API key's requests per minute"] : []),
+  ];
+  if (limits.length) out[429] = `Too many requests (${limits.join("; or ")}); \`Retry-After\` says when to try again`;
   for (const [s, why] of Object.entries(op.errors ?? {})) out[Number(s)] = out[Number(s)] ? `${out[Number(s)]}; or: ${why}` : why!;
   out[503] = "The database or the calculation workers are unavailable for a moment; nothing was changed. `Retry-After` says when to try again";
   return out;

@@ -2,7 +2,8 @@
 import { z } from "./zod";
 import { name, rowId } from "./common";
 import { MakeupValues } from "./results";
-import { id, instant } from "./wire";
+import { LayerShape } from "./glazing";
+import { docShape, id, instant } from "./wire";
 
 export const OptionCreateRequest = z.object({ facadeId: rowId, makeupId: rowId, name: name("Option name", 120) });
 export type OptionCreateRequest = z.infer<typeof OptionCreateRequest>;
@@ -42,7 +43,7 @@ export const OptionEntry = z.object({
   makeupRevision: z.number().int().describe("The make-up revision the option points at"),
   latestMakeupRevision: z.number().int().describe("The library's newest revision; greater than makeupRevision when the library changed since"),
   description: z.string(),
-  layers: z.array(z.unknown()),
+  layers: docShape(z.array(z.unknown()), z.array(LayerShape).describe("The make-up's layers, outdoors first")),
   values: MakeupValues,
   createdAt: instant,
   updatedAt: instant,

@@ -3,7 +3,7 @@ import { name, optionalText, rowId, timeZone } from "./common";
 import { finite, positive } from "./numbers";
 import { shadingDevices } from "./schedule";
 import { ROLE_NAMES } from "@/lib/auth/roles";
-import { id, instant, nextCursor } from "./wire";
+import { docShape, id, instant, nextCursor } from "./wire";
 import { InstantPageQuery } from "./pagination";
 
 /** An empty number field (a form's NaN, "" or null) is "not given". */
@@ -128,10 +128,13 @@ export const FacadeView = z.object({
   glazedAreaM2: z.number().nullable(),
   windowWidthM: z.number().nullable(),
   windowHeightM: z.number().nullable(),
-  shading: z
-    .looseObject({ overhang: z.unknown().optional(), fins: z.unknown().optional(), horizonDeg: z.number().optional() })
-    .nullable()
-    .describe("Shading devices around the typical window; null = none"),
+  shading: docShape(
+    z
+      .looseObject({ overhang: z.unknown().optional(), fins: z.unknown().optional(), horizonDeg: z.number().optional() })
+      .nullable()
+      .describe("Shading devices around the typical window; null = none"),
+    FacadeShading.nullable().describe("Shading devices around the typical window; null = none"),
+  ),
   position: z.number().int(),
   createdAt: instant,
   updatedAt: instant,

@@ -1,9 +1,10 @@
 /** Wire types of GET /api/v1/projects/:id/results and /compare, and of issued revisions and their snapshots. */
 import { z } from "./zod";
-import { GlazingAngleRow, GlazingValues, LightSummary } from "./glazing";
+import { GlazingAngleRow, GlazingValues, LayerShape, LightSummary } from "./glazing";
+import { Shading } from "./schedule";
 import { IrradianceSource } from "./uploads";
 import { Limits, RequirementFlag } from "./requirements";
-import { id, instant } from "./wire";
+import { docShape, id, instant } from "./wire";
 
 /** What a saved make-up revision stores as its values (computed when it is saved). */
 export const MakeupValues = z.object({
@@ -22,7 +23,9 @@ const monthly = z
   .object({ transmittedKWhm2: z.array(z.number()), solarGainKWhm2: z.array(z.number()) })
   .describe("Twelve monthly sums, January first, kWh/m²");
 /** A façade's window with its shading devices as the engine took them; null = unshaded. */
-const shading = z.unknown().optional().describe("The façade's typical window and shading devices as the engine took them (null = unshaded)");
+const shading = docShape(z.unknown(), Shading.nullable())
+  .optional()
+  .describe("The façade's typical window and shading devices as the engine took them (null or absent = unshaded)");
 
 export const OptionResult = z.object({
   optionId: id,
@@ -92,7 +95,7 @@ export const RevisionFacadeSnapshot = z.object({
   makeupRevision: z.number().int(),
   makeupName: z.string(),
   description: z.string(),
-  layers: z.array(z.unknown()).describe("The make-up's layers as POST /calc/glazing takes them"),
+  layers: docShape(z.array(z.unknown()), z.array(LayerShape).describe("The make-up's layers as POST /calc/glazing takes them")),
   values: MakeupValues,
   annual,
   peak,
@@ -135,7 +138,7 @@ export const CompareOption = OptionResult.extend({
   facadeName: z.string(),
   angles: z.array(GlazingAngleRow).describe("Angular values of the stored layers, 0° to 90° by 5°"),
   surface: z
-    .object({ name: z.string(), azimuthDeg: z.number(), tiltDeg: z.number(), layers: z.array(z.unknown()), shading })
+    .object({ name: z.string(), azimuthDeg: z.number(), tiltDeg: z.number(), layers: docShape(z.array(z.unknown()), z.array(LayerShape)), shading })
     .describe("The surface as POST /calc/schedule takes it"),
 });
 export type CompareOption = z.output<typeof CompareOption>;
