@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
@@ -50,6 +50,13 @@ function ApiKeysManager({ organizationId, initialKeys, initialEvents }: Props) {
     ]);
 
   const [created, setCreated] = useState<ApiKeyCreatedResponse | null>(null);
+  // The new key appears below the form: bring it into view and move the focus there (on a phone it is off screen).
+  const newKey = useRef<HTMLElement>(null);
+  useEffect(() => {
+    if (!created) return;
+    newKey.current?.scrollIntoView({ block: "center" });
+    newKey.current?.focus({ preventScroll: true });
+  }, [created]);
   const [copied, setCopied] = useState(false);
   const [confirming, setConfirming] = useState<string | null>(null);
   const [message, setMessage] = useState<{ kind: "ok" | "error"; text: string } | null>(null);
@@ -126,7 +133,7 @@ function ApiKeysManager({ organizationId, initialKeys, initialEvents }: Props) {
       </section>
 
       {created && (
-        <section className="notice space-y-2" data-testid="new-key" aria-live="polite">
+        <section ref={newKey} tabIndex={-1} className="notice space-y-2" data-testid="new-key" aria-live="polite">
           <p className="font-bold">
             The key “{created.apiKey.name}” ({SCOPE_LABELS[created.apiKey.scope]})
           </p>
