@@ -39,6 +39,8 @@ async function orgId(page: Page): Promise<string> {
 test("the consultant saves two make-ups to the library from the composer", async ({ browser }) => {
   const page = await as(browser, "consultant");
   await page.goto("/glazing");
+  // Typing into the form before its island is live would be lost when it hydrates.
+  await expect(page.getByRole("button", { name: "Save to library" })).toBeEnabled();
   for (const [preset, name] of [
     ["Double clear 4 | 16 air | 4", CLEAR],
     ["Double 4 | 16 argon 90 % | 4 coated (face 3)", LOWE],

@@ -2,6 +2,7 @@ import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api, ApiError } from "@/lib/client/api";
 import { isConflict, withQueryClient } from "@/lib/client/query";
+import { useHydrated } from "@/components/forms/useHydrated";
 import type { MakeupEntry } from "@/lib/contracts/library";
 
 /** The make-up being edited, when it came from (or went to) the library. */
@@ -25,6 +26,7 @@ interface Props {
 /** Save the composed make-up to the organisation's library (new, or a new revision of the open one) and open saved ones. */
 function LibraryBar({ organizationId, organizationName, canSave, layers, valid, open, onOpen, onSaved }: Props) {
   const qc = useQueryClient();
+  const hydrated = useHydrated();
   const list = useQuery({
     queryKey: ["makeups", organizationId],
     queryFn: () => api<{ items: MakeupEntry[] }>("GET", `/api/v1/orgs/${organizationId}/makeups?limit=100`),
@@ -136,7 +138,7 @@ function LibraryBar({ organizationId, organizationName, canSave, layers, valid, 
               Save as revision {open.revision + 1}
             </button>
           )}
-          <button type="submit" className={open ? "btn-quiet" : "btn"} disabled={busy}>
+          <button type="submit" className={open ? "btn-quiet" : "btn"} disabled={!hydrated || busy}>
             {open ? "Save as a new make-up" : "Save to library"}
           </button>
         </form>
