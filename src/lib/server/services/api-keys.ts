@@ -9,7 +9,7 @@
  * Nothing about keys is cached: a revoked key is refused by the very next request.
  */
 import { createHash, randomBytes } from "node:crypto";
-import { and, desc, eq, isNull, lt, or, sql } from "drizzle-orm";
+import { and, eq, isNull, lt, or, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { member, orgApiKey, user, type OrgApiKey } from "@/lib/server/db/schema";
 import { ConflictError, NotFoundError } from "@/lib/server/errors";
@@ -19,6 +19,7 @@ import { roleCan } from "@/lib/auth/roles";
 import type { KeyScope } from "@/lib/auth/route-table";
 import { API_KEY_PREFIX, API_KEY_START_LENGTH, type ApiKeyCreateRequest, type ApiKeyEntry } from "@/lib/contracts/api-keys";
 import { pageOf, type Page, type PageQuery } from "@/lib/contracts/pagination";
+import { instantKey, newestFirst, olderThanCursor } from "@/lib/server/db/newest-first";
 import type { Actor } from "./history";
 import { recordOrgEvent } from "./org-history";
 
@@ -151,21 +152,14 @@ export async function revokeApiKey(organizationId: string, apiKeyId: string, act
   });
 }
 
-const createdKey = sql<string>`to_char(${orgApiKey.createdAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`;
-
 /** One page of the organisation's keys, newest first, revoked ones included. */
 export async function apiKeysOf(organizationId: string, q: PageQuery): Promise<Page<ApiKeyEntry>> {
-  const after = q.cursor
-    ? or(
-        lt(orgApiKey.createdAt, sql`${q.cursor.key}::timestamptz`),
-        and(eq(orgApiKey.createdAt, sql`${q.cursor.key}::timestamptz`), lt(orgApiKey.id, q.cursor.id)),
-      )
-    : undefined;
+  const after = olderThanCursor(orgApiKey.createdAt, orgApiKey.id, q.cursor);
   const rows = await db
-    .select({ k: orgApiKey, key: createdKey })
+    .select({ k: orgApiKey, key: instantKey(orgApiKey.createdAt) })
     .from(orgApiKey)
     .where(and(eq(orgApiKey.organizationId, organizationId), after))
-    .orderBy(desc(orgApiKey.createdAt), desc(orgApiKey.id))
+    .orderBy(...newestFirst(orgApiKey.createdAt, orgApiKey.id))
     .limit(q.limit + 1);
   const page = pageOf(rows, q.limit, (r) => ({ key: r.key, id: r.k.id }));
   return { items: page.items.map((r) => apiKeyEntry(r.k)), nextCursor: page.nextCursor };

@@ -9,7 +9,7 @@
  * sending → sent with the Message-ID, or the error and back to queued for the queue's next retry, or failed after
  * the last one. A failure stays on the row; nothing is dropped.
  */
-import { and, asc, desc, eq, inArray, lt, or, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { db, pool } from "@/lib/server/db/client";
 import * as schema from "@/lib/server/db/schema";
@@ -23,6 +23,7 @@ import { DELIVERY_QUEUE, deliveryRetry, queue, sqlOn } from "@/lib/server/jobs/q
 import type { DeliveryMemberChoice, DeliveryRecipient, DeliveryResponse, DeliveryStatus } from "@/lib/contracts/deliveries";
 import type { DeliveryRequestBody } from "@/lib/contracts/deliveries";
 import { pageOf, type Page, type PageQuery } from "@/lib/contracts/pagination";
+import { instantKey, newestFirst, olderThanCursor } from "@/lib/server/db/newest-first";
 import { recordEvent, type Actor } from "./history";
 import type { ProjectRow } from "./access";
 import { workbookFile } from "./workbook";
@@ -159,21 +160,14 @@ export async function createDelivery(p: ProjectRow, actor: Actor, body: Delivery
   }
 }
 
-const createdKey = sql<string>`to_char(${delivery.createdAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`;
-
 /** One page of the project's deliveries, newest first (without attachment bytes). */
 export async function deliveriesOf(projectId: string, q: PageQuery): Promise<Page<DeliveryResponse>> {
-  const after = q.cursor
-    ? or(
-        lt(delivery.createdAt, sql`${q.cursor.key}::timestamptz`),
-        and(eq(delivery.createdAt, sql`${q.cursor.key}::timestamptz`), lt(delivery.id, q.cursor.id)),
-      )
-    : undefined;
+  const after = olderThanCursor(delivery.createdAt, delivery.id, q.cursor);
   const rows = await db
-    .select({ d: summaryColumns, key: createdKey })
+    .select({ d: summaryColumns, key: instantKey(delivery.createdAt) })
     .from(delivery)
     .where(and(eq(delivery.projectId, projectId), after))
-    .orderBy(desc(delivery.createdAt), desc(delivery.id))
+    .orderBy(...newestFirst(delivery.createdAt, delivery.id))
     .limit(q.limit + 1);
   const page = pageOf(rows, q.limit, (r) => ({ key: r.key, id: r.d.id }));
   return { items: page.items.map((r) => summaryResponse(r.d)), nextCursor: page.nextCursor };

@@ -2,10 +2,11 @@
  * The organisation's history: changes to the organisation as a whole (its API keys), who made them and
  * when. Services write an event in the same transaction as the change it records.
  */
-import { and, desc, eq, lt, or, sql } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { organizationEvent } from "@/lib/server/db/schema";
 import { pageOf, type Page, type PageQuery } from "@/lib/contracts/pagination";
+import { instantKey, newestFirst, olderThanCursor } from "@/lib/server/db/newest-first";
 import type { OrganizationEventEntry } from "@/lib/contracts/api-keys";
 import type { Actor } from "./history";
 
@@ -32,21 +33,14 @@ export async function recordOrgEvent(tx: Executor, e: OrgEventInput): Promise<vo
   });
 }
 
-const atKey = sql<string>`to_char(${organizationEvent.createdAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`;
-
 /** One page of the organisation's history, newest first. */
 export async function orgHistoryOf(organizationId: string, q: PageQuery): Promise<Page<OrganizationEventEntry>> {
-  const after = q.cursor
-    ? or(
-        lt(organizationEvent.createdAt, sql`${q.cursor.key}::timestamptz`),
-        and(eq(organizationEvent.createdAt, sql`${q.cursor.key}::timestamptz`), lt(organizationEvent.id, q.cursor.id)),
-      )
-    : undefined;
+  const after = olderThanCursor(organizationEvent.createdAt, organizationEvent.id, q.cursor);
   const rows = await db
-    .select({ e: organizationEvent, key: atKey })
+    .select({ e: organizationEvent, key: instantKey(organizationEvent.createdAt) })
     .from(organizationEvent)
     .where(and(eq(organizationEvent.organizationId, organizationId), after))
-    .orderBy(desc(organizationEvent.createdAt), desc(organizationEvent.id))
+    .orderBy(...newestFirst(organizationEvent.createdAt, organizationEvent.id))
     .limit(q.limit + 1);
   const page = pageOf(rows, q.limit, (r) => ({ key: r.key, id: r.e.id }));
   return {

@@ -3,7 +3,7 @@
  * façade), and the project's history read page by page. Every change records a history event in the
  * same transaction.
  */
-import { and, asc, desc, eq, lt, ne, or, sql } from "drizzle-orm";
+import { and, asc, eq, ne, sql } from "drizzle-orm";
 import { db } from "@/lib/server/db/client";
 import { facade, facadeOption, optionComment, optionDecision, projectEvent, type FacadeOption } from "@/lib/server/db/schema";
 import { ConflictError, InvalidError } from "@/lib/server/errors";
@@ -18,6 +18,7 @@ import type {
   OptionStatusView,
 } from "@/lib/contracts/review";
 import { pageOf, type Page, type PageQuery } from "@/lib/contracts/pagination";
+import { instantKey, newestFirst, olderThanCursor } from "@/lib/server/db/newest-first";
 
 const iso = (d: Date) => d.toISOString();
 
@@ -145,22 +146,14 @@ export async function decide(optionId: string, actor: Actor, req: DecisionReques
   }
 }
 
-/** The event time as the cursor's sort key, to the microsecond. */
-const atKey = sql<string>`to_char(${projectEvent.createdAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`;
-
 /** One page of the project's history, newest first. */
 export async function historyOf(projectId: string, q: PageQuery): Promise<Page<HistoryItem>> {
-  const after = q.cursor
-    ? or(
-        lt(projectEvent.createdAt, sql`${q.cursor.key}::timestamptz`),
-        and(eq(projectEvent.createdAt, sql`${q.cursor.key}::timestamptz`), lt(projectEvent.id, q.cursor.id)),
-      )
-    : undefined;
+  const after = olderThanCursor(projectEvent.createdAt, projectEvent.id, q.cursor);
   const rows = await db
-    .select({ e: projectEvent, key: atKey })
+    .select({ e: projectEvent, key: instantKey(projectEvent.createdAt) })
     .from(projectEvent)
     .where(and(eq(projectEvent.projectId, projectId), after))
-    .orderBy(desc(projectEvent.createdAt), desc(projectEvent.id))
+    .orderBy(...newestFirst(projectEvent.createdAt, projectEvent.id))
     .limit(q.limit + 1);
   const page = pageOf(rows, q.limit, (r) => ({ key: r.key, id: r.e.id }));
   return {
